@@ -1,0 +1,62 @@
+// The Express app factory: used by server/index.ts and by the API tests (supertest).
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
+import path from 'node:path';
+import { existsSync } from 'node:fs';
+import type { Sequelize } from 'sequelize';
+import type { Config } from './config';
+import { initModels } from './models';
+import { requireUser } from './middleware/auth';
+import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { authRoutes } from './routes/auth.routes';
+import { farmsRoutes } from './routes/farms.routes';
+import { fieldsRoutes } from './routes/fields.routes';
+import { fieldImportRoutes } from './routes/field-import.routes';
+
+export type AppOptions = { sequelize: Sequelize; config: Config; clientDir?: string };
+
+export function createApp({ sequelize, config, clientDir }: AppOptions): Express {
+  initModels(sequelize);
+  const app = express();
+  app.set('trust proxy', 'loopback');
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Leaflet draws tiles and overlays as <img>; a configured basemap host must be allowed.
+          'img-src': ["'self'", 'data:', 'blob:', ...(config.tileUrl ? [new URL(config.tileUrl.replace(/\{[a-z]\}/g, 'a')).origin] : [])],
+          'upgrade-insecure-requests': config.isProduction ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use(express.json({ limit: '2mb' }));
+  app.use(cookieParser());
+
+  const api = express.Router();
+  api.get('/health', async (_req, res) => {
+    const db = await sequelize.query('SELECT 1').then(() => true, () => false);
+    res.status(db ? 200 : 503).json({ ok: db, db });
+  });
+  api.get('/config', (_req, res) => {
+    res.json({ tileUrl: config.tileUrl, tileAttribution: config.tileAttribution });
+  });
+  api.use('/auth', authRoutes(sequelize, config));
+  api.use(requireUser(config));
+  api.use('/farms', farmsRoutes(sequelize));
+  api.use('/farms', fieldImportRoutes(sequelize));
+  api.use('/fields', fieldsRoutes(sequelize));
+  api.use(notFoundApi);
+  app.use('/api', api);
+
+  const dist = clientDir ?? path.resolve('dist');
+  if (existsSync(path.join(dist, 'index.html'))) {
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    // Client-side routes: every other GET gets the app shell.
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(dist, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

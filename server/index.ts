@@ -1,0 +1,67 @@
+// `npm start`: local database, migrations, demo seed, client build, then API + client on PORT.
+import { existsSync, readdirSync, statSync } from 'node:fs';
+import path from 'node:path';
+import type { Server } from 'node:http';
+import { loadConfig } from './config';
+import { openDatabase } from './db/database';
+import { stopLocalCluster } from './db/local-cluster';
+import { initModels } from './models';
+import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seeders/demo-farm';
+import { createApp } from './app';
+
+function newestMtime(dir: string): number {
+  let newest = 0;
+  for (const entry of readdirSync(dir, { withFileTypes: true })) {
+    const p = path.join(dir, entry.name);
+    newest = Math.max(newest, entry.isDirectory() ? newestMtime(p) : statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+async function buildClientIfStale(): Promise<void> {
+  const shell = path.resolve('dist/index.html');
+  const sources = ['src', 'shared', 'index.html'].filter((p) => existsSync(p));
+  const newest = Math.max(...sources.map((p) => (statSync(p).isDirectory() ? newestMtime(p) : statSync(p).mtimeMs)));
+  if (existsSync(shell) && statSync(shell).mtimeMs >= newest) return;
+  console.log('Building the client …');
+  const { build } = await import('vite');
+  await build({ logLevel: 'warn' });
+}
+
+async function main(): Promise<void> {
+  const config = loadConfig();
+  const db = await openDatabase(config);
+  initModels(db.sequelize);
+  if (config.seedDemo && (await seedDemoFarm(db.sequelize))) console.log('Loaded the demo farm (Alder Run Farm).');
+  await buildClientIfStale();
+  const app = createApp({ sequelize: db.sequelize, config });
+  const server: Server = app.listen(config.port, config.host);
+  await new Promise<void>((resolve, reject) => {
+    server.once('listening', resolve);
+    server.once('error', (e: NodeJS.ErrnoException) =>
+      reject(e.code === 'EADDRINUSE' ? new Error(`Port ${config.port} is taken; set PORT to a free port.`) : e),
+    );
+  });
+  console.log(`\nFieldshed is running at http://${config.host}:${config.port}`);
+  if (config.seedDemo) {
+    console.log(`Demo sign-ins (password ${DEMO_PASSWORD}):`);
+    for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(9)} ${a.email}`);
+  }
+  let stopping = false;
+  const stop = async (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    console.log(`\n${signal}: stopping …`);
+    server.close();
+    await db.sequelize.close().catch(() => undefined);
+    if (db.localClusterDir) await stopLocalCluster(db.localClusterDir).catch(() => undefined);
+    process.exit(0);
+  };
+  process.on('SIGINT', () => void stop('SIGINT'));
+  process.on('SIGTERM', () => void stop('SIGTERM'));
+}
+
+main().catch((e: unknown) => {
+  console.error(`\nFieldshed could not start:\n${e instanceof Error ? e.message : String(e)}`);
+  process.exit(1);
+});

@@ -1,0 +1,16 @@
+import type { RequestHandler } from 'express';
+import type { Config } from '../config';
+import { User } from '../models';
+import { unauthorized } from '../lib/http-error';
+import { readSession, SESSION_COOKIE } from '../services/sessions';
+
+/** Loads req.user from the session cookie; 401 when nobody is signed in. */
+export function requireUser(config: Config): RequestHandler {
+  return async (req, _res, next) => {
+    const id = readSession(req.cookies?.[SESSION_COOKIE], config);
+    const user = id ? await User.findByPk(id) : null;
+    if (!user) throw unauthorized();
+    req.user = user;
+    next();
+  };
+}

@@ -1,0 +1,29 @@
+// Every farm route checks the caller's role on that farm (DESIGN.md "Users and roles").
+import type { RequestHandler } from 'express';
+import { Membership } from '../models';
+import type { Role } from '../../shared/schemas/auth';
+import { forbidden, notFound } from '../lib/http-error';
+import { parseId } from './validate';
+
+export async function membershipOf(userId: number, farmId: number): Promise<Membership | null> {
+  return Membership.findOne({ where: { userId, farmId } });
+}
+
+/** Sets req.membership for :farmId; non-members get 404, so farms' existence does not leak. */
+export const loadFarmMembership: RequestHandler = async (req, _res, next) => {
+  const farmId = parseId(req.params.farmId as string | undefined, 'farmId');
+  const m = await membershipOf(req.user!.id, farmId);
+  if (!m) throw notFound('That farm');
+  req.membership = m;
+  next();
+};
+
+/** 403 unless the caller's role on the farm is one of these. */
+export function requireRole(...roles: Role[]): RequestHandler {
+  return (req, _res, next) => {
+    if (!req.membership || !roles.includes(req.membership.role)) {
+      throw forbidden(`Only a ${roles.join(' or ')} on this farm may do that; your role is ${req.membership?.role ?? 'none'}.`);
+    }
+    next();
+  };
+}

@@ -1,0 +1,34 @@
+import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
+import type { MultiPolygon } from 'geojson';
+
+export class Field extends Model<InferAttributes<Field>, InferCreationAttributes<Field>> {
+  declare id: CreationOptional<number>;
+  declare farmId: number;
+  declare name: string;
+  declare geom: MultiPolygon;
+  /** Ellipsoidal (WGS84) area from PostGIS geography. */
+  declare areaM2: number;
+  declare perimeterM: number;
+  declare ownerMembershipId: number | null;
+  declare version: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    Field.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        farmId: { type: DataTypes.INTEGER, allowNull: false },
+        name: { type: DataTypes.TEXT, allowNull: false },
+        geom: { type: DataTypes.GEOMETRY('MULTIPOLYGON', 4326), allowNull: false },
+        areaM2: { type: DataTypes.DOUBLE, allowNull: false },
+        perimeterM: { type: DataTypes.DOUBLE, allowNull: false },
+        ownerMembershipId: { type: DataTypes.INTEGER, allowNull: true },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'fields' },
+    );
+  }
+}

@@ -1,0 +1,23 @@
+import { Router } from 'express';
+import multer from 'multer';
+import type { Sequelize } from 'sequelize';
+import { loadFarmMembership, requireRole } from '../middleware/farm-access';
+import { badRequest } from '../lib/http-error';
+import { IMPORT_LIMIT_BYTES, importFields } from '../services/import-fields.service';
+
+// Memory storage: uploads are parsed in memory and never written to disk under their given name.
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_LIMIT_BYTES, files: 1 } });
+
+export function fieldImportRoutes(sequelize: Sequelize): Router {
+  const r = Router();
+  r.post('/:farmId/fields/import', loadFarmMembership, requireRole('farmer'), upload.single('file'), async (req, res) => {
+    if (!req.file) throw badRequest('no_file', 'Attach the boundary file as the multipart part named "file".');
+    const result = await importFields(sequelize, { userId: req.user!.id }, req.membership!.farmId, {
+      buffer: req.file.buffer,
+      originalName: req.file.originalname,
+      mimeType: req.file.mimetype,
+    });
+    res.status(201).json(result);
+  });
+  return r;
+}

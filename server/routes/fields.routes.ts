@@ -1,0 +1,24 @@
+import { Router } from 'express';
+import type { Sequelize } from 'sequelize';
+import { FieldUpdate } from '../../shared/schemas/field';
+import { validate } from '../middleware/validate';
+import { requireRole } from '../middleware/farm-access';
+import { loadFieldMembership } from '../middleware/field-access';
+import { queryFields } from '../services/field-presenter';
+import { deleteField, updateField } from '../services/fields.service';
+
+export function fieldsRoutes(sequelize: Sequelize): Router {
+  const r = Router();
+  r.get('/:fieldId', loadFieldMembership, async (_req, res) => {
+    const [f] = await queryFields(sequelize, { fieldIds: [res.locals.fieldId as number] });
+    res.json(f);
+  });
+  r.patch('/:fieldId', loadFieldMembership, requireRole('farmer'), validate(FieldUpdate), async (req, res) => {
+    res.json(await updateField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number, req.body));
+  });
+  r.delete('/:fieldId', loadFieldMembership, requireRole('farmer'), async (req, res) => {
+    await deleteField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number);
+    res.status(204).end();
+  });
+  return r;
+}

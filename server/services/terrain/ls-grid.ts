@@ -1,0 +1,61 @@
+// Per-cell LS: Desmet & Govers (1996, J. Soil Water Conserv. 51:427) L from the upslope area at
+// the cell inlet, times RUSLE S (AH-703 eq. 4-4) from the cell's Horn slope. The formulas are
+// those of shared/erosion/slope-length.ts; the hot loop below inlines them (calling the
+// functions per cell with their argument checks costs ~3× more) and
+// tests/unit/terrain/ls-grid.test.ts proves the loop equals those functions cell by cell.
+// Cell size D = √(dx·dy) for rectangular cells; x from the D8 direction (1 or √2).
+import { UNIT_PLOT_LENGTH_M, type RillRatio } from '../../../shared/erosion/slope-length';
+import { D8_DIR_FACTOR } from './flow-d8';
+import type { DemGrid } from './types';
+
+type GridShape = Pick<DemGrid, 'width' | 'height' | 'rowCellSizeXM' | 'rowCellSizeYM'>;
+
+export type LsGridArgs = {
+  grid: GridShape;
+  slopePct: Float32Array;
+  /** Contributing area including the cell (flowAccumulationM2). */
+  contributingAreaM2: Float32Array;
+  flowDir: Uint8Array;
+  rillRatio?: RillRatio;
+};
+
+const BETA_SCALE: Record<RillRatio, number> = { low: 0.5, moderate: 1, high: 2 };
+
+/** LS of every cell (NaN where slope or area is nodata). */
+export function lsGrid(args: LsGridArgs): Float32Array {
+  const { grid, slopePct, contributingAreaM2: acc, flowDir } = args;
+  const rill = args.rillRatio ?? 'moderate';
+  const betaScale = BETA_SCALE[rill];
+  if (betaScale === undefined) throw new Error(`rillRatio must be 'low', 'moderate' or 'high', got ${String(rill)}`);
+  const { width: w, height: h } = grid;
+  const out = new Float32Array(w * h);
+  const lnUnit = Math.log(UNIT_PLOT_LENGTH_M);
+  const lnX = D8_DIR_FACTOR.map(Math.log);
+  for (let r = 0; r < h; r++) {
+    const cellAreaM2 = grid.rowCellSizeXM[r] * grid.rowCellSizeYM[r];
+    const d = Math.sqrt(cellAreaM2);
+    const lnD = Math.log(d);
+    const d2 = d * d;
+    for (let i = r * w, end = i + w; i < end; i++) {
+      const s = slopePct[i];
+      const a = acc[i] - cellAreaM2;
+      if (!(s >= 0) || !(a >= -1e-3 * cellAreaM2)) { out[i] = NaN; continue; }
+      const aIn = a > 0 ? a : 0;
+      // θ = atan(s/100), so sin θ = s / √(s² + 100²)
+      const sin = s / Math.sqrt(s * s + 10000);
+      // AH-703 eq. 4-4: S = 10.8 sin θ + 0.03 (s < 9 %), 16.8 sin θ − 0.50 (s ≥ 9 %)
+      const sFactor = s < 9 ? 10.8 * sin + 0.03 : 16.8 * sin - 0.5;
+      let m = 0;
+      if (sin > 0) {
+        // AH-703 eq. 4-3 and 4-2: β = (sin θ/0.0896)/(3.0 sin^0.8 θ + 0.56), m = β/(1 + β)
+        const beta = (betaScale * sin) / 0.0896 / (3.0 * Math.pow(sin, 0.8) + 0.56);
+        m = beta / (1 + beta);
+      }
+      // Desmet & Govers 1996 eq. 6: L = [(A + D²)^(m+1) − A^(m+1)] / [D^(m+2) · x^m · 22.13^m]
+      const top = Math.pow(aIn + d2, m + 1) - (aIn > 0 ? Math.pow(aIn, m + 1) : 0);
+      const bottom = Math.exp((m + 2) * lnD + m * (lnX[flowDir[i]] + lnUnit));
+      out[i] = (top / bottom) * sFactor;
+    }
+  }
+  return out;
+}

@@ -1,0 +1,12 @@
+import type { User, Membership } from '../models';
+
+declare global {
+  namespace Express {
+    interface Request {
+      user?: User;
+      /** The caller's membership on the farm the route touches (set by farm access middleware). */
+      membership?: Membership;
+    }
+  }
+}
+export {};
