@@ -1,0 +1,39 @@
+// Routes. The farm map is loaded on demand (Leaflet + geoman are large).
+import { QueryClientProvider } from '@tanstack/react-query';
+import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import { Loading } from './components/ui/spinner';
+import { RequireAuth } from './features/auth/components/require-auth';
+import { paths } from './lib/paths';
+import { queryClient } from './lib/query-client';
+import { EstimatePage } from './pages/estimate-page';
+import { FarmsPage } from './pages/farms-page';
+import { NotFoundPage } from './pages/not-found-page';
+import { RegisterPage } from './pages/register-page';
+import { SignInPage } from './pages/sign-in-page';
+
+const router = createBrowserRouter([
+  { path: paths.signIn.path, element: <SignInPage /> },
+  { path: paths.register.path, element: <RegisterPage /> },
+  {
+    element: <RequireAuth />,
+    hydrateFallbackElement: <Loading />,
+    children: [
+      { path: paths.home.path, element: <Navigate to={paths.farms.getHref()} replace /> },
+      { path: paths.farms.path, element: <FarmsPage /> },
+      {
+        path: paths.farmMap.path,
+        lazy: async () => ({ Component: (await import('./pages/farm-map-page')).FarmMapPage }),
+      },
+      { path: paths.estimate.path, element: <EstimatePage /> },
+    ],
+  },
+  { path: '*', element: <NotFoundPage /> },
+]);
+
+export function App() {
+  return (
+    <QueryClientProvider client={queryClient}>
+      <RouterProvider router={router} />
+    </QueryClientProvider>
+  );
+}

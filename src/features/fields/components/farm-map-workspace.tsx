@@ -1,0 +1,231 @@
+// Farm map: the map filling the screen with the field panel beside it. Holds the selection and
+// turns map gestures (draw, edit, remove) into mutations; the query cache redraws the map.
+import { useCallback, useState, type ReactNode } from 'react';
+import type { Layer } from 'leaflet';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import { Loading } from '../../../components/ui/spinner';
+import { layerToGeometry } from '../../../lib/geo-leaflet';
+import { formatArea } from '../../../lib/units';
+import type { Units } from '../../../../shared/schemas/auth';
+import type { FieldFeature } from '../../../../shared/schemas/field';
+import type { AreaGeometry } from '../../../../shared/schemas/geojson';
+import { useCreateField } from '../api/create-field';
+import { useDeleteField } from '../api/delete-field';
+import { useFields } from '../api/get-fields';
+import { useUpdateField } from '../api/update-field';
+import { fieldEditErrorMessage } from './conflict-message';
+import { FieldDetails } from './field-details';
+import { FieldList } from './field-list';
+import { FieldsMap } from './fields-map';
+import { ImportDialog } from './import-dialog';
+import type { FocusRequest } from './map-view-control';
+import { ShapeProblemNotice, shapeProblemFrom, type ShapeProblem } from './shape-problem';
+
+type MapMessage = { tone: 'error' | 'caution' | 'info'; text: string } | null;
+
+type Props = {
+  farmId: number;
+  farmBbox: [number, number, number, number] | null;
+  canEdit: boolean;
+  units: Units;
+  tileUrl: string | null;
+  tileAttribution: string | null;
+  /** Role notes shown at the top of the panel. */
+  banner?: ReactNode;
+};
+
+const overlapText = (field: FieldFeature, units: Units) =>
+  field.properties.overlaps.length
+    ? ` It overlaps ${field.properties.overlaps.map((o) => `${o.name} (${formatArea(o.areaHa, units)})`).join(', ')}.`
+    : '';
+
+export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, tileAttribution, banner }: Props) {
+  const fields = useFields(farmId);
+  const createField = useCreateField(farmId);
+  const updateField = useUpdateField(farmId);
+  const deleteField = useDeleteField(farmId);
+
+  const [selectedId, setSelectedId] = useState<number | null>(null);
+  const [focus, setFocus] = useState<FocusRequest>(null);
+  const [importOpen, setImportOpen] = useState(false);
+  const [message, setMessage] = useState<MapMessage>(null);
+  const [shapeProblem, setShapeProblem] = useState<ShapeProblem | null>(null);
+  const [layerEpoch, setLayerEpoch] = useState(0);
+  const redrawFromCache = () => setLayerEpoch((n) => n + 1);
+
+  const features = fields.data?.features ?? [];
+  const selected = features.find((f) => f.id === selectedId) ?? null;
+  const findField = (fieldId: number) => fields.data?.features.find((f) => f.id === fieldId);
+
+  const saveNew = (geometry: AreaGeometry) => {
+    setMessage(null);
+    setShapeProblem(null);
+    createField.mutate(
+      { type: 'Feature', geometry, properties: {} },
+      {
+        onSuccess: (field) => {
+          setSelectedId(field.id);
+          setMessage({
+            tone: field.properties.overlaps.length ? 'caution' : 'info',
+            text: `Saved ${field.properties.name}, ${formatArea(field.properties.areaHa, units)}.${overlapText(field, units)}`,
+          });
+        },
+        onError: (error) => {
+          const problem = shapeProblemFrom(error, saveNew);
+          if (problem) setShapeProblem(problem);
+          else setMessage({ tone: 'error', text: `The new field was not saved: ${error.message}` });
+        },
+      },
+    );
+  };
+
+  const saveOutline = (fieldId: number, geometry: AreaGeometry) => {
+    const field = findField(fieldId);
+    if (!field) return;
+    setMessage(null);
+    setShapeProblem(null);
+    updateField.mutate(
+      { fieldId, input: { version: field.properties.version, geometry } },
+      {
+        onSuccess: (saved) =>
+          setMessage({
+            tone: saved.properties.overlaps.length ? 'caution' : 'info',
+            text: `Saved the new outline of ${saved.properties.name}, ${formatArea(saved.properties.areaHa, units)}.${overlapText(saved, units)}`,
+          }),
+        onError: (error) => {
+          // Whatever happened, the map goes back to what the server holds.
+          redrawFromCache();
+          const problem = shapeProblemFrom(error, (repaired) => saveOutline(fieldId, repaired));
+          if (problem) setShapeProblem(problem);
+          else setMessage({ tone: 'error', text: `${field.properties.name}: ${fieldEditErrorMessage(error, 'new outline')}` });
+        },
+      },
+    );
+  };
+
+  const onEdited = (fieldId: number, layer: Layer) => {
+    const geometry = layerToGeometry(layer);
+    if (geometry) saveOutline(fieldId, geometry);
+  };
+
+  const onRemoved = (fieldId: number) => {
+    const field = findField(fieldId);
+    setMessage(null);
+    if (selectedId === fieldId) setSelectedId(null);
+    deleteField.mutate(fieldId, {
+      onSuccess: () => setMessage({ tone: 'info', text: `Deleted ${field?.properties.name ?? 'the field'}.` }),
+      onError: (error) => {
+        redrawFromCache();
+        setMessage({ tone: 'error', text: `${field?.properties.name ?? 'The field'} was not deleted: ${fieldEditErrorMessage(error, 'deletion')}` });
+      },
+    });
+  };
+
+  const selectFromList = (fieldId: number) => {
+    setSelectedId(fieldId);
+    setFocus((f) => ({ fieldId, seq: (f?.seq ?? 0) + 1 }));
+  };
+  const closeImport = useCallback(() => setImportOpen(false), []);
+
+  const saving = createField.isPending || updateField.isPending || deleteField.isPending;
+
+  return (
+    <div className="flex min-h-0 flex-1 flex-col md:flex-row">
+      <div className="relative h-[60vh] min-h-[320px] flex-1 md:h-auto" data-testid="farm-map">
+        {fields.isPending ? (
+          <Loading label="Loading the farm's fields…" />
+        ) : fields.isError ? (
+          <div className="p-4">
+            <Notice tone="error" title="The fields could not be loaded">
+              {fields.error.message}
+            </Notice>
+          </div>
+        ) : (
+          <FieldsMap
+            fields={features}
+            farmBbox={farmBbox}
+            selectedId={selectedId}
+            focus={focus}
+            canEdit={canEdit}
+            tileUrl={tileUrl}
+            tileAttribution={tileAttribution}
+            layerEpoch={layerEpoch}
+            onSelect={setSelectedId}
+            onEdited={onEdited}
+            onRemoved={onRemoved}
+            onCreate={saveNew}
+            onDrawError={(text) => setMessage({ tone: 'error', text })}
+          />
+        )}
+        <div className="pointer-events-none absolute inset-x-0 top-2 z-[1000] flex flex-col items-center gap-2 px-14">
+          {saving ? (
+            <p role="status" className="pointer-events-auto rounded bg-paper px-3 py-1 text-sm shadow">
+              Saving…
+            </p>
+          ) : null}
+          {shapeProblem ? (
+            <div className="pointer-events-auto w-full max-w-md shadow">
+              <ShapeProblemNotice
+                problem={shapeProblem}
+                pending={saving}
+                onDismiss={() => setShapeProblem(null)}
+              />
+            </div>
+          ) : null}
+          {message ? (
+            <div className="pointer-events-auto w-full max-w-md shadow" data-testid="map-message">
+              <Notice tone={message.tone}>
+                <div className="flex items-start gap-2">
+                  <p className="flex-1">{message.text}</p>
+                  <button type="button" className="text-xs underline" onClick={() => setMessage(null)}>
+                    Dismiss
+                  </button>
+                </div>
+              </Notice>
+            </div>
+          ) : null}
+        </div>
+      </div>
+
+      <aside
+        aria-label="Fields of this farm"
+        className="flex w-full shrink-0 flex-col gap-4 overflow-y-auto border-t border-paper-edge bg-paper p-4 md:w-96 md:border-l md:border-t-0"
+      >
+        {banner}
+        {canEdit ? (
+          <div className="flex flex-col gap-2">
+            <Button data-testid="import-button" className="self-start" onClick={() => setImportOpen(true)}>
+              Import outlines from a file
+            </Button>
+            <p className="text-sm text-ink-soft">
+              Or draw on the map: pick the polygon tool at the top left, click each corner, and click the first corner
+              again to finish. The pencil tool reshapes outlines (click it again to save), the bin removes one.
+            </p>
+          </div>
+        ) : null}
+        {selected ? (
+          <FieldDetails
+            key={selected.id}
+            field={selected}
+            units={units}
+            canEdit={canEdit}
+            onClose={() => setSelectedId(null)}
+            onDeleted={() => {
+              setMessage({ tone: 'info', text: `Deleted ${selected.properties.name}.` });
+              setSelectedId(null);
+            }}
+          />
+        ) : null}
+        {fields.data ? (
+          <FieldList fields={features} units={units} selectedId={selectedId} onSelect={selectFromList} />
+        ) : null}
+        {fields.data && features.length === 0 && canEdit ? (
+          <Notice>This farm has no fields yet. Draw the first one on the map or import a file.</Notice>
+        ) : null}
+      </aside>
+
+      {importOpen ? <ImportDialog farmId={farmId} onClose={closeImport} /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,60 @@
+// The farm's map: its fields on a plain paper base (or a web basemap when the server
+// configures one), labels with field names, and for farmers the drawing tools.
+import type { ReactNode } from 'react';
+import { MapContainer, TileLayer } from 'react-leaflet';
+import '../../../lib/leaflet-setup';
+import { useLatest } from '../../../lib/use-latest';
+import type { FieldFeature } from '../../../../shared/schemas/field';
+import type { AreaGeometry } from '../../../../shared/schemas/geojson';
+import { DrawControls } from './draw-controls';
+import { FieldPolygon, type FieldLayerHandlers } from './field-polygon';
+import { MapViewControl, type FocusRequest } from './map-view-control';
+
+type Props = FieldLayerHandlers & {
+  fields: FieldFeature[];
+  farmBbox: [number, number, number, number] | null;
+  selectedId: number | null;
+  focus: FocusRequest;
+  canEdit: boolean;
+  tileUrl: string | null;
+  tileAttribution: string | null;
+  /** Bumped to redraw every field from the cache (after a refused edit or removal). */
+  layerEpoch: number;
+  onCreate: (geometry: AreaGeometry) => void;
+  onDrawError: (message: string) => void;
+  children?: ReactNode;
+};
+
+export function FieldsMap(props: Props) {
+  const { fields, farmBbox, selectedId, focus, canEdit, tileUrl, tileAttribution, layerEpoch } = props;
+  const handlers = useLatest<FieldLayerHandlers>({
+    onSelect: props.onSelect,
+    onEdited: props.onEdited,
+    onRemoved: props.onRemoved,
+  });
+
+  return (
+    <MapContainer
+      className="fs-map h-full w-full"
+      center={[20, 0]}
+      zoom={2}
+      minZoom={2}
+      maxZoom={19}
+      zoomSnap={0.25}
+      preferCanvas={false}
+    >
+      {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} maxZoom={19} /> : null}
+      {fields.map((field) => (
+        <FieldPolygon
+          key={`${field.id}:${field.properties.version}:${layerEpoch}`}
+          field={field}
+          selected={field.id === selectedId}
+          handlers={handlers}
+        />
+      ))}
+      <MapViewControl fields={fields} farmBbox={farmBbox} focus={focus} />
+      {canEdit ? <DrawControls onCreate={props.onCreate} onDrawError={props.onDrawError} /> : null}
+      {props.children}
+    </MapContainer>
+  );
+}

@@ -1,0 +1,45 @@
+// The server refused an outline (422 invalid_geometry). Say why, and when it sent a repaired
+// shape, let the user take it with one button.
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import { isApiError } from '../../../lib/api-client';
+import type { AreaGeometry } from '../../../../shared/schemas/geojson';
+
+export type ShapeProblem = {
+  message: string;
+  repaired: AreaGeometry | null;
+  /** Save the repaired shape the way the refused one would have been saved. */
+  useRepaired: (geometry: AreaGeometry) => void;
+};
+
+/** A ShapeProblem from an error, or null when the error is not about the shape's topology. */
+export function shapeProblemFrom(error: unknown, useRepaired: ShapeProblem['useRepaired']): ShapeProblem | null {
+  if (!isApiError(error, 422) || error.code !== 'invalid_geometry') return null;
+  const repaired = (error.details as { repaired?: AreaGeometry | null } | undefined)?.repaired ?? null;
+  return { message: error.message, repaired, useRepaired };
+}
+
+type Props = { problem: ShapeProblem; pending: boolean; onDismiss: () => void };
+
+export function ShapeProblemNotice({ problem, pending, onDismiss }: Props) {
+  return (
+    <Notice tone="error" title="This outline cannot be saved as drawn" testId="shape-problem">
+      <p>{problem.message}</p>
+      <p className="mt-1">
+        {problem.repaired
+          ? 'Fieldshed can save a repaired outline instead: the lines that cross are untangled into clean areas. Check it on the map afterwards.'
+          : 'Draw it again so that no edge crosses another.'}
+      </p>
+      <div className="mt-2 flex flex-wrap gap-2">
+        {problem.repaired ? (
+          <Button size="sm" disabled={pending} onClick={() => problem.repaired && problem.useRepaired(problem.repaired)}>
+            {pending ? 'Saving…' : 'Use the repaired shape'}
+          </Button>
+        ) : null}
+        <Button size="sm" variant="secondary" onClick={onDismiss}>
+          {problem.repaired ? 'Discard and redraw' : 'Dismiss'}
+        </Button>
+      </div>
+    </Notice>
+  );
+}

@@ -1,0 +1,86 @@
+// Farm map, the home of a farm. Loaded lazily: Leaflet and the drawing plugin are large.
+import { Link, useParams } from 'react-router-dom';
+import { AppHeader } from '../components/app-header';
+import { Notice } from '../components/ui/notice';
+import { Loading } from '../components/ui/spinner';
+import { useMe } from '../features/auth/api/get-me';
+import { UserMenu } from '../features/auth/components/user-menu';
+import { useConfig } from '../features/config/api/get-config';
+import { useFarm } from '../features/farms/api/get-farm';
+import { RoleBadge } from '../features/farms/components/role-badge';
+import { FarmMapWorkspace } from '../features/fields/components/farm-map-workspace';
+import { isApiError } from '../lib/api-client';
+import { paths } from '../lib/paths';
+import type { Role } from '../../shared/schemas/auth';
+
+function RoleBanner({ role }: { role: Role }) {
+  if (role === 'landowner')
+    return (
+      <Notice testId="landowner-banner" title="Landowner view">
+        You see the fields you own on this farm. The map is read only.
+      </Notice>
+    );
+  if (role === 'advisor')
+    return (
+      <Notice testId="advisor-banner">You advise this farm: you see all of its fields. The map is read only.</Notice>
+    );
+  return null;
+}
+
+export function FarmMapPage() {
+  const farmId = Number(useParams().farmId);
+  const farm = useFarm(farmId);
+  const me = useMe();
+  const config = useConfig();
+
+  const header = (
+    <AppHeader screen={farm.data?.role === 'landowner' ? 'Landowner view' : 'Farm map'} farmName={farm.data?.name} menu={<UserMenu />} />
+  );
+
+  if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError) {
+    return (
+      <div className="flex min-h-full flex-col">
+        {header}
+        <main className="mx-auto w-full max-w-2xl p-6">
+          <Notice tone="error" title="This farm cannot be opened">
+            {farm.isError && !isApiError(farm.error, 404)
+              ? farm.error.message
+              : 'There is no such farm, or you are not a member of it.'}
+          </Notice>
+          <Link to={paths.farms.getHref()} className="mt-4 inline-block font-semibold text-clay-dark underline">
+            Back to your farms
+          </Link>
+        </main>
+      </div>
+    );
+  }
+
+  return (
+    <div className="flex h-full flex-col">
+      {header}
+      {farm.isPending || !me.data ? (
+        <Loading label="Opening the farm…" />
+      ) : (
+        <FarmMapWorkspace
+          farmId={farmId}
+          farmBbox={farm.data.bbox}
+          canEdit={farm.data.role === 'farmer'}
+          units={me.data.units}
+          tileUrl={config.data?.tileUrl ?? null}
+          tileAttribution={config.data?.tileAttribution ?? null}
+          banner={
+            <div className="flex flex-col gap-2">
+              <div className="flex items-center gap-2">
+                <h1 className="text-xl font-semibold">{farm.data.name}</h1>
+                <RoleBadge role={farm.data.role} />
+              </div>
+              <RoleBanner role={farm.data.role} />
+            </div>
+          }
+        />
+      )}
+    </div>
+  );
+}
+
+export default FarmMapPage;

@@ -1,0 +1,29 @@
+// Sign in.
+import { Link, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import { SignInForm } from '../features/auth/components/sign-in-form';
+import { useMe } from '../features/auth/api/get-me';
+import { paths } from '../lib/paths';
+import { AuthFrame } from './auth-frame';
+
+/** Only same-site paths are followed after signing in. */
+const safeRedirect = (to: string | null) => (to && to.startsWith('/') && !to.startsWith('//') ? to : paths.farms.getHref());
+
+export function SignInPage() {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const me = useMe();
+  const redirectTo = safeRedirect(params.get('redirectTo'));
+  if (me.data) return <Navigate to={redirectTo} replace />;
+
+  return (
+    <AuthFrame title="Sign in">
+      <SignInForm onSuccess={() => navigate(redirectTo, { replace: true })} />
+      <p className="text-sm">
+        New to Fieldshed?{' '}
+        <Link to={paths.register.getHref()} className="font-semibold text-clay-dark underline">
+          Create an account
+        </Link>
+      </p>
+    </AuthFrame>
+  );
+}
