@@ -142,3 +142,28 @@ export function desmetGoversL(args: {
     (Math.pow(d, m + 2) * Math.pow(x, m) * Math.pow(UNIT_PLOT_LENGTH_M, m))
   );
 }
+
+/** Longest slope RUSLE's LS tables cover: 1000 ft (AH-703 ch. 4) [memory]. */
+export const MAX_RUSLE_SLOPE_LENGTH_M = 305;
+
+/**
+ * rusleLS with the expected failures as values: a slope length beyond the LS tables' range
+ * (305 m / 1000 ft), or inputs that are not numbers.
+ */
+export function tryRusleLS(args: {
+  slopePct: number;
+  lengthM: number;
+  rillRatio?: RillRatio;
+  maxLengthM?: number;
+}): { ok: true; value: LsResult } | { ok: false; reason: string } {
+  const { slopePct, lengthM, maxLengthM = MAX_RUSLE_SLOPE_LENGTH_M } = args;
+  if (!Number.isFinite(slopePct) || slopePct < 0) return { ok: false, reason: 'slopePct must be a number >= 0' };
+  if (!Number.isFinite(lengthM) || lengthM <= 0) return { ok: false, reason: 'slopeLengthM must be a number > 0' };
+  if (lengthM > maxLengthM) {
+    return {
+      ok: false,
+      reason: `slopeLengthM ${lengthM} m is beyond the ${maxLengthM} m (1000 ft) the RUSLE LS tables cover; split the slope where it changes or flow concentrates, or use the elevation model`,
+    };
+  }
+  return { ok: true, value: rusleLS(args) };
+}

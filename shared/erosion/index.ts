@@ -1,0 +1,19 @@
+// The Fieldshed erosion and runoff engine: pure functions, SI units unless named otherwise.
+// Entry points (DESIGN.md): classifyTexture, kFactorNomograph, rusleLS, rFromAnnualPrecipitation,
+// soilLoss, curveNumberRunoff; estimate() runs a whole estimate.
+export * from './assert';
+export * from './units';
+export * from './texture';
+export * from './k-factor';
+export * from './slope-length';
+export * from './slope-class';
+export * from './cover';
+export * from './support-practice';
+export * from './erosivity';
+export * from './tolerance';
+export * from './soil-loss';
+export * from './runoff';
+export * from './soil-group';
+export * from './drainage';
+export * from './amendments';
+export * from './estimate';
