@@ -248,6 +248,8 @@ async function main(): Promise<void> {
     ]));
     write('no-shp.zip', await zipOf([['readme.txt', 'Field notes, no shapefile here.\n'], ['fields.dbf', utm.get('dbf')!]]));
 
+    // 65 MiB of zeros deflate to about 64 KiB: more than the importer unpacks (64 MiB).
+    write('zip-bomb.zip', await zipOf([['huge.shp', Buffer.alloc(65 * 1024 * 1024)]]));
     const fullZip = readFileSync(join(outDir, 'fields-utm15n-shp.zip'));
     write('truncated-shp.zip', fullZip.subarray(0, Math.floor(fullZip.length * 0.6)));
 
