@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import geodesicModule from 'geographiclib-geodesic';
-import { makeFarm, makeTestApp, makeUser, signedIn, squareFeature } from '../helpers/test-app';
+import { makeFarm, makeTestApp, signedIn, squareFeature } from '../helpers/test-app';
 import { Field, AuditEvent } from '../../server/models';
 
 const ctx = makeTestApp();
