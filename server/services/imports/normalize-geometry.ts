@@ -30,8 +30,11 @@ const cleanPolygon = (rings: unknown): unknown => (Array.isArray(rings) ? rings.
 
 type Collected = { polygons: unknown[]; dropped: string[]; bad: string | null };
 
+/** Deepest nesting of GeometryCollections read. */
+const MAX_NESTING = 8;
+
 /** Gathers the polygons of a geometry (recursing into collections) and the names of what is not one. */
-function collect(g: unknown, into: Collected): void {
+function collect(g: unknown, into: Collected, depth = 0): void {
   if (g === null || typeof g !== 'object' || typeof (g as { type?: unknown }).type !== 'string') {
     into.bad ??= 'holds a geometry without a "type"';
     return;
@@ -42,7 +45,8 @@ function collect(g: unknown, into: Collected): void {
     if (Array.isArray(coordinates)) into.polygons.push(...coordinates.map(cleanPolygon));
     else into.bad ??= 'has a MultiPolygon whose "coordinates" is not a list';
   } else if (type === 'GeometryCollection') {
-    if (Array.isArray(geometries)) for (const member of geometries) collect(member, into);
+    if (depth >= MAX_NESTING) into.bad ??= `nests GeometryCollections more than ${MAX_NESTING} deep`;
+    else if (Array.isArray(geometries)) for (const member of geometries) collect(member, into, depth + 1);
     else into.bad ??= 'has a GeometryCollection whose "geometries" is not a list';
   } else if (NOT_AREA.has(type)) into.dropped.push(type);
   else into.bad ??= `has "${type}", which is not a GeoJSON geometry type`;

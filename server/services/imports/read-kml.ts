@@ -5,10 +5,13 @@ import { kml } from '@tmcw/togeojson';
 import { failure, type RawFeature, type ReadResult } from './import-types';
 
 const DECLARATION = /<!\s*(DOCTYPE|ENTITY)\b/i;
+// Scanned left to right like an XML tokenizer, so a comment cannot hide a declaration.
+const CDATA_OR_COMMENT = /<!\[CDATA\[[\s\S]*?\]\]>|<!--[\s\S]*?-->/g;
 
 /** Reads KML 2.2; the Placemark's <name> becomes properties.name. */
 export function readKml(text: string): ReadResult {
-  const declared = DECLARATION.exec(text);
+  // HTML in a CDATA description may say <!DOCTYPE html>; that is text, not a declaration.
+  const declared = DECLARATION.exec(text.replace(CDATA_OR_COMMENT, ''));
   if (declared) {
     return failure(400, 'xml_declaration_not_allowed',
       `The KML file contains a <!${declared[1].toUpperCase()}> declaration. For safety Fieldshed does not read XML with DOCTYPE or ENTITY declarations: remove that block (KML does not need it) and upload again.`);

@@ -97,6 +97,13 @@ describe('GeoJSON boundary import', () => {
     expect(rejection(item).rejected).toMatch(/^feature 1: polygon 2, hole 1: a ring needs at least 4 positions/);
   });
 
+  it('rejects GeometryCollections nested too deeply instead of recursing without end', async () => {
+    let g: unknown = { type: 'Polygon', coordinates: [square] };
+    for (let i = 0; i < 20; i++) g = { type: 'GeometryCollection', geometries: [g] };
+    const [item] = itemsOf(await parseText(JSON.stringify(g)));
+    expect(rejection(item).rejected).toBe('feature 1: nests GeometryCollections more than 8 deep');
+  });
+
   it('rejects a collection member that is not a Feature', async () => {
     const text = JSON.stringify({ type: 'FeatureCollection', features: [{ type: 'Polygon', coordinates: [square] }, 'x'] });
     const items = itemsOf(await parseText(text));

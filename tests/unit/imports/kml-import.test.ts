@@ -54,6 +54,18 @@ describe('KML and KMZ boundary import', () => {
     expect(await parseText(text, 'x.kml')).toMatchObject({ status: 400, error: 'xml_declaration_not_allowed', message: expect.stringContaining('<!ENTITY>') });
   });
 
+  it('reads a placemark whose CDATA description holds HTML with <!DOCTYPE html>', async () => {
+    const ring = '-91.78,42.30 -91.77,42.30 -91.77,42.31 -91.78,42.30';
+    const text = kmlDoc(`<Placemark><name>Hay Ground</name><description><![CDATA[<!DOCTYPE html><p>cut twice</p>]]></description>` +
+      `<Polygon><outerBoundaryIs><LinearRing><coordinates>${ring}</coordinates></LinearRing></outerBoundaryIs></Polygon></Placemark>`);
+    expect(boundary(itemsOf(await parseText(text, 'hay.kml'))[0]).name).toBe('Hay Ground');
+  });
+
+  it('still refuses a DOCTYPE placed after a comment that mentions CDATA', async () => {
+    const text = '<?xml version="1.0"?><!-- <![CDATA[ --><!DOCTYPE kml [<!ENTITY x SYSTEM "file:///etc/passwd">]><!-- ]]> --><kml><Placemark><name>&x;</name></Placemark></kml>';
+    expect(await parseText(text, 'x.kml')).toMatchObject({ status: 400, error: 'xml_declaration_not_allowed' });
+  });
+
   it('answers 400 for malformed XML, naming the line', async () => {
     const result = await parseFixture('malformed.kml');
     expect(result).toMatchObject({ ok: false, status: 400, error: 'invalid_xml' });
