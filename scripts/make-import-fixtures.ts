@@ -30,7 +30,6 @@ const ringLngLat = (ring: Xy[]): Xy[] => closed(ring).map(toLngLat);
 
 // Corners (UTM 15N m) taken from data/demo/fields-utm.json, plus a pond hole and a bow-tie.
 const northRidge: Xy[] = [[600005, 4684805], [600495, 4684805], [600495, 4685195], [600065, 4685195], [600005, 4685135]];
-const longSlope: Xy[] = [[600505, 4684605], [600995, 4684605], [600995, 4684935], [600935, 4684995], [600505, 4684995]];
 const swaleField: Xy[] = [[601005, 4684705], [601595, 4684705], [601595, 4685135], [601535, 4685195], [601005, 4685195]];
 const creekBottom: Xy[] = [[600005, 4684115], [600065, 4684055], [600445, 4684055], [600445, 4684395], [600005, 4684395]];
 const streamStrip: Xy[] = [[600455, 4684055], [601035, 4684055], [601095, 4684115], [601095, 4684245], [600455, 4684245]];
@@ -47,8 +46,8 @@ function write(name: string, data: string | Buffer): void {
 }
 const json = (v: unknown) => JSON.stringify(v, null, 1) + '\n';
 
-function geojsonFeature(name: string | null, props: Record<string, unknown>, geometry: unknown) {
-  return { type: 'Feature', properties: name === null ? props : { ...props }, geometry };
+function geojsonFeature(props: Record<string, unknown>, geometry: unknown) {
+  return { type: 'Feature', properties: props, geometry };
 }
 
 // ---- GeoJSON -------------------------------------------------------------------------------
@@ -63,12 +62,12 @@ function threeFields(): unknown {
   return {
     type: 'FeatureCollection',
     features: [
-      geojsonFeature(null, { name: 'North Ridge', crop: 'corn' }, { type: 'Polygon', coordinates: [ringLngLat(northRidge)] }),
-      geojsonFeature(null, { FIELD_NAME: 'Creek Parcels', id: 17 }, {
+      geojsonFeature({ name: 'North Ridge', crop: 'corn' }, { type: 'Polygon', coordinates: [ringLngLat(northRidge)] }),
+      geojsonFeature({ FIELD_NAME: 'Creek Parcels', id: 17 }, {
         type: 'MultiPolygon',
         coordinates: [[creek], [withZ(streamStrip)]],
       }),
-      geojsonFeature(null, { Label: 'Bow-tie Corner' }, { type: 'Polygon', coordinates: [ringLngLat(bowTie)] }),
+      geojsonFeature({ Label: 'Bow-tie Corner' }, { type: 'Polygon', coordinates: [ringLngLat(bowTie)] }),
     ],
   };
 }
@@ -78,12 +77,12 @@ function mixedGeometries(): unknown {
   return {
     type: 'FeatureCollection',
     features: [
-      geojsonFeature(null, { name: 'Mill Hill' }, { type: 'Polygon', coordinates: [millHillRing] }),
-      geojsonFeature(null, { name: 'Fence Line' }, { type: 'LineString', coordinates: [millHillRing[0], millHillRing[1]] }),
-      geojsonFeature(null, { NAME: 'Well' }, { type: 'Point', coordinates: millHillRing[2] }),
-      geojsonFeature(null, { title: 'Hay Ground' }, { type: 'Polygon', coordinates: [ringLngLat(hayGround)] }),
-      geojsonFeature(null, { name: 'Not Yet Mapped' }, null),
-      geojsonFeature(null, { field: 'Upper Flat' }, {
+      geojsonFeature({ name: 'Mill Hill' }, { type: 'Polygon', coordinates: [millHillRing] }),
+      geojsonFeature({ name: 'Fence Line' }, { type: 'LineString', coordinates: [millHillRing[0], millHillRing[1]] }),
+      geojsonFeature({ NAME: 'Well' }, { type: 'Point', coordinates: millHillRing[2] }),
+      geojsonFeature({ title: 'Hay Ground' }, { type: 'Polygon', coordinates: [ringLngLat(hayGround)] }),
+      geojsonFeature({ name: 'Not Yet Mapped' }, null),
+      geojsonFeature({ field: 'Upper Flat' }, {
         type: 'GeometryCollection',
         geometries: [
           { type: 'Polygon', coordinates: [ringLngLat(upperFlat)] },
