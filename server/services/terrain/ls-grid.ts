@@ -29,32 +29,32 @@ export function lsGrid(args: LsGridArgs): Float32Array {
   if (betaScale === undefined) throw new Error(`rillRatio must be 'low', 'moderate' or 'high', got ${String(rill)}`);
   const { width: w, height: h } = grid;
   const out = new Float32Array(w * h);
-  const lnUnit = Math.log(UNIT_PLOT_LENGTH_M);
-  const lnX = D8_DIR_FACTOR.map(Math.log);
+  // ln(D / (x·22.13)) per direction code, per row: L = (D/(x·22.13))^m · [(u+1)^(m+1) − u^(m+1)]
+  // with u = A_in/D², the Desmet–Govers formula divided through by D^(2m+2).
+  const lnScale = new Float64Array(9);
   for (let r = 0; r < h; r++) {
     const cellAreaM2 = grid.rowCellSizeXM[r] * grid.rowCellSizeYM[r];
     const d = Math.sqrt(cellAreaM2);
-    const lnD = Math.log(d);
-    const d2 = d * d;
+    for (let k = 0; k < 9; k++) lnScale[k] = Math.log(d / (D8_DIR_FACTOR[k] * UNIT_PLOT_LENGTH_M));
+    const invArea = 1 / cellAreaM2;
     for (let i = r * w, end = i + w; i < end; i++) {
       const s = slopePct[i];
       const a = acc[i] - cellAreaM2;
       if (!(s >= 0) || !(a >= -1e-3 * cellAreaM2)) { out[i] = NaN; continue; }
-      const aIn = a > 0 ? a : 0;
+      const u = a > 0 ? a * invArea : 0;
       // θ = atan(s/100), so sin θ = s / √(s² + 100²)
       const sin = s / Math.sqrt(s * s + 10000);
       // AH-703 eq. 4-4: S = 10.8 sin θ + 0.03 (s < 9 %), 16.8 sin θ − 0.50 (s ≥ 9 %)
       const sFactor = s < 9 ? 10.8 * sin + 0.03 : 16.8 * sin - 0.5;
-      let m = 0;
-      if (sin > 0) {
-        // AH-703 eq. 4-3 and 4-2: β = (sin θ/0.0896)/(3.0 sin^0.8 θ + 0.56), m = β/(1 + β)
-        const beta = (betaScale * sin) / 0.0896 / (3.0 * Math.pow(sin, 0.8) + 0.56);
-        m = beta / (1 + beta);
-      }
+      if (sin === 0) { out[i] = sFactor; continue; } // m = 0 → L = 1
+      // AH-703 eq. 4-3 and 4-2: β = (sin θ/0.0896)/(3.0 sin^0.8 θ + 0.56), m = β/(1 + β)
+      const beta = (betaScale * sin) / 0.0896 / (3.0 * Math.exp(0.8 * Math.log(sin)) + 0.56);
+      const m = beta / (1 + beta);
       // Desmet & Govers 1996 eq. 6: L = [(A + D²)^(m+1) − A^(m+1)] / [D^(m+2) · x^m · 22.13^m]
-      const top = Math.pow(aIn + d2, m + 1) - (aIn > 0 ? Math.pow(aIn, m + 1) : 0);
-      const bottom = Math.exp((m + 2) * lnD + m * (lnX[flowDir[i]] + lnUnit));
-      out[i] = (top / bottom) * sFactor;
+      const c = m * lnScale[flowDir[i]];
+      const m1 = m + 1;
+      const l = u > 0 ? Math.exp(c + m1 * Math.log(u + 1)) - Math.exp(c + m1 * Math.log(u)) : Math.exp(c);
+      out[i] = l * sFactor;
     }
   }
   return out;
