@@ -72,7 +72,7 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
           });
         },
         onError: (error) => {
-          const problem = shapeProblemFrom(error, saveNew);
+          const problem = shapeProblemFrom(error, geometry, saveNew);
           if (problem) setShapeProblem(problem);
           else setMessage({ tone: 'error', text: `The new field was not saved: ${error.message}` });
         },
@@ -96,7 +96,7 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
         onError: (error) => {
           // Whatever happened, the map goes back to what the server holds.
           redrawFromCache();
-          const problem = shapeProblemFrom(error, (repaired) => saveOutline(fieldId, repaired));
+          const problem = shapeProblemFrom(error, geometry, (repaired) => saveOutline(fieldId, repaired));
           if (problem) setShapeProblem(problem);
           else setMessage({ tone: 'error', text: `${field.properties.name}: ${fieldEditErrorMessage(error, 'new outline')}` });
         },
@@ -151,6 +151,7 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
             tileUrl={tileUrl}
             tileAttribution={tileAttribution}
             layerEpoch={layerEpoch}
+            preview={shapeProblem ? { drawn: shapeProblem.drawn, repaired: shapeProblem.repaired } : null}
             onSelect={setSelectedId}
             onEdited={onEdited}
             onRemoved={onRemoved}
@@ -200,7 +201,8 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
             </Button>
             <p className="text-sm text-ink-soft">
               Or draw on the map: pick the polygon tool at the top left, click each corner, and click the first corner
-              again to finish. The pencil tool reshapes outlines (click it again to save), the bin removes one.
+              again to finish. The edit tool below it lets you drag corners; pick it again to save. The eraser
+              removes the field you click.
             </p>
           </div>
         ) : null}

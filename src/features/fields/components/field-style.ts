@@ -11,3 +11,8 @@ export const fieldStyle = (selected: boolean): PathOptions =>
 
 /** Outline style for shapes while they are being drawn. */
 export const drawingStyle: PathOptions = { color: FIELD_SELECTED_COLOR, weight: 3, fillColor: FIELD_COLOR, fillOpacity: 0.2 };
+
+/** A refused outline, as drawn. */
+export const refusedStyle: PathOptions = { color: '#9a2d1c', weight: 2, dashArray: '6,5', fill: false };
+/** The repaired outline the server offers. */
+export const repairedStyle: PathOptions = { color: FIELD_SELECTED_COLOR, weight: 3, fillColor: FIELD_COLOR, fillOpacity: 0.45 };

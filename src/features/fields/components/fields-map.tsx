@@ -9,6 +9,7 @@ import type { AreaGeometry } from '../../../../shared/schemas/geojson';
 import { DrawControls } from './draw-controls';
 import { FieldPolygon, type FieldLayerHandlers } from './field-polygon';
 import { MapViewControl, type FocusRequest } from './map-view-control';
+import { ShapePreviewLayers, type ShapePreview } from './shape-preview-layers';
 
 type Props = FieldLayerHandlers & {
   fields: FieldFeature[];
@@ -20,6 +21,8 @@ type Props = FieldLayerHandlers & {
   tileAttribution: string | null;
   /** Bumped to redraw every field from the cache (after a refused edit or removal). */
   layerEpoch: number;
+  /** A refused outline and its repaired version, drawn until the user decides. */
+  preview: ShapePreview | null;
   onCreate: (geometry: AreaGeometry) => void;
   onDrawError: (message: string) => void;
   children?: ReactNode;
@@ -52,6 +55,7 @@ export function FieldsMap(props: Props) {
           handlers={handlers}
         />
       ))}
+      {props.preview ? <ShapePreviewLayers preview={props.preview} /> : null}
       <MapViewControl fields={fields} farmBbox={farmBbox} focus={focus} />
       {canEdit ? <DrawControls onCreate={props.onCreate} onDrawError={props.onDrawError} /> : null}
       {props.children}

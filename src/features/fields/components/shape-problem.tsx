@@ -7,16 +7,22 @@ import type { AreaGeometry } from '../../../../shared/schemas/geojson';
 
 export type ShapeProblem = {
   message: string;
+  /** The outline as drawn and refused, shown on the map while the message is up. */
+  drawn: AreaGeometry;
   repaired: AreaGeometry | null;
   /** Save the repaired shape the way the refused one would have been saved. */
   useRepaired: (geometry: AreaGeometry) => void;
 };
 
 /** A ShapeProblem from an error, or null when the error is not about the shape's topology. */
-export function shapeProblemFrom(error: unknown, useRepaired: ShapeProblem['useRepaired']): ShapeProblem | null {
+export function shapeProblemFrom(
+  error: unknown,
+  drawn: AreaGeometry,
+  useRepaired: ShapeProblem['useRepaired'],
+): ShapeProblem | null {
   if (!isApiError(error, 422) || error.code !== 'invalid_geometry') return null;
   const repaired = (error.details as { repaired?: AreaGeometry | null } | undefined)?.repaired ?? null;
-  return { message: error.message, repaired, useRepaired };
+  return { message: error.message, drawn, repaired, useRepaired };
 }
 
 type Props = { problem: ShapeProblem; pending: boolean; onDismiss: () => void };
@@ -27,8 +33,8 @@ export function ShapeProblemNotice({ problem, pending, onDismiss }: Props) {
       <p>{problem.message}</p>
       <p className="mt-1">
         {problem.repaired
-          ? 'Fieldshed can save a repaired outline instead: the lines that cross are untangled into clean areas. Check it on the map afterwards.'
-          : 'Draw it again so that no edge crosses another.'}
+          ? 'On the map, the dashed red line is what was drawn and the filled shape is the repaired outline, with the crossing edges untangled. Save the repaired one, or discard it and draw again.'
+          : 'The dashed red line on the map is what was drawn. Draw it again so that no edge crosses another.'}
       </p>
       <div className="mt-2 flex flex-wrap gap-2">
         {problem.repaired ? (
