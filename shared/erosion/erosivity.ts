@@ -121,8 +121,8 @@ function stormOf(intervals: Interval[], rules: StormRules): Storm {
 
 /**
  * Splits a breakpoint record into storms and computes each storm's EI30 (AH-703 ch. 2).
- * A storm ends when the following splitHours bring less than splitMaxMm; that drizzle starts
- * the next storm. Storms failing the 12.7 mm / 6.35 mm-in-15-min rule are kept but marked
+ * A storm ends when the splitHours after its last significant rain bring less than splitMaxMm;
+ * drizzle inside that window stays with the storm, rain after it starts the next one. Storms failing the 12.7 mm / 6.35 mm-in-15-min rule are kept but marked
  * erosive: false.
  */
 export function stormsFromBreakpoints(record: Breakpoint[], rules: StormRules = DEFAULT_STORM_RULES): Result<Storm[]> {
@@ -132,14 +132,15 @@ export function stormsFromBreakpoints(record: Breakpoint[], rules: StormRules = 
   const storms: Storm[] = [];
   let current: Interval[] = [];
   const splitMin = rules.splitHours * 60;
+  // anchor: end of the storm's last interval that was followed by ≥ splitMaxMm within splitHours
+  let anchor = -Infinity;
   for (const iv of intervals) {
-    if (current.length > 0) {
-      const end = current[current.length - 1].endMin;
-      if (iv.startMin >= end && depthBetween(intervals, end, end + splitMin) < rules.splitMaxMm) {
-        storms.push(stormOf(current, rules));
-        current = [];
-      }
+    if (current.length > 0 && iv.startMin >= anchor + splitMin) {
+      // AH-703 ch. 2: ≥ 6 h with < 1.27 mm ends the storm [memory]
+      storms.push(stormOf(current, rules));
+      current = [];
     }
+    if (current.length === 0 || depthBetween(intervals, anchor, anchor + splitMin) >= rules.splitMaxMm) anchor = iv.endMin;
     current.push(iv);
   }
   if (current.length > 0) storms.push(stormOf(current, rules));
