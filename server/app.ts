@@ -13,10 +13,23 @@ import { authRoutes } from './routes/auth.routes';
 import { farmsRoutes } from './routes/farms.routes';
 import { fieldsRoutes } from './routes/fields.routes';
 import { fieldImportRoutes } from './routes/field-import.routes';
+import { terrainRoutes } from './routes/terrain.routes';
+import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
+import type { JobQueue } from './services/jobs/job-queue';
 
-export type AppOptions = { sequelize: Sequelize; config: Config; clientDir?: string };
+export type AppOptions = {
+  sequelize: Sequelize;
+  config: Config;
+  /** Uploaded and generated files (DEMs, layer images). Default: a folder under DATA_DIR. */
+  storage?: FileStorage;
+  /** The background job queue; without it, uploads that need processing answer 503. */
+  jobs?: JobQueue;
+  clientDir?: string;
+};
 
-export function createApp({ sequelize, config, clientDir }: AppOptions): Express {
+export function createApp({ sequelize, config, clientDir, jobs, storage: givenStorage }: AppOptions): Express {
+  const storage = givenStorage ?? new LocalFileStorage(path.join(config.dataDir, 'uploads'));
+  const terrain = terrainRoutes({ sequelize, storage, jobs });
   initModels(sequelize);
   const app = express();
   app.set('trust proxy', 'loopback');
@@ -45,9 +58,12 @@ export function createApp({ sequelize, config, clientDir }: AppOptions): Express
   });
   api.use('/auth', authRoutes(sequelize, config));
   api.use(requireUser(config));
-  api.use('/farms', farmsRoutes(sequelize));
-  api.use('/farms', fieldImportRoutes(sequelize));
-  api.use('/fields', fieldsRoutes(sequelize));
+  api.use('/farms', farmsRoutes({ sequelize, jobs }));
+  api.use('/farms', fieldImportRoutes({ sequelize, jobs }));
+  api.use('/farms', terrain.farms);
+  api.use('/fields', fieldsRoutes({ sequelize, jobs }));
+  api.use('/fields', terrain.fields);
+  api.use('/jobs', terrain.jobs);
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -8,6 +8,10 @@ import { stopLocalCluster } from './db/local-cluster';
 import { initModels } from './models';
 import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seeders/demo-farm';
 import { createApp } from './app';
+import { JobQueue } from './services/jobs/job-queue';
+import { LocalFileStorage } from './services/storage/file-storage';
+import { terrainJobHandler } from './services/farm-terrain.service';
+import { seedDemoTerrain } from './db/seeders/demo-terrain';
 
 function newestMtime(dir: string): number {
   let newest = 0;
@@ -32,9 +36,14 @@ async function main(): Promise<void> {
   const config = loadConfig();
   const db = await openDatabase(config);
   initModels(db.sequelize);
-  if (config.seedDemo && (await seedDemoFarm(db.sequelize))) console.log('Loaded the demo farm (Alder Run Farm).');
+  const storage = new LocalFileStorage(path.join(config.dataDir, 'uploads'));
+  const jobs = await JobQueue.start(db.sequelize, db.url, { terrain: terrainJobHandler({ sequelize: db.sequelize, storage }) });
+  if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
+    console.log('Loaded the demo farm (Alder Run Farm).');
+    if (await seedDemoTerrain({ sequelize: db.sequelize, storage, jobs })) console.log('Queued the demo elevation model for processing.');
+  }
   await buildClientIfStale();
-  const app = createApp({ sequelize: db.sequelize, config });
+  const app = createApp({ sequelize: db.sequelize, config, storage, jobs });
   const server: Server = app.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once('listening', resolve);
@@ -53,6 +62,7 @@ async function main(): Promise<void> {
     stopping = true;
     console.log(`\n${signal}: stopping …`);
     server.close();
+    await jobs.stop();
     await db.sequelize.close().catch(() => undefined);
     if (db.localClusterDir) await stopLocalCluster(db.localClusterDir).catch(() => undefined);
     process.exit(0);

@@ -7,8 +7,10 @@ import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { getFarm, listFarms } from '../services/farms.service';
 import { queryFields } from '../services/field-presenter';
 import { createField } from '../services/fields.service';
+import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import type { JobQueue } from '../services/jobs/job-queue';
 
-export function farmsRoutes(sequelize: Sequelize): Router {
+export function farmsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
   const r = Router();
   r.get('/', async (req, res) => {
     res.json(await listFarms(req.user!.id));
@@ -32,6 +34,7 @@ export function farmsRoutes(sequelize: Sequelize): Router {
       name: typeof body.properties?.name === 'string' ? body.properties.name : null,
       ownerMembershipId: body.properties?.ownerMembershipId ?? null,
     });
+    await refreshTerrainIfAny({ sequelize, jobs }, req.membership!.farmId, req.user!.id);
     res.status(201).json(feature);
   });
   return r;

@@ -4,11 +4,13 @@ import type { Sequelize } from 'sequelize';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { badRequest } from '../lib/http-error';
 import { IMPORT_LIMIT_BYTES, importFields } from '../services/import-fields.service';
+import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import type { JobQueue } from '../services/jobs/job-queue';
 
 // Memory storage: uploads are parsed in memory and never written to disk under their given name.
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_LIMIT_BYTES, files: 1 } });
 
-export function fieldImportRoutes(sequelize: Sequelize): Router {
+export function fieldImportRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
   const r = Router();
   r.post('/:farmId/fields/import', loadFarmMembership, requireRole('farmer'), upload.single('file'), async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the boundary file as the multipart part named "file".');
@@ -17,6 +19,7 @@ export function fieldImportRoutes(sequelize: Sequelize): Router {
       originalName: req.file.originalname,
       mimeType: req.file.mimetype,
     });
+    await refreshTerrainIfAny({ sequelize, jobs }, req.membership!.farmId, req.user!.id);
     res.status(201).json(result);
   });
   return r;

@@ -6,15 +6,19 @@ import { requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
 import { queryFields } from '../services/field-presenter';
 import { deleteField, updateField } from '../services/fields.service';
+import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import type { JobQueue } from '../services/jobs/job-queue';
 
-export function fieldsRoutes(sequelize: Sequelize): Router {
+export function fieldsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
   const r = Router();
   r.get('/:fieldId', loadFieldMembership, async (_req, res) => {
     const [f] = await queryFields(sequelize, { fieldIds: [res.locals.fieldId as number] });
     res.json(f);
   });
   r.patch('/:fieldId', loadFieldMembership, requireRole('farmer'), validate(FieldUpdate), async (req, res) => {
-    res.json(await updateField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number, req.body));
+    const updated = await updateField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number, req.body);
+    if (req.body.geometry) await refreshTerrainIfAny({ sequelize, jobs }, updated.properties.farmId, req.user!.id);
+    res.json(updated);
   });
   r.delete('/:fieldId', loadFieldMembership, requireRole('farmer'), async (req, res) => {
     await deleteField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number);

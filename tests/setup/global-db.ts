@@ -9,6 +9,7 @@ import type { TestProject } from 'vitest/node';
 import { startLocalCluster, stopLocalCluster } from '../../server/db/local-cluster';
 import { createSequelize } from '../../server/db/sequelize';
 import { migrate } from '../../server/db/migrate';
+import { JobQueue } from '../../server/services/jobs/job-queue';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -34,6 +35,9 @@ export default async function setup(project: TestProject) {
   const { url } = await startLocalCluster({ dir, port, database: 'fieldshed_test', fast: true, log: () => undefined });
   const s = createSequelize(url);
   await migrate(s);
+  // Create the job queue's own schema once, before test files start queues in parallel.
+  const boss = await JobQueue.start(s, url);
+  await boss.stop();
   await s.close();
   project.provide('databaseUrl', url);
   return async () => {

@@ -1,0 +1,93 @@
+import { Router } from 'express';
+import multer from 'multer';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { loadFarmMembership, membershipOf, requireRole } from '../middleware/farm-access';
+import { loadFieldMembership } from '../middleware/field-access';
+import { badRequest, HttpError, notFound } from '../lib/http-error';
+import type { FileStorage } from '../services/storage/file-storage';
+import { JobQueue } from '../services/jobs/job-queue';
+import { acceptDem, DEM_LIMIT_BYTES } from '../services/elevation-models.service';
+import { LAYER_LABELS } from '../services/farm-terrain.service';
+import type { LayerKind } from '../services/terrain';
+
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: DEM_LIMIT_BYTES, files: 1 } });
+
+type Deps = { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue };
+
+export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs: Router } {
+  const { sequelize } = deps;
+  const farms = Router();
+  farms.post('/:farmId/dems', loadFarmMembership, requireRole('farmer'), upload.single('file'), async (req, res) => {
+    if (!req.file) throw badRequest('no_file', 'Attach the elevation model as the multipart part named "file".');
+    if (!deps.jobs) throw new HttpError(503, 'jobs_unavailable', 'Background processing is not running on this server; try again later.');
+    const r = await acceptDem({ ...deps, jobs: deps.jobs }, { userId: req.user!.id }, req.membership!.farmId, { buffer: req.file.buffer, originalName: req.file.originalname });
+    res.status(202).json(r);
+  });
+
+  farms.get('/:farmId/elevation', loadFarmMembership, async (req, res) => {
+    const farmId = req.membership!.farmId;
+    const [model] = await sequelize.query<Record<string, unknown>>(
+      `SELECT id, original_name AS "originalName", epsg, width, height, cell_size_m AS "cellSizeM", created_at AS "createdAt"
+         FROM elevation_models WHERE farm_id = :farmId ORDER BY id DESC LIMIT 1`,
+      { replacements: { farmId }, type: QueryTypes.SELECT },
+    );
+    const [job] = await sequelize.query<Record<string, unknown>>(
+      `SELECT id, state, progress, message FROM processing_jobs WHERE farm_id = :farmId AND kind = 'terrain' ORDER BY created_at DESC LIMIT 1`,
+      { replacements: { farmId }, type: QueryTypes.SELECT },
+    );
+    res.json({ model: model ?? null, latestJob: job ?? null });
+  });
+
+  farms.get('/:farmId/layers', loadFarmMembership, async (req, res) => {
+    const farmId = req.membership!.farmId;
+    const rows = await sequelize.query<{ kind: LayerKind; bounds: { west: number; south: number; east: number; north: number }; legend: unknown }>(
+      `SELECT l.kind, l.bounds, l.legend FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id
+        WHERE m.farm_id = :farmId ORDER BY l.kind`,
+      { replacements: { farmId }, type: QueryTypes.SELECT },
+    );
+    res.json(
+      rows.map((r) => ({
+        key: r.kind,
+        label: LAYER_LABELS[r.kind] ?? r.kind,
+        url: `/api/farms/${farmId}/layers/${r.kind}.png`,
+        bounds: [
+          [r.bounds.south, r.bounds.west],
+          [r.bounds.north, r.bounds.east],
+        ],
+        legend: r.legend,
+      })),
+    );
+  });
+
+  farms.get('/:farmId/layers/:file', loadFarmMembership, async (req, res) => {
+    const kind = String(req.params.file).replace(/\.png$/, '');
+    const [row] = await sequelize.query<{ file_key: string }>(
+      `SELECT l.file_key FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id WHERE m.farm_id = :farmId AND l.kind = :kind`,
+      { replacements: { farmId: req.membership!.farmId, kind }, type: QueryTypes.SELECT },
+    );
+    if (!row) throw notFound('That map layer');
+    res.type('png').set('Cache-Control', 'private, max-age=60').send(await deps.storage.get(row.file_key));
+  });
+
+  const fields = Router();
+  fields.get('/:fieldId/terrain', loadFieldMembership, async (_req, res) => {
+    const [row] = await sequelize.query<{ stats: Record<string, unknown>; field_version: number; computed_at: Date; version: number }>(
+      `SELECT t.stats, t.field_version, t.computed_at, f.version FROM field_terrain t JOIN fields f ON f.id = t.field_id WHERE t.field_id = :id`,
+      { replacements: { id: res.locals.fieldId }, type: QueryTypes.SELECT },
+    );
+    if (!row) {
+      throw new HttpError(404, 'no_terrain', 'No elevation model covers this field yet: upload one for the farm, or type the slope % and slope length.');
+    }
+    res.json({ ...row.stats, computedAt: row.computed_at, upToDate: row.field_version === row.version });
+  });
+
+  const jobs = Router();
+  jobs.get('/:jobId', async (req, res) => {
+    const id = String(req.params.jobId);
+    if (!/^[0-9a-f-]{36}$/i.test(id)) throw badRequest('invalid_id', 'jobId must be a job id.');
+    const job = await JobQueue.status(sequelize, id);
+    if (!job || !(await membershipOf(req.user!.id, job.farmId))) throw notFound('That job');
+    res.json({ id: job.id, kind: job.kind, state: job.state, progress: job.progress, message: job.message });
+  });
+  return { farms, fields, jobs };
+}

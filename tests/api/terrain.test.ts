@@ -1,0 +1,152 @@
+// DEM upload → background job with progress → per-field terrain figures and map layers.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { inject } from 'vitest';
+import proj4 from 'proj4';
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import type { Express } from 'express';
+import { createSequelize } from '../../server/db/sequelize';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { initModels } from '../../server/models';
+import { JobQueue } from '../../server/services/jobs/job-queue';
+import { LocalFileStorage } from '../../server/services/storage/file-storage';
+import { terrainJobHandler } from '../../server/services/farm-terrain.service';
+import { writeGeoTiff } from '../../server/services/terrain';
+import { makeFarm, signedIn } from '../helpers/test-app';
+
+const UTM15N = '+proj=utm +zone=15 +datum=WGS84 +units=m +no_defs';
+const sequelize = createSequelize(inject('databaseUrl'));
+const uploads = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-uploads-'));
+const storage = new LocalFileStorage(uploads);
+let jobs: JobQueue;
+let app: Express;
+
+beforeAll(async () => {
+  initModels(sequelize);
+  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) });
+  app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'terrain-secret-terrain' }), storage, jobs, clientDir: '/nonexistent' });
+});
+afterAll(async () => {
+  await jobs.stop();
+  await sequelize.close();
+  rmSync(uploads, { recursive: true, force: true });
+});
+
+/** A plane rising 5 m per 100 m to the east: slope exactly 5 % everywhere (analytic). */
+function planeDem(originX = 600000, originY = 4684400, size = 80, cell = 5): Buffer {
+  const z = new Float32Array(size * size);
+  for (let r = 0; r < size; r++) for (let c = 0; c < size; c++) z[r * size + c] = 100 + 0.05 * (c + 0.5) * cell;
+  return Buffer.from(writeGeoTiff({ width: size, height: size, samples: z, originX, originY, cellSizeX: cell, cellSizeY: cell, epsg: 32615, nodata: -9999 }));
+}
+
+function utmSquare(e0: number, n0: number, side: number) {
+  const ring = [[e0, n0], [e0 + side, n0], [e0 + side, n0 + side], [e0, n0 + side], [e0, n0]].map((p) => proj4(UTM15N, 'WGS84', p));
+  return { type: 'Feature', properties: { name: 'Plane field' }, geometry: { type: 'Polygon', coordinates: [ring] } };
+}
+
+async function farmWithField() {
+  const made = await makeFarm(['farmer', 'advisor', 'landowner']);
+  const agent = await signedIn(app, made.users.farmer);
+  const field = await agent.post(`/api/farms/${made.farm.id}/fields`).send(utmSquare(600100, 4684100, 200));
+  expect(field.status).toBe(201);
+  return { ...made, agent, fieldId: field.body.id as number };
+}
+
+const demRows = async (farmId: number) => (await sequelize.query(`SELECT id FROM elevation_models WHERE farm_id = ${farmId}`))[0].length;
+
+describe('terrain from an uploaded DEM', () => {
+  it('answers 202 with a job whose progress ends done, then gives the field its slope figures', async () => {
+    const { farm, agent, fieldId } = await farmWithField();
+    const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
+    expect(up.status).toBe(202);
+    expect(up.body.jobId).toMatch(/^[0-9a-f-]{36}$/);
+    const done = await JobQueue.waitFor(sequelize, up.body.jobId);
+    expect(done.state).toBe('done');
+    const job = await agent.get(`/api/jobs/${up.body.jobId}`);
+    expect(job.body).toMatchObject({ state: 'done', progress: 1 });
+    expect(job.body.message).toMatch(/1 of 1 fields/);
+
+    const t = await agent.get(`/api/fields/${fieldId}/terrain`);
+    expect(t.status).toBe(200);
+    // Analytic: a plane z = 100 + 0.05x has slope 5 % in every cell (Horn 1981 is exact on planes).
+    expect(t.body.meanSlopePct).toBeCloseTo(5, 3);
+    expect(t.body.p90SlopePct).toBeCloseTo(5, 3);
+    expect(t.body.cellCount).toBe(40 * 40);
+    const gentle = t.body.slopeClasses.find((c: { name: string }) => c.name === 'gently sloping');
+    expect(gentle.share).toBeCloseTo(1, 6);
+    expect(t.body.meanLS).toBeGreaterThan(0);
+    expect(t.body.upToDate).toBe(true);
+
+    const layers = await agent.get(`/api/farms/${farm.id}/layers`);
+    expect(layers.body.map((l: { key: string }) => l.key).sort()).toEqual(['concentrated-flow', 'hillshade', 'ls', 'slope-classes']);
+    for (const l of layers.body) expect(l.legend.length).toBeGreaterThan(0);
+    const png = await agent.get(layers.body[0].url);
+    expect(png.status).toBe(200);
+    expect(png.headers['content-type']).toMatch(/image\/png/);
+    expect(png.body.subarray(0, 4).toString('hex')).toBe('89504e47');
+  });
+
+  it('recomputes a field’s figures when its boundary changes', async () => {
+    const { farm, agent, fieldId } = await farmWithField();
+    const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
+    await JobQueue.waitFor(sequelize, up.body.jobId);
+    const smaller = utmSquare(600100, 4684100, 100);
+    const patch = await agent.patch(`/api/fields/${fieldId}`).send({ version: 0, geometry: smaller.geometry });
+    expect(patch.status).toBe(200);
+    const latest = await agent.get(`/api/farms/${farm.id}/elevation`);
+    await JobQueue.waitFor(sequelize, latest.body.latestJob.id);
+    const t = await agent.get(`/api/fields/${fieldId}/terrain`);
+    expect(t.body.cellCount).toBe(20 * 20);
+    expect(t.body.upToDate).toBe(true);
+  });
+
+  it('says a field has no terrain yet when no DEM covers it', async () => {
+    const { agent, fieldId } = await farmWithField();
+    const t = await agent.get(`/api/fields/${fieldId}/terrain`);
+    expect(t.status).toBe(404);
+    expect(t.body.error).toBe('no_terrain');
+    expect(t.body.message).toMatch(/slope %/);
+  });
+
+  const bad: [string, () => Buffer, number, string][] = [
+    ['a file that is not a GeoTIFF', () => Buffer.from('just some text, not an image'), 415, 'unsupported_file_type'],
+    ['a DEM that does not overlap the fields', () => planeDem(650000, 4700000), 422, 'dem_outside_fields'],
+    ['an empty file', () => Buffer.alloc(0), 400, 'empty_file'],
+  ];
+  for (const [what, make, status, code] of bad) {
+    it(`refuses ${what} with ${status}, storing no row and no file`, async () => {
+      const { farm, agent } = await farmWithField();
+      const before = readdirSync(uploads, { recursive: true }).length;
+      const res = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', make(), 'dem.tif');
+      expect(res.status).toBe(status);
+      expect(res.body.error).toBe(code);
+      expect(await demRows(farm.id)).toBe(0);
+      expect(readdirSync(uploads, { recursive: true }).length).toBe(before);
+    });
+  }
+
+  it('lets only the farmer upload; other roles and strangers are refused', async () => {
+    const { farm, users } = await farmWithField();
+    for (const role of ['advisor', 'landowner'] as const) {
+      const a = await signedIn(app, users[role]);
+      expect((await a.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'p.tif')).status).toBe(403);
+      expect((await a.get(`/api/farms/${farm.id}/layers`)).status).toBe(200);
+    }
+    expect((await request(app).post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'p.tif')).status).toBe(401);
+    const stranger = await signedIn(app, (await makeFarm(['farmer'])).users.farmer);
+    expect((await stranger.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'p.tif')).status).toBe(404);
+    expect((await stranger.get(`/api/farms/${farm.id}/layers`)).status).toBe(404);
+    expect(await demRows(farm.id)).toBe(0);
+  });
+
+  it('hides a job from people who are not members of its farm', async () => {
+    const { farm, agent } = await farmWithField();
+    const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
+    const stranger = await signedIn(app, (await makeFarm(['farmer'])).users.farmer);
+    expect((await stranger.get(`/api/jobs/${up.body.jobId}`)).status).toBe(404);
+    await JobQueue.waitFor(sequelize, up.body.jobId);
+  });
+});
