@@ -17,6 +17,7 @@ import { useUpdateField } from '../api/update-field';
 import { fieldEditErrorMessage } from './conflict-message';
 import { FieldDetails } from './field-details';
 import { FieldList } from './field-list';
+import { EmptyMapHint } from './empty-map-hint';
 import { FieldsMap } from './fields-map';
 import { ImportDialog } from './import-dialog';
 import type { FocusRequest } from './map-view-control';
@@ -131,8 +132,8 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
   const saving = createField.isPending || updateField.isPending || deleteField.isPending;
 
   return (
-    <div className="flex min-h-0 flex-1 flex-col md:flex-row">
-      <div className="relative h-[60vh] min-h-[320px] flex-1 md:h-auto" data-testid="farm-map">
+    <div className="flex min-h-0 flex-1 flex-col overflow-y-auto lg:flex-row lg:overflow-hidden">
+      <div className="relative h-[60vh] min-h-[320px] shrink-0 lg:h-auto lg:flex-1" data-testid="farm-map">
         {fields.isPending ? (
           <Loading label="Loading the farm's fields…" />
         ) : fields.isError ? (
@@ -157,7 +158,9 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
             onRemoved={onRemoved}
             onCreate={saveNew}
             onDrawError={(text) => setMessage({ tone: 'error', text })}
-          />
+          >
+            {features.length === 0 ? <EmptyMapHint canEdit={canEdit} hasBasemap={Boolean(tileUrl)} /> : null}
+          </FieldsMap>
         )}
         <div className="pointer-events-none absolute inset-x-0 top-2 z-[1000] flex flex-col items-center gap-2 px-14">
           {saving ? (
@@ -191,7 +194,7 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
 
       <aside
         aria-label="Fields of this farm"
-        className="flex w-full shrink-0 flex-col gap-4 overflow-y-auto border-t border-paper-edge bg-paper p-4 md:w-96 md:border-l md:border-t-0"
+        className="flex w-full shrink-0 flex-col gap-4 border-t border-paper-edge bg-paper p-4 lg:w-96 lg:overflow-y-auto lg:border-l lg:border-t-0"
       >
         {banner}
         {canEdit ? (
@@ -221,9 +224,6 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
         ) : null}
         {fields.data ? (
           <FieldList fields={features} units={units} selectedId={selectedId} onSelect={selectFromList} />
-        ) : null}
-        {fields.data && features.length === 0 && canEdit ? (
-          <Notice>This farm has no fields yet. Draw the first one on the map or import a file.</Notice>
         ) : null}
       </aside>
 
