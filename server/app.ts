@@ -14,6 +14,7 @@ import { farmsRoutes } from './routes/farms.routes';
 import { fieldsRoutes } from './routes/fields.routes';
 import { fieldImportRoutes } from './routes/field-import.routes';
 import { terrainRoutes } from './routes/terrain.routes';
+import { estimateRoutes } from './routes/estimate.routes';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
 
@@ -64,6 +65,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/fields', fieldsRoutes({ sequelize, jobs }));
   api.use('/fields', terrain.fields);
   api.use('/jobs', terrain.jobs);
+  api.use('/estimate', estimateRoutes());
   api.use(notFoundApi);
   app.use('/api', api);
 
