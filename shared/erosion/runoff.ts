@@ -114,3 +114,8 @@ export function runoffVolumeM3(runoffMm: number, areaHa: number): number {
   assertNonNegative('areaHa', areaHa);
   return runoffMm * areaHa * 10;
 }
+
+/** The cover / treatment / condition choices of a CN table, for building a form. */
+export function curveNumberChoices(table: CnTable = DEFAULT_CN_TABLE): { cover: string; treatment: string | null; condition: string | null; table: string }[] {
+  return table.rows.map((r) => ({ cover: r.cover, treatment: r.treatment, condition: r.condition, table: r.table }));
+}
