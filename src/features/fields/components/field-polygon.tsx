@@ -23,7 +23,6 @@ export const FieldPolygon = memo(function FieldPolygon({ field, selected, handle
   // Keyed on the coordinates, not the object: a refetch with the same outline must not
   // reset a layer that geoman may be editing.
   const shapeKey = JSON.stringify(field.geometry.coordinates);
-  // eslint-disable-next-line react-hooks/exhaustive-deps
   const positions = useMemo(() => geometryToLatLngs(field.geometry), [shapeKey]);
   const eventHandlers = useMemo(
     () => ({
