@@ -81,26 +81,25 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
     );
   };
 
+  // mutateAsync, not mutate: several outlines can be saved at once when edit mode ends, and
+  // each answer must reach its own handler.
   const saveOutline = (fieldId: number, geometry: AreaGeometry) => {
     const field = findField(fieldId);
     if (!field) return;
     setMessage(null);
     setShapeProblem(null);
-    updateField.mutate(
-      { fieldId, input: { version: field.properties.version, geometry } },
-      {
-        onSuccess: (saved) =>
-          setMessage({
-            tone: saved.properties.overlaps.length ? 'caution' : 'info',
-            text: `Saved the new outline of ${saved.properties.name}, ${formatArea(saved.properties.areaHa, units)}.${overlapText(saved, units)}`,
-          }),
-        onError: (error) => {
-          // Whatever happened, the map goes back to what the server holds.
-          redrawFromCache();
-          const problem = shapeProblemFrom(error, geometry, (repaired) => saveOutline(fieldId, repaired));
-          if (problem) setShapeProblem(problem);
-          else setMessage({ tone: 'error', text: `${field.properties.name}: ${fieldEditErrorMessage(error, 'new outline')}` });
-        },
+    updateField.mutateAsync({ fieldId, input: { version: field.properties.version, geometry } }).then(
+      (saved) =>
+        setMessage({
+          tone: saved.properties.overlaps.length ? 'caution' : 'info',
+          text: `Saved the new outline of ${saved.properties.name}, ${formatArea(saved.properties.areaHa, units)}.${overlapText(saved, units)}`,
+        }),
+      (error: unknown) => {
+        // Whatever happened, the map goes back to what the server holds.
+        redrawFromCache();
+        const problem = shapeProblemFrom(error, geometry, (repaired) => saveOutline(fieldId, repaired));
+        if (problem) setShapeProblem(problem);
+        else setMessage({ tone: 'error', text: `${field.properties.name}: ${fieldEditErrorMessage(error, 'new outline')}` });
       },
     );
   };
@@ -111,16 +110,16 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
   };
 
   const onRemoved = (fieldId: number) => {
-    const field = findField(fieldId);
+    const name = findField(fieldId)?.properties.name ?? 'The field';
     setMessage(null);
     if (selectedId === fieldId) setSelectedId(null);
-    deleteField.mutate(fieldId, {
-      onSuccess: () => setMessage({ tone: 'info', text: `Deleted ${field?.properties.name ?? 'the field'}.` }),
-      onError: (error) => {
+    deleteField.mutateAsync(fieldId).then(
+      () => setMessage({ tone: 'info', text: `Deleted ${name}.` }),
+      (error: unknown) => {
         redrawFromCache();
-        setMessage({ tone: 'error', text: `${field?.properties.name ?? 'The field'} was not deleted: ${fieldEditErrorMessage(error, 'deletion')}` });
+        setMessage({ tone: 'error', text: `${name} was not deleted: ${fieldEditErrorMessage(error, 'deletion')}` });
       },
-    });
+    );
   };
 
   const selectFromList = (fieldId: number) => {
