@@ -22,7 +22,7 @@ export function farmsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: 
 
   r.get('/:farmId/fields', loadFarmMembership, async (req, res) => {
     const m = req.membership!;
-    const features = await queryFields(sequelize, { farmId: m.farmId, ...(m.role === 'landowner' ? { ownerMembershipId: m.id } : {}) });
+    const features = await queryFields(sequelize, { farmId: m.farmId, ...(m.role === 'landowner' ? { ownerMembershipId: m.id, visibleToOwner: m.id } : {}) });
     const body: FieldCollection = { type: 'FeatureCollection', features };
     res.json(body);
   });

@@ -11,8 +11,9 @@ import type { JobQueue } from '../services/jobs/job-queue';
 
 export function fieldsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
   const r = Router();
-  r.get('/:fieldId', loadFieldMembership, async (_req, res) => {
-    const [f] = await queryFields(sequelize, { fieldIds: [res.locals.fieldId as number] });
+  r.get('/:fieldId', loadFieldMembership, async (req, res) => {
+    const m = req.membership!;
+    const [f] = await queryFields(sequelize, { fieldIds: [res.locals.fieldId as number], ...(m.role === 'landowner' ? { visibleToOwner: m.id } : {}) });
     res.json(f);
   });
   r.patch('/:fieldId', loadFieldMembership, requireRole('farmer'), validate(FieldUpdate), async (req, res) => {

@@ -43,7 +43,13 @@ function present(r: Row): FieldFeature {
 /** Fields of a farm, optionally only some ids or only those owned by one membership. */
 export async function queryFields(
   sequelize: Sequelize,
-  where: { farmId?: number; fieldIds?: number[]; ownerMembershipId?: number },
+  where: {
+    farmId?: number;
+    fieldIds?: number[];
+    ownerMembershipId?: number;
+    /** A landowner's membership: overlaps name only fields they may see. */
+    visibleToOwner?: number;
+  },
   transaction?: Transaction,
 ): Promise<FieldFeature[]> {
   const conds: string[] = [];
@@ -58,11 +64,12 @@ export async function queryFields(
                      'areaM2', ST_Area(ST_Intersection(o.geom, f.geom)::geography)) ORDER BY o.id)
                FROM fields o
               WHERE o.farm_id = f.farm_id AND o.id <> f.id AND ST_Intersects(o.geom, f.geom)
+                AND (CAST(:visibleToOwner AS integer) IS NULL OR o.owner_membership_id = :visibleToOwner)
                 AND ST_Area(ST_Intersection(o.geom, f.geom)::geography) > 1) AS overlaps
        FROM fields f
       WHERE ${conds.join(' AND ') || 'true'}
       ORDER BY f.name, f.id`,
-    { replacements: where, type: QueryTypes.SELECT, transaction },
+    { replacements: { visibleToOwner: null, ...where }, type: QueryTypes.SELECT, transaction },
   );
   return rows.map(present);
 }

@@ -140,7 +140,14 @@ function run(inp: EstimateInputParsed): EstimateResult {
   const lsMethod = `${inp.lsMethod === 'usle' ? 'USLE' : `RUSLE, ${inp.rillRatio} rill/interrill ratio`}, ${inp.slopePct} %, ${round(lengthForLsM, 1)} m, m = ${round(ls.m, 3)}`;
   const l = prov(ls.l, '', lsSource, lsMethod);
   const s = prov(ls.s, '', lsSource, lsMethod);
-  const lsP = prov(ls.ls, '', lsSource, lsMethod);
+  let lsP = prov(ls.ls, '', lsSource, lsMethod);
+  if (inp.lsFromGrid) {
+    // A field's LS from its elevation model (mean of the per-cell Desmet–Govers L × RUSLE S)
+    // replaces the one-slope LS; L and S above stay as the mean-slope figures for reference.
+    lsP = prov(inp.lsFromGrid.value, '', inp.lsFromGrid.source, inp.lsFromGrid.method);
+    ls = { ...ls, ls: inp.lsFromGrid.value };
+    warnings.push('L and S are shown for the mean slope; the soil loss uses the LS of the elevation model.');
+  }
 
   // ---- C
   let c: Provenance;

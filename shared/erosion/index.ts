@@ -17,3 +17,5 @@ export * from './soil-group';
 export * from './drainage';
 export * from './amendments';
 export * from './estimate';
+export * from './risk-class';
+export * from './version';

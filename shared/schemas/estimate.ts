@@ -158,6 +158,10 @@ export const EstimateInput = z.object({
   /** Field area, ha: gives tonnes per year and runoff volume. */
   areaHa: num('areaHa', 0, 100000, ' ha').optional(),
   runoff: RunoffInput.optional(),
+  /** LS worked out elsewhere (a field's elevation model); replaces the one-slope LS. */
+  lsFromGrid: z
+    .object({ value: num('lsFromGrid.value', 0, 100), source: z.string().min(1).max(300), method: z.string().min(1).max(300) })
+    .optional(),
 });
 /** What a form sends (defaults may be left out). */
 export type EstimateInput = z.input<typeof EstimateInput>;

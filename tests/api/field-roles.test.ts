@@ -89,3 +89,19 @@ describe('role checks on every field route', () => {
     expect(res.body).toEqual([{ id: farmId, name: expect.any(String), role: 'advisor' }]);
   });
 });
+
+describe('what a landowner may learn about other fields', () => {
+  it('does not name fields they do not own among the overlaps of their own field', async () => {
+    const { farm, users, memberships } = await makeFarm(['farmer', 'landowner']);
+    const farmer = await signedIn(ctx.app, users.farmer);
+    const owned = squareFeature(-91.70, 42.31, 200, 'Rented field');
+    (owned.properties as Record<string, unknown>).ownerMembershipId = memberships.landowner.id;
+    const mine = (await farmer.post(`/api/farms/${farm.id}/fields`).send(owned)).body.id;
+    await farmer.post(`/api/farms/${farm.id}/fields`).send(squareFeature(-91.6999, 42.31, 200, 'Neighbour field'));
+    expect((await farmer.get(`/api/fields/${mine}`)).body.properties.overlaps).toHaveLength(1);
+    const landowner = await signedIn(ctx.app, users.landowner);
+    expect((await landowner.get(`/api/fields/${mine}`)).body.properties.overlaps).toEqual([]);
+    const list = await landowner.get(`/api/farms/${farm.id}/fields`);
+    expect(list.body.features[0].properties.overlaps).toEqual([]);
+  });
+});

@@ -1,0 +1,71 @@
+// Seasons, cropping and practices per field per season, farm climate and typed ground.
+import { z } from 'zod';
+import { Crop, Tillage, Practice } from './estimate';
+
+export const SeasonLabel = z.string().trim().min(1, 'season must not be empty').max(40, 'season must be at most 40 characters');
+export const SeasonCreate = z.object({ label: SeasonLabel });
+export type Season = { id: number; label: string };
+
+const pct = (f: string) => z.number({ error: `${f} must be a number` }).min(0, `${f} must be at least 0 %`).max(100, `${f} must be at most 100 %`);
+const isoDate = (f: string) => z.string().regex(/^\d{4}-\d{2}-\d{2}$/, `${f} must be a date like 2027-09-15`);
+
+export const CoverCropInput = z.object({
+  species: z.string().trim().min(1, 'coverCrop.species is required').max(80),
+  seededOn: isoDate('coverCrop.seededOn').nullable().optional(),
+  terminatedOn: isoDate('coverCrop.terminatedOn').nullable().optional(),
+});
+
+export const CroppingUpdate = z
+  .object({
+    season: SeasonLabel,
+    /** The version read; omit when creating the season's first record for the field. */
+    version: z.number().int().nonnegative().optional(),
+    crop: Crop,
+    tillage: Tillage.nullable().optional(),
+    residuePct: pct('residuePct').nullable().optional(),
+    /** Pasture and hay: living and dead ground cover. */
+    groundCoverPct: pct('groundCoverPct').nullable().optional(),
+    coverCrop: CoverCropInput.nullable().optional(),
+    practice: Practice.default('none'),
+    terraceIntervalM: z.number().min(1, 'terraceIntervalM must be at least 1 m').max(1000).nullable().optional(),
+  })
+  .refine((c) => c.crop === 'pasture' || c.crop === 'hay or meadow' || c.tillage != null, { message: 'tillage is required for this crop', path: ['tillage'] })
+  .refine((c) => c.crop !== 'pasture' || c.groundCoverPct != null, { message: 'groundCoverPct is required for pasture', path: ['groundCoverPct'] })
+  .refine((c) => c.practice !== 'terraces' || c.terraceIntervalM != null, { message: 'terraceIntervalM is required with terraces', path: ['terraceIntervalM'] });
+export type CroppingUpdate = z.input<typeof CroppingUpdate>;
+
+export type Cropping = {
+  fieldId: number;
+  season: string;
+  crop: z.infer<typeof Crop>;
+  tillage: z.infer<typeof Tillage> | null;
+  residuePct: number | null;
+  groundCoverPct: number | null;
+  coverCrop: z.infer<typeof CoverCropInput> | null;
+  practice: z.infer<typeof Practice>;
+  terraceIntervalM: number | null;
+  version: number;
+  updatedAt: string;
+};
+
+export const ClimateUpdate = z
+  .object({
+    version: z.number().int().nonnegative().optional(),
+    rFrom: z.enum(['value', 'precipitation'], { error: "rFrom must be 'value' or 'precipitation'" }),
+    /** R in MJ·mm/(ha·h·yr) when rFrom is 'value'. */
+    rValue: z.number().min(0, 'rValue must be at least 0').max(100_000, 'rValue must be at most 100000').nullable().optional(),
+    annualPrecipitationMm: z.number().min(0).max(12_000, 'annualPrecipitationMm must be at most 12000 mm').nullable().optional(),
+    /** Design storm depth (e.g. the 24-h, 10-year rainfall), mm. */
+    designStormMm: z.number({ error: 'designStormMm must be a number' }).min(1, 'designStormMm must be at least 1 mm').max(1000, 'designStormMm must be at most 1000 mm'),
+  })
+  .refine((c) => c.rFrom !== 'value' || c.rValue != null, { message: 'rValue is required when rFrom is value', path: ['rValue'] })
+  .refine((c) => c.rFrom !== 'precipitation' || c.annualPrecipitationMm != null, { message: 'annualPrecipitationMm is required when rFrom is precipitation', path: ['annualPrecipitationMm'] });
+export type ClimateUpdate = z.input<typeof ClimateUpdate>;
+export type Climate = { rFrom: 'value' | 'precipitation'; rValue: number | null; annualPrecipitationMm: number | null; designStormMm: number; version: number };
+
+export const GroundUpdate = z.object({
+  version: z.number().int().nonnegative().optional(),
+  slopePct: z.number().min(0, 'slopePct must be at least 0 %').max(100, 'slopePct must be at most 100 %').nullable(),
+  slopeLengthM: z.number().min(1, 'slopeLengthM must be at least 1 m').max(2000, 'slopeLengthM must be at most 2000 m').nullable(),
+});
+export type Ground = { slopePct: number | null; slopeLengthM: number | null; version: number };
