@@ -114,11 +114,11 @@ try {
     'Bytes/cell: typed-array memory (process.memoryUsage().arrayBuffers) held after the stage, beyond the DEM,',
     'plus the stage\'s known scratch where noted. The results alone are slope 4 + hillshade 1 + direction 1 +',
     'contributing area 4 + LS 4 = 14 B/cell (+4 for the optional soil-loss grid); the working scratch on top of the',
-    'results is ≤ 1 B/cell plus the heap and FIFO (a few bytes per cell of the flood front).
-Caveat: the measured column is noisy (negative values mean an earlier copy, e.g. the GeoTIFF decoder's buffers,
-was freed after the baseline); the accounted sizes above are the figures to rely on. Against the < 10 B/cell
-target: 14 B/cell of kept results + ≤ 1 B/cell scratch, i.e. the target is missed unless the hillshade is
-skipped and LS is kept instead of slope (results are kept because routes and layers need them).',
+    'results is ≤ 1 B/cell plus the heap and FIFO (a few bytes per cell of the flood front).',
+    'Caveat: the measured column is noisy (negative values mean an earlier copy, e.g. the GeoTIFF decoder\'s buffers,',
+    'was freed after the baseline); the accounted sizes above are the figures to rely on. Against the < 10 B/cell',
+    'target: 14 B/cell of kept results + ≤ 1 B/cell scratch, i.e. the target is missed unless the hillshade is',
+    'skipped and LS is kept instead of slope (results are kept because routes and layers need them).',
     ...lines,
     '',
   ].join('\n');
