@@ -1,0 +1,57 @@
+// One field's assessment for one season: the engine on the gathered inputs, stored with its
+// inputs, results and engine version. It is recomputed whenever any input has changed (the
+// stored inputs' hash no longer matches) or the engine version moved on.
+import { createHash } from 'node:crypto';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { estimate, riskClassOf, ENGINE_VERSION } from '../../shared/erosion';
+import type { FieldAssessment } from '../../shared/schemas/assessment';
+import type { FieldFeature } from '../../shared/schemas/field';
+import { buildEstimateInput, gatherInputs } from './assessment-inputs';
+
+const hashOf = (x: unknown) => createHash('sha256').update(JSON.stringify(x)).digest('hex');
+
+export async function assessField(sequelize: Sequelize, field: FieldFeature, season: { id: number; label: string }): Promise<FieldAssessment> {
+  const gathered = await gatherInputs(sequelize, field, season);
+  const hash = hashOf({ gathered, engine: ENGINE_VERSION });
+  const [stored] = await sequelize.query<{ inputs_hash: string; results: FieldAssessment }>(
+    `SELECT inputs_hash, results FROM assessments WHERE field_id = :fieldId AND season_id = :seasonId`,
+    { replacements: { fieldId: field.id, seasonId: season.id }, type: QueryTypes.SELECT },
+  );
+  if (stored && stored.inputs_hash === hash) return stored.results;
+
+  const { input, gaps, lines } = buildEstimateInput(gathered);
+  const result = input ? estimate(input) : null;
+  const ok = result && result.ok ? result : null;
+  const soil = gathered.soil;
+  const assessment: FieldAssessment = {
+    fieldId: field.id,
+    farmId: gathered.field.farmId,
+    name: gathered.field.name,
+    season: season.label,
+    areaHa: gathered.field.areaHa,
+    inputs: lines,
+    gaps,
+    estimate: ok,
+    failure: result && !result.ok ? result.reason : null,
+    soilLossTPerHaYr: ok ? ok.soilLoss.tPerHaYr : null,
+    toleranceTPerHaYr: ok ? ok.factors.t.value : null,
+    aOverT: ok ? ok.aOverT : null,
+    tonnesPerYr: ok ? (ok.soilLoss.tonnesPerYr ?? null) : null,
+    runoffMm: ok?.runoff ? ok.runoff.runoffMm : null,
+    runoffM3: ok?.runoff?.volumeM3 ?? null,
+    riskClass: ok ? riskClassOf(ok.aOverT) : null,
+    problemClay: soil.problemClay,
+    problemClayReasons: soil.problemClayReasons,
+    drainageClass: soil.drainageClass,
+    lsSource: ok ? (input?.lsFromGrid ? 'elevation model' : 'typed slope') : null,
+    engineVersion: ENGINE_VERSION,
+    computedAt: new Date().toISOString(),
+  };
+  await sequelize.query(
+    `INSERT INTO assessments (field_id, season_id, inputs_hash, inputs, results, engine_version) VALUES (:fieldId, :seasonId, :hash, :inputs, :results, :v)
+     ON CONFLICT (field_id, season_id) DO UPDATE SET inputs_hash = EXCLUDED.inputs_hash, inputs = EXCLUDED.inputs, results = EXCLUDED.results,
+       engine_version = EXCLUDED.engine_version, computed_at = now()`,
+    { replacements: { fieldId: field.id, seasonId: season.id, hash, inputs: JSON.stringify({ gathered, estimateInput: input }), results: JSON.stringify(assessment), v: ENGINE_VERSION } },
+  );
+  return assessment;
+}
