@@ -12,6 +12,7 @@ import { JobQueue } from './services/jobs/job-queue';
 import { LocalFileStorage } from './services/storage/file-storage';
 import { terrainJobHandler } from './services/farm-terrain.service';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
+import { seedDemoSeason } from './db/seeders/demo-season';
 
 function newestMtime(dir: string): number {
   let newest = 0;
@@ -39,7 +40,8 @@ async function main(): Promise<void> {
   const storage = new LocalFileStorage(path.join(config.dataDir, 'uploads'));
   const jobs = await JobQueue.start(db.sequelize, db.url, { terrain: terrainJobHandler({ sequelize: db.sequelize, storage }) });
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
-    console.log('Loaded the demo farm (Alder Run Farm).');
+    await seedDemoSeason(db.sequelize);
+    console.log('Loaded the demo farm (Alder Run Farm) and its 2027 season.');
     if (await seedDemoTerrain({ sequelize: db.sequelize, storage, jobs })) console.log('Queued the demo elevation model for processing.');
   }
   await buildClientIfStale();

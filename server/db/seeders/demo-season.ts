@@ -1,0 +1,32 @@
+// The demo farm's 2027 season (data/demo/season-2027.json): climate, cropping and typed slope
+// length per field. Run once with the demo farm.
+import { readFileSync } from 'node:fs';
+import type { Sequelize } from 'sequelize';
+import { Farm, User } from '../../models';
+import { queryFields } from '../../services/field-presenter';
+import { putClimate, putGround } from '../../services/climate-ground.service';
+import { putCropping } from '../../services/seasons.service';
+import { demoFields, DEMO_ACCOUNTS, DEMO_FARM_NAME } from './demo-farm';
+import type { ClimateUpdate, CroppingUpdate } from '../../../shared/schemas/season';
+
+type SeasonFile = {
+  season: string;
+  climate: ClimateUpdate;
+  fields: Record<string, { cropping: Omit<CroppingUpdate, 'season'>; slopeLengthM: number }>;
+};
+
+export async function seedDemoSeason(sequelize: Sequelize): Promise<void> {
+  const data = JSON.parse(readFileSync('data/demo/season-2027.json', 'utf8')) as SeasonFile;
+  const farm = (await Farm.findOne({ where: { name: DEMO_FARM_NAME } }))!;
+  const farmer = (await User.findOne({ where: { email: DEMO_ACCOUNTS[0].email } }))!;
+  const actor = { userId: farmer.id };
+  await putClimate(sequelize, actor, farm.id, data.climate);
+  const keyByName = new Map(demoFields().map((f) => [f.properties.name, (f.properties as { key?: string }).key ?? '']));
+  for (const f of await queryFields(sequelize, { farmId: farm.id })) {
+    const spec = data.fields[keyByName.get(f.properties.name) ?? ''];
+    if (!spec) continue;
+    const field = { id: f.id, farmId: farm.id };
+    await putCropping(sequelize, actor, field, { ...spec.cropping, season: data.season });
+    await putGround(sequelize, actor, field, { slopePct: null, slopeLengthM: spec.slopeLengthM });
+  }
+}
