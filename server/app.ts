@@ -15,6 +15,7 @@ import { fieldsRoutes } from './routes/fields.routes';
 import { fieldImportRoutes } from './routes/field-import.routes';
 import { terrainRoutes } from './routes/terrain.routes';
 import { estimateRoutes } from './routes/estimate.routes';
+import { soilsRoutes } from './routes/soils.routes';
 import { seasonsRoutes } from './routes/seasons.routes';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
@@ -67,6 +68,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/fields', terrain.fields);
   api.use('/jobs', terrain.jobs);
   api.use('/estimate', estimateRoutes());
+  api.use('/', soilsRoutes({ sequelize, storage }));
   const seasons = seasonsRoutes(sequelize);
   api.use('/farms', seasons.farms);
   api.use('/fields', seasons.fields);

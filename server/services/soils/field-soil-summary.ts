@@ -1,56 +1,18 @@
-// One field's soil figures for other services (assessment, board): lab samples averaged,
-// feel tests as a fallback, the soil map's area-weighted K, T and soil groups where mapped.
+// One field's soil figures for other services (assessment, board) and GET /api/fields/:fieldId/soil-summary.
+// Rules (summarise-soils.ts): lab samples averaged (mean sand/silt/clay/OM/pH/buffer pH, the
+// shallowest depth to gray); a feel-test-only field gets its class and K from the engine's
+// table by texture class and OM; the soil map's area-weighted K, T and soil-group mix win where
+// mapped; T defaults to 5 t/ac/yr; problem clay when clay ≥ 40 %, a clay class, or not worth amending.
 import type { Sequelize } from 'sequelize';
+import type { FieldSoilSummary } from '../../../shared/schemas/soils';
+import { aggregateMapUnits, fieldSoilMapUnits } from './field-soil-map';
+import { sampleRows } from './soil-sample-presenter';
+import { summariseSoils } from './summarise-soils';
 
-export type FieldSoilSummary = {
-  sampleCount: number;
-  sandPct: number | null;
-  siltPct: number | null;
-  clayPct: number | null;
-  organicMatterPct: number | null;
-  textureClass: string | null;
-  ph: number | null;
-  bufferPh: number | null;
-  depthToGrayCm: number | null;
-  drainageClass: string | null;
-  notWorthAmending: boolean;
-  kUs: number | null;
-  kSource: string | null;
-  tTonPerAcYr: number | null;
-  tSource: string | null;
-  hsg: string | null;
-  hsgShares: { group: string; share: number }[];
-  bulkDensity: number | null;
-  cecCmolPerKg: number | null;
-  espPct: number | null;
-  problemClay: boolean;
-  problemClayReasons: string[];
-};
+export type { FieldSoilSummary } from '../../../shared/schemas/soils';
 
-/** The soil summary of one field (work in progress: samples and soil map follow). */
-export async function fieldSoilSummary(_sequelize: Sequelize, _fieldId: number): Promise<FieldSoilSummary> {
-  return {
-    sampleCount: 0,
-    sandPct: null,
-    siltPct: null,
-    clayPct: null,
-    organicMatterPct: null,
-    textureClass: null,
-    ph: null,
-    bufferPh: null,
-    depthToGrayCm: null,
-    drainageClass: null,
-    notWorthAmending: false,
-    kUs: null,
-    kSource: null,
-    tTonPerAcYr: 5,
-    tSource: 'deep soil default [practice]',
-    hsg: null,
-    hsgShares: [],
-    bulkDensity: null,
-    cecCmolPerKg: null,
-    espPct: null,
-    problemClay: false,
-    problemClayReasons: [],
-  };
+/** The soil summary of one field; a field with no samples and no map gets nulls and the default T. */
+export async function fieldSoilSummary(sequelize: Sequelize, fieldId: number): Promise<FieldSoilSummary> {
+  const [samples, units] = await Promise.all([sampleRows(sequelize, { fieldId }), fieldSoilMapUnits(sequelize, fieldId)]);
+  return summariseSoils(samples, aggregateMapUnits(units));
 }

@@ -1,0 +1,37 @@
+// Stores the samples of an uploaded CSV: all or nothing, unless the person accepts the good
+// rows of a file that also has bad ones. One transaction.
+import type { Sequelize } from 'sequelize';
+import type { SoilCsvImportResult } from '../../../shared/schemas/soils';
+import { HttpError, invalid } from '../../lib/http-error';
+import { parseSoilCsv } from './parse-soil-csv';
+import { insertSample } from './soil-samples.service';
+import { querySamples } from './soil-sample-presenter';
+
+export const SOIL_CSV_LIMIT_BYTES = 1024 * 1024;
+
+export async function importSoilCsv(
+  sequelize: Sequelize,
+  actor: { userId: number },
+  fieldId: number,
+  file: { buffer: Buffer; originalName: string },
+  options: { acceptGoodRows: boolean },
+): Promise<SoilCsvImportResult> {
+  const parsed = parseSoilCsv(file.buffer);
+  if (!parsed.ok) throw new HttpError(parsed.status, parsed.error, parsed.message);
+  const { rows, rejected } = parsed;
+  if (rejected.length > 0 && (!options.acceptGoodRows || rows.length === 0)) {
+    const n = rejected.length;
+    const advice = rows.length > 0
+      ? ` Fix ${n === 1 ? 'it' : 'them'} and upload again, or send acceptGoodRows=true to store the ${rows.length} good row${rows.length === 1 ? '' : 's'}.`
+      : ' Fix the file and upload it again.';
+    throw invalid('csv_rows_invalid', `${n} row${n === 1 ? '' : 's'} of ${file.originalName || 'the CSV'} cannot be used, so nothing was stored. First problem: ${rejected[0].reason}.${advice}`, {
+      rejected,
+    });
+  }
+  const created = await sequelize.transaction(async (t) => {
+    const ids: number[] = [];
+    for (const r of rows) ids.push(await insertSample(sequelize, actor, fieldId, r.input, t));
+    return querySamples(sequelize, { sampleIds: ids }, t);
+  });
+  return { created, rejected };
+}

@@ -1,0 +1,145 @@
+// A field's soil figures from its samples and the soil map units under it. Pure: rows in,
+// summary out, every number by the engine in shared/erosion with its source named.
+import {
+  DEFAULT_DRAINAGE_KEY,
+  classifyTexture,
+  drainageVerdict,
+  hydrologicSoilGroup,
+  kFactorWilliams,
+  kFromTextureTable,
+  organicCarbonFromOm,
+  soilGroupFromTexture,
+  TEXTURE_CLASSES,
+  type TextureClass,
+} from '../../../shared/erosion';
+import type { FieldSoilSummary } from '../../../shared/schemas/soils';
+import type { MapAggregate } from './field-soil-map';
+import type { SampleRow } from './soil-sample-presenter';
+
+/** Organic matter taken when no sample gives it, for the K table only [practice]. */
+export const ASSUMED_OM_PCT = 2;
+/** Clay at or above this is problem clay (the clay classes of the SSM triangle start at 40 %). */
+export const PROBLEM_CLAY_PCT = 40;
+export const PROBLEM_CLAY_CLASSES: readonly string[] = ['clay', 'silty clay', 'sandy clay'];
+export const DEFAULT_T_SOURCE = 'deep soil default [practice]';
+
+const mean = (xs: (number | null)[]): number | null => {
+  const v = xs.filter((x): x is number => x !== null);
+  return v.length ? v.reduce((s, x) => s + x, 0) / v.length : null;
+};
+const pct = (share: number) => `${Math.round(share * 100)} %`;
+const round1 = (x: number) => Math.round(x * 10) / 10;
+const isTexture = (s: string | null): s is TextureClass => s !== null && (TEXTURE_CLASSES as readonly string[]).includes(s);
+
+/** The most common feel-test class; a tie goes to the latest sample. */
+function feelClass(samples: SampleRow[]): TextureClass | null {
+  const counts = new Map<string, number>();
+  let best: string | null = null;
+  for (const s of samples) {
+    if (s.kind !== 'feel' || !s.texture_class) continue;
+    const n = (counts.get(s.texture_class) ?? 0) + 1;
+    counts.set(s.texture_class, n);
+    if (best === null || n >= (counts.get(best) ?? 0)) best = s.texture_class;
+  }
+  return isTexture(best) ? best : null;
+}
+
+export function summariseSoils(samples: SampleRow[], map: MapAggregate): FieldSoilSummary {
+  const lab = samples.filter((s) => s.kind === 'lab' && s.sand_pct !== null);
+  const sandPct = mean(lab.map((s) => s.sand_pct));
+  const siltPct = mean(lab.map((s) => s.silt_pct));
+  const clayPct = mean(lab.map((s) => s.clay_pct));
+  const organicMatterPct = mean(samples.map((s) => s.organic_matter_pct));
+  const grays = samples.map((s) => s.depth_to_gray_cm).filter((d): d is number => d !== null);
+  const depthToGrayCm = grays.length ? Math.min(...grays) : null;
+
+  // Texture: the mean of the lab fractions (SSM ch. 3), else the feel tests, else the soil map.
+  let textureClass: TextureClass | null = null;
+  let textureFrom: 'lab' | 'feel' | 'map' | null = null;
+  if (sandPct !== null && siltPct !== null && clayPct !== null) [textureClass, textureFrom] = [classifyTexture({ sand: sandPct, silt: siltPct, clay: clayPct }), 'lab'];
+  else if (feelClass(samples)) [textureClass, textureFrom] = [feelClass(samples), 'feel'];
+  else if (isTexture(map.textureClass)) [textureClass, textureFrom] = [map.textureClass, 'map'];
+
+  // Drainage: the shallowest gray of any sample (or no gray down to the deepest look), else the map.
+  let drainageClass: string | null = null;
+  let notWorthAmending = false;
+  let drainageFrom: 'samples' | 'map' | null = null;
+  const describedTo = samples.map((s) => s.described_to_cm).filter((d): d is number => d !== null);
+  const verdict = depthToGrayCm !== null
+    ? drainageVerdict({ depthToGrayCm })
+    : describedTo.length ? drainageVerdict({ depthToGrayCm: null, describedToCm: Math.max(...describedTo) }) : null;
+  if (verdict?.ok) [drainageClass, notWorthAmending, drainageFrom] = [verdict.value.drainageClass, verdict.value.notWorthAmending, 'samples'];
+  else if (map.drainageClass) {
+    [drainageClass, drainageFrom] = [map.drainageClass, 'map'];
+    notWorthAmending = DEFAULT_DRAINAGE_KEY.notWorthAmendingClasses.includes(map.drainageClass);
+  }
+
+  // K: the soil map where mapped; else Williams (EPIC) from the lab fractions; else the table by class and OM.
+  let kUs: number | null = null;
+  let kSource: string | null = null;
+  if (map.kUs !== null) {
+    kUs = map.kUs;
+    kSource = `soil map K, area-weighted over the ${pct(map.kShareOfField)} of the field that the map gives a K for`;
+  } else if (textureFrom === 'lab' && organicMatterPct !== null) {
+    kUs = kFactorWilliams({ sandPct: sandPct!, siltPct: siltPct!, clayPct: clayPct!, organicCarbonPct: organicCarbonFromOm(organicMatterPct) }).us;
+    kSource = `Williams (EPIC) equation, Sharpley & Williams 1990 eq. 2.96, from the mean of ${lab.length} lab sample${lab.length === 1 ? '' : 's'}`;
+  } else if (textureClass) {
+    const om = organicMatterPct ?? ASSUMED_OM_PCT;
+    const r = kFromTextureTable(textureClass, om);
+    if (r.ok) {
+      kUs = r.value.us;
+      const omWords = organicMatterPct === null ? `organic matter unknown, ${ASSUMED_OM_PCT} % assumed [practice]` : `organic matter ${round1(om)} %`;
+      kSource = `${r.value.source}: ${textureClass}, ${omWords}${r.value.note ? `; ${r.value.note}` : ''}`;
+    }
+  }
+
+  // T: the soil map's where mapped, else the deep-soil default.
+  const tTonPerAcYr = map.tTonPerAcYr ?? 5;
+  const tSource = map.tTonPerAcYr !== null ? `soil map T, area-weighted over the ${pct(map.tShareOfField)} of the field that the map gives a T for` : DEFAULT_T_SOURCE;
+
+  // Hydrologic soil group: the map's mix wins; else a water table within 60 cm (gray colours) gives D; else by texture.
+  let hsgShares = map.hsgShares;
+  let hsg = map.hsg;
+  if (hsgShares.length === 0) {
+    const wet = depthToGrayCm !== null && depthToGrayCm < 60 ? hydrologicSoilGroup({ depthToWaterTableCm: depthToGrayCm }) : null;
+    if (wet?.ok) hsg = wet.value.hsg;
+    else if (textureClass) hsg = soilGroupFromTexture(textureClass).hsg;
+    hsgShares = hsg ? [{ group: hsg, share: 1 }] : [];
+  }
+
+  const problemClayReasons: string[] = [];
+  if (clayPct !== null && clayPct >= PROBLEM_CLAY_PCT) problemClayReasons.push(`clay ${round1(clayPct)} % (${PROBLEM_CLAY_PCT} % or more)`);
+  if (textureClass && PROBLEM_CLAY_CLASSES.includes(textureClass)) problemClayReasons.push(`texture class ${textureClass}${textureFrom === 'map' ? ' (soil map)' : ''}`);
+  if (notWorthAmending) {
+    problemClayReasons.push(
+      drainageFrom === 'samples' && depthToGrayCm !== null
+        ? `gray (redoximorphic) colours at ${round1(depthToGrayCm)} cm: ${drainageClass}, a seasonal water table that amendments will not fix`
+        : `mapped as ${drainageClass}: a seasonal water table that amendments will not fix`,
+    );
+  }
+
+  return {
+    sampleCount: samples.length,
+    sandPct,
+    siltPct,
+    clayPct,
+    organicMatterPct,
+    textureClass,
+    ph: mean(samples.map((s) => s.ph)),
+    bufferPh: mean(samples.map((s) => s.buffer_ph)),
+    depthToGrayCm,
+    drainageClass,
+    notWorthAmending,
+    kUs,
+    kSource,
+    tTonPerAcYr,
+    tSource,
+    hsg,
+    hsgShares,
+    bulkDensity: mean(samples.map((s) => s.bulk_density_mg_m3)),
+    cecCmolPerKg: mean(samples.map((s) => s.cec_cmol_kg)),
+    espPct: mean(samples.map((s) => s.esp_pct)),
+    problemClay: problemClayReasons.length > 0,
+    problemClayReasons,
+  };
+}
