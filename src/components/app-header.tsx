@@ -1,6 +1,7 @@
-// The bar across every signed-in screen: product name, the farm in view, and a slot for the user menu.
+// The bar across every signed-in screen: product name, the farm in view, the quick-estimate
+// link and a slot for the user menu.
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
+import { Link, NavLink } from 'react-router-dom';
 import { paths } from '../lib/paths';
 
 export function AppHeader({ farmName, screen, menu }: { farmName?: string; screen: string; menu?: ReactNode }) {
@@ -21,7 +22,20 @@ export function AppHeader({ farmName, screen, menu }: { farmName?: string; scree
           </>
         ) : null}
       </nav>
-      <div className="ml-auto">{menu}</div>
+      <div className="ml-auto flex flex-wrap items-center gap-x-4 gap-y-2">
+        <NavLink
+          to={paths.estimate.getHref()}
+          data-testid="nav-estimate"
+          className={({ isActive }) =>
+            `rounded px-2 py-0.5 text-sm font-semibold underline-offset-2 hover:underline ${
+              isActive ? 'bg-clay-light text-clay-dark' : 'text-clay-dark'
+            }`
+          }
+        >
+          Quick estimate
+        </NavLink>
+        {menu}
+      </div>
     </header>
   );
 }

@@ -46,3 +46,8 @@ export function layerToGeometry(layer: L.Layer): AreaGeometry | null {
   if (geometry.type === 'Polygon' || geometry.type === 'MultiPolygon') return geometry as AreaGeometry;
   return null;
 }
+
+/** Leaflet positions for GeoJSON-ordered [lng, lat] points. */
+export function pointsToLatLngs(points: [number, number][]): L.LatLngTuple[] {
+  return points.map(([lng, lat]) => [lat, lng] as L.LatLngTuple);
+}

@@ -9,6 +9,9 @@ import { useConfig } from '../features/config/api/get-config';
 import { useFarm } from '../features/farms/api/get-farm';
 import { RoleBadge } from '../features/farms/components/role-badge';
 import { FarmMapWorkspace } from '../features/fields/components/farm-map-workspace';
+import { ElevationPanel } from '../features/terrain/components/elevation-panel';
+import { FieldTerrainFigures } from '../features/terrain/components/field-terrain-figures';
+import { TerrainMapLayers } from '../features/terrain/components/terrain-map-layers';
 import { isApiError } from '../lib/api-client';
 import { paths } from '../lib/paths';
 import type { Role } from '../../shared/schemas/auth';
@@ -55,6 +58,8 @@ export function FarmMapPage() {
     );
   }
 
+  const units = me.data?.units ?? 'ha';
+
   return (
     <div className="flex h-full flex-col">
       {header}
@@ -68,6 +73,14 @@ export function FarmMapPage() {
           units={me.data.units}
           tileUrl={config.data?.tileUrl ?? null}
           tileAttribution={config.data?.tileAttribution ?? null}
+          mapLayers={(selected) => (
+            <TerrainMapLayers
+              farmId={farmId}
+              selectedField={selected ? { id: selected.id, name: selected.properties.name } : null}
+            />
+          )}
+          fieldExtra={(field) => <FieldTerrainFigures fieldId={field.id} farmId={farmId} units={units} />}
+          panelSections={<ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />}
           banner={
             <div className="flex flex-col gap-2">
               <div className="flex items-center gap-2">

@@ -34,6 +34,12 @@ type Props = {
   tileAttribution: string | null;
   /** Role notes shown at the top of the panel. */
   banner?: ReactNode;
+  /** More map layers (other features' overlays), given the selected field. */
+  mapLayers?: (selected: FieldFeature | null) => ReactNode;
+  /** More of the selected field's details, under its own. */
+  fieldExtra?: (field: FieldFeature) => ReactNode;
+  /** Farm-wide sections at the foot of the panel. */
+  panelSections?: ReactNode;
 };
 
 const overlapText = (field: FieldFeature, units: Units) =>
@@ -41,7 +47,8 @@ const overlapText = (field: FieldFeature, units: Units) =>
     ? ` It overlaps ${field.properties.overlaps.map((o) => `${o.name} (${formatArea(o.areaHa, units)})`).join(', ')}.`
     : '';
 
-export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, tileAttribution, banner }: Props) {
+export function FarmMapWorkspace(props: Props) {
+  const { farmId, farmBbox, canEdit, units, tileUrl, tileAttribution, banner } = props;
   const fields = useFields(farmId);
   const createField = useCreateField(farmId);
   const updateField = useUpdateField(farmId);
@@ -158,6 +165,7 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
             onCreate={saveNew}
             onDrawError={(text) => setMessage({ tone: 'error', text })}
           >
+            {props.mapLayers?.(selected)}
             {features.length === 0 ? <EmptyMapHint canEdit={canEdit} hasBasemap={Boolean(tileUrl)} /> : null}
           </FieldsMap>
         )}
@@ -219,11 +227,14 @@ export function FarmMapWorkspace({ farmId, farmBbox, canEdit, units, tileUrl, ti
               setMessage({ tone: 'info', text: `Deleted ${selected.properties.name}.` });
               setSelectedId(null);
             }}
-          />
+          >
+            {props.fieldExtra?.(selected)}
+          </FieldDetails>
         ) : null}
         {fields.data ? (
           <FieldList fields={features} units={units} selectedId={selectedId} onSelect={selectFromList} />
         ) : null}
+        {props.panelSections}
       </aside>
 
       {importOpen ? <ImportDialog farmId={farmId} onClose={closeImport} /> : null}

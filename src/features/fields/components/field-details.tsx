@@ -1,5 +1,5 @@
 // The selected field: name (renamed in place by a farmer), area, perimeter, centre, overlaps.
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { formatArea, formatLength } from '../../../lib/units';
@@ -9,12 +9,20 @@ import { useDeleteField } from '../api/delete-field';
 import { fieldEditErrorMessage } from './conflict-message';
 import { RenameFieldForm } from './rename-field-form';
 
-type Props = { field: FieldFeature; units: Units; canEdit: boolean; onClose: () => void; onDeleted: () => void };
+type Props = {
+  field: FieldFeature;
+  units: Units;
+  canEdit: boolean;
+  onClose: () => void;
+  onDeleted: () => void;
+  /** More about the field from other features (terrain figures), under the outline facts. */
+  children?: ReactNode;
+};
 
 const formatCentre = ([lng, lat]: [number, number]) =>
   `${Math.abs(lat).toFixed(5)}° ${lat >= 0 ? 'N' : 'S'}, ${Math.abs(lng).toFixed(5)}° ${lng >= 0 ? 'E' : 'W'}`;
 
-export function FieldDetails({ field, units, canEdit, onClose, onDeleted }: Props) {
+export function FieldDetails({ field, units, canEdit, onClose, onDeleted, children }: Props) {
   const [renaming, setRenaming] = useState(false);
   const [confirmDelete, setConfirmDelete] = useState(false);
   const deleteField = useDeleteField(field.properties.farmId);
@@ -66,6 +74,7 @@ export function FieldDetails({ field, units, canEdit, onClose, onDeleted }: Prop
           <p className="mt-1">Redraw one of the outlines so that each piece of ground is counted once.</p>
         </Notice>
       ) : null}
+      {children}
       {canEdit ? (
         <div className="mt-3 flex flex-col gap-2 border-t border-paper-edge pt-2">
           {confirmDelete ? (
