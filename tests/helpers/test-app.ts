@@ -59,7 +59,7 @@ export async function signedIn(app: Express, user: User) {
 export function squareFeature(lng: number, lat: number, sideM = 200, name?: string) {
   const dLat = sideM / 111_132;
   const dLng = sideM / (111_320 * Math.cos((lat * Math.PI) / 180));
-  const ring = [
+  const ring: [number, number][] = [
     [lng, lat],
     [lng + dLng, lat],
     [lng + dLng, lat + dLat],
