@@ -8,6 +8,12 @@ import type { FieldAssessment } from '../../shared/schemas/assessment';
 import type { FieldFeature } from '../../shared/schemas/field';
 import { buildEstimateInput, gatherInputs } from './assessment-inputs';
 
+/** DESIGN.md "The job": gray, mottled subsoil means a high water table; amendments will not fix it. */
+export const NOT_WORTH_AMENDING_ADVICE =
+  'Gray or mottled subsoil near the surface means the ground stays wet: gypsum, lime or organic matter will not fix it. ' +
+  'Consider raised or no-dig beds, permanent cover, or drainage designed to local standards by a qualified person ' +
+  '(check for buried utilities before any digging, and follow local drainage rules).';
+
 const hashOf = (x: unknown) => createHash('sha256').update(JSON.stringify(x)).digest('hex');
 
 export async function assessField(sequelize: Sequelize, field: FieldFeature, season: { id: number; label: string }): Promise<FieldAssessment> {
@@ -43,6 +49,7 @@ export async function assessField(sequelize: Sequelize, field: FieldFeature, sea
     problemClay: soil.problemClay,
     problemClayReasons: soil.problemClayReasons,
     drainageClass: soil.drainageClass,
+    groundAdvice: soil.notWorthAmending ? NOT_WORTH_AMENDING_ADVICE : null,
     lsSource: ok ? (input?.lsFromGrid ? 'elevation model' : 'typed slope') : null,
     engineVersion: ENGINE_VERSION,
     computedAt: new Date().toISOString(),

@@ -27,6 +27,8 @@ export type FieldAssessment = {
   problemClay: boolean;
   problemClayReasons: string[];
   drainageClass: string | null;
+  /** When the ground is not worth amending: what to do instead, with the caution. */
+  groundAdvice: string | null;
   lsSource: 'elevation model' | 'typed slope' | null;
   engineVersion: string;
   computedAt: string;
