@@ -46,6 +46,13 @@ function numberOf(text: string): number | null | 'bad' {
   return Number.isFinite(n) ? n : 'bad';
 }
 
+/** The separator of the header row: the most frequent of comma, semicolon and tab. */
+function delimiterOf(text: string): string {
+  const first = text.split(/\r?\n/, 1)[0] ?? '';
+  const counts = [',', ';', '\t'].map((d) => ({ d, n: first.split(d).length - 1 }));
+  return counts.sort((a, b) => b.n - a.n)[0].n > 0 ? counts[0].d : ',';
+}
+
 function normaliseHeader(h: string): string {
   return h.trim().toLowerCase().replace(/[\s-]+/g, '_');
 }
@@ -55,7 +62,8 @@ export function parseSoilCsv(bytes: Uint8Array): CsvParse {
   if (looksBinary(bytes)) return { ok: false, status: 415, error: 'unsupported_file_type', message: 'The file is not text: upload the soil samples as a CSV file (comma, semicolon or tab separated).' };
   let records: { record: string[]; info: { lines: number } }[];
   try {
-    records = parse(decodeText(bytes), { delimiter: [',', ';', '\t'], relax_column_count: true, skip_empty_lines: true, info: true, bom: true }) as unknown as typeof records;
+    const text = decodeText(bytes);
+    records = parse(text, { delimiter: delimiterOf(text), relax_column_count: true, skip_empty_lines: true, info: true, bom: true }) as unknown as typeof records;
   } catch (e) {
     const lines = (e as { lines?: number }).lines;
     return { ok: false, status: 400, error: 'invalid_csv', message: `The CSV could not be read${lines ? ` near row ${lines}` : ''}: ${(e as Error).message}` };
