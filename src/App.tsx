@@ -1,11 +1,11 @@
-// Routes. The farm map is loaded on demand (Leaflet + geoman are large).
+// Routes. The farm map (Leaflet + geoman) and the quick estimate (the engine and its tables)
+// are loaded on demand.
 import { QueryClientProvider } from '@tanstack/react-query';
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { Loading } from './components/ui/spinner';
 import { RequireAuth } from './features/auth/components/require-auth';
 import { paths } from './lib/paths';
 import { queryClient } from './lib/query-client';
-import { EstimatePage } from './pages/estimate-page';
 import { FarmsPage } from './pages/farms-page';
 import { NotFoundPage } from './pages/not-found-page';
 import { RegisterPage } from './pages/register-page';
@@ -24,7 +24,10 @@ const router = createBrowserRouter([
         path: paths.farmMap.path,
         lazy: async () => ({ Component: (await import('./pages/farm-map-page')).FarmMapPage }),
       },
-      { path: paths.estimate.path, element: <EstimatePage /> },
+      {
+        path: paths.estimate.path,
+        lazy: async () => ({ Component: (await import('./pages/estimate-page')).EstimatePage }),
+      },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

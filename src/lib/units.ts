@@ -32,3 +32,6 @@ export function formatLength(lengthM: number, units: Units): string {
 }
 
 export const UNIT_LABELS: Record<Units, string> = { ha: 'hectares', ac: 'acres' };
+
+/** Cubic metres in one acre-foot (43,560 ft³). */
+export const M3_PER_ACRE_FT = 1233.48183754752;

@@ -1,22 +1,26 @@
-// Estimate: a soil-loss estimate without a field. A placeholder until the engine's form lands.
-import { Link } from 'react-router-dom';
+// Quick estimate: a soil-loss and runoff estimate from typed values, without a field.
 import { AppHeader } from '../components/app-header';
+import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
-import { paths } from '../lib/paths';
+import { EstimateWorkspace } from '../features/estimate/components/estimate-workspace';
 
 export function EstimatePage() {
+  const me = useMe();
   return (
     <div className="flex min-h-full flex-col">
-      <AppHeader screen="Estimate" menu={<UserMenu />} />
-      <main className="mx-auto w-full max-w-2xl px-4 py-6">
-        <h1 className="text-2xl font-semibold">Estimate</h1>
-        <p className="mt-2 text-ink-soft">
-          A quick soil-loss estimate from typed slope, soil and cover values will live here.
-        </p>
-        <Link to={paths.farms.getHref()} className="mt-4 inline-block font-semibold text-clay-dark underline">
-          Back to your farms
-        </Link>
+      <AppHeader screen="Quick estimate" menu={<UserMenu />} />
+      <main className="mx-auto flex w-full max-w-6xl flex-col gap-4 px-4 py-6">
+        <div>
+          <h1 className="text-2xl font-semibold">Quick estimate</h1>
+          <p className="mt-1 max-w-3xl text-ink-soft">
+            Soil loss by RUSLE (A = R × K × LS × C × P) and storm runoff by the curve-number method, for one slope you
+            describe. Inputs are in SI units; the results show in SI or US units.
+          </p>
+        </div>
+        <EstimateWorkspace defaultUnits={me.data?.units === 'ac' ? 'us' : 'si'} />
       </main>
     </div>
   );
 }
+
+export default EstimatePage;

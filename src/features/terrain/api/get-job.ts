@@ -1,4 +1,4 @@
-// GET /api/jobs/:jobId — one background job; polled every second until it is done or failed.
+// GET /api/jobs/:jobId — one background job; polled about once a second until it is done or failed.
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 
@@ -14,7 +14,7 @@ export type Job = {
 };
 
 /** How often a queued or running job is asked about, ms. */
-export const JOB_POLL_MS = 1000;
+export const JOB_POLL_MS = 700;
 
 export const isJobActive = (state: JobState | undefined) => state === 'queued' || state === 'running';
 

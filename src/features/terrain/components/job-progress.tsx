@@ -31,7 +31,7 @@ export function JobProgress({ job, label }: { job: Pick<Job, 'state' | 'progress
       >
         <div className="h-full bg-clay transition-[width] duration-500" style={{ width: `${pct}%` }} />
       </div>
-      {job.message ? <p className="text-sm text-ink-soft">{job.message}</p> : null}
+      {job.message && job.message !== STATE_WORDS[job.state] ? <p className="text-sm text-ink-soft">{job.message}</p> : null}
     </div>
   );
 }

@@ -34,7 +34,8 @@ export function LayerSwitcher({ layers, active, onChange, reliefUnder, onReliefU
   return (
     <div className="absolute right-2 top-2 z-[1000] max-h-[calc(100%-1rem)] w-64 max-w-[calc(100%-4rem)] overflow-y-auto">
       <div ref={boxRef} data-testid="layer-switcher" className="rounded-md border border-paper-edge bg-paper/95 text-sm shadow">
-        <details open>
+        {/* Open on wide screens; folded on a phone, where it would cover the fields. */}
+        <details open={typeof window === 'undefined' || window.innerWidth >= 640}>
           <summary className="cursor-pointer select-none px-3 py-2 font-semibold">Map layers</summary>
           <div className="flex flex-col gap-2 border-t border-paper-edge px-3 py-2">
             <fieldset className="flex flex-col gap-1">

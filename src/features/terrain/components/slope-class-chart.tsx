@@ -5,8 +5,8 @@ import type { SlopeClassShare } from '../api/get-field-terrain';
 import type { LegendEntry } from '../api/get-layers';
 import { NO_COLOUR } from './legend-swatch';
 
-const ROW_H = 22;
-const LABEL_W = 168;
+const ROW_H = 24;
+const LABEL_W = 176;
 const BAR_W = 110;
 const VALUE_W = 46;
 const WIDTH = LABEL_W + BAR_W + VALUE_W;
@@ -32,7 +32,7 @@ export function SlopeClassChart({ classes, legend }: { classes: SlopeClassShare[
         aria-label={classes.map((c) => `${c.name} (${slopeRange(c)}): ${pctText(c.share)}`).join('; ')}
         viewBox={`0 0 ${WIDTH} ${height}`}
         className="num w-full max-w-sm text-ink"
-        style={{ fontSize: 11 }}
+        style={{ fontSize: 12 }}
       >
         {classes.map((c, i) => {
           const y = i * ROW_H;

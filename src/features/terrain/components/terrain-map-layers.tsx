@@ -1,11 +1,11 @@
 // Everything terrain draws on the farm map: the active layer as an image overlay in its own
 // pane under the field outlines (the shaded relief is on by default: it is the offline map
 // base), the selected field's concentrated-flow dots above them, and the layer switcher.
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { ImageOverlay, Pane } from 'react-leaflet';
 import { useElevation } from '../api/get-elevation';
 import { useFieldTerrain } from '../api/get-field-terrain';
-import { useLayers, type TerrainLayer } from '../api/get-layers';
+import { useLayers, type LayerKey, type TerrainLayer } from '../api/get-layers';
 import { FLOW_PANE, FlowPointsLayer } from './flow-points-layer';
 import { LayerSwitcher, type ActiveLayer } from './layer-switcher';
 
@@ -14,6 +14,12 @@ const RELIEF_PANE = 'fs-terrain-relief';
 const THEME_PANE = 'fs-terrain-theme';
 /** A coloured layer lets the relief and outlines show through. */
 const THEME_OPACITY = 0.72;
+/** The switcher lists the base first, then the themes from overview to detail. */
+const LAYER_ORDER: LayerKey[] = ['hillshade', 'slope-classes', 'ls', 'soil-loss', 'concentrated-flow'];
+const rank = (key: LayerKey) => {
+  const i = LAYER_ORDER.indexOf(key);
+  return i === -1 ? LAYER_ORDER.length : i;
+};
 
 type Props = { farmId: number; selectedField: { id: number; name: string } | null };
 
@@ -24,7 +30,7 @@ export function TerrainMapLayers({ farmId, selectedField }: Props) {
   const [chosen, setChosen] = useState<ActiveLayer | null>(null);
   const [reliefUnder, setReliefUnder] = useState(true);
 
-  const list = layers.data ?? [];
+  const list = useMemo(() => [...(layers.data ?? [])].sort((a, b) => rank(a.key) - rank(b.key)), [layers.data]);
   const relief = list.find((l) => l.key === 'hillshade') ?? null;
   // Until the user picks, the shaded relief is the base; a picked layer that is gone falls back too.
   const active: ActiveLayer =

@@ -1,0 +1,67 @@
+// Every factor of the estimate: its value and unit (SI, or US where the units differ), where
+// it came from and how it was worked out; recalled values and rules of thumb are marked.
+import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
+import { formatFigure } from './format-figure';
+
+const FACTORS: { key: keyof EstimateSuccess['factors']; name: string }[] = [
+  { key: 'r', name: 'R, rainfall erosivity' },
+  { key: 'k', name: 'K, soil erodibility' },
+  { key: 'l', name: 'L, slope length' },
+  { key: 's', name: 'S, slope steepness' },
+  { key: 'ls', name: 'LS, used in A' },
+  { key: 'c', name: 'C, cover and management' },
+  { key: 'p', name: 'P, support practice' },
+  { key: 't', name: 'T, soil-loss tolerance' },
+];
+
+const FLAG_BADGES: Record<NonNullable<Provenance['flag']>, { text: string; title: string }> = {
+  memory: { text: 'recalled value', title: 'Recalled from the literature, not re-read from the source: check it before relying on it.' },
+  practice: { text: 'rule of thumb', title: 'Common practice with no single published source.' },
+};
+
+export function FlagBadge({ flag }: { flag: Provenance['flag'] }) {
+  if (!flag) return null;
+  const b = FLAG_BADGES[flag];
+  return (
+    <span title={b.title} data-testid={`flag-${flag}`} className="ml-1 inline-block whitespace-nowrap rounded border border-ink-faint bg-paper-deep px-1.5 text-xs font-medium text-ink-soft">
+      {b.text}
+    </span>
+  );
+}
+
+export function FactorTable({ factors, units, extra }: { factors: EstimateSuccess['factors']; units: 'si' | 'us'; extra?: { name: string; p: Provenance }[] }) {
+  const rows = [...FACTORS.map((f) => ({ name: f.name, p: factors[f.key] })), ...(extra ?? [])];
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full border-collapse text-left text-sm" data-testid="factor-table">
+        <caption className="mb-1 text-left font-serif text-lg font-semibold">Where the figures come from</caption>
+        <thead>
+          <tr className="border-b border-ink-faint text-ink-soft">
+            <th scope="col" className="py-1 pr-2 font-medium">Factor</th>
+            <th scope="col" className="py-1 pr-2 text-right font-medium">Value</th>
+            <th scope="col" className="py-1 pr-2 font-medium">Unit</th>
+            <th scope="col" className="py-1 pr-2 font-medium">Source</th>
+            <th scope="col" className="py-1 font-medium">Method</th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map(({ name, p }) => {
+            const shown = units === 'us' && p.us ? p.us : { value: p.value, unit: p.unit };
+            return (
+              <tr key={name} className="border-b border-paper-edge align-top">
+                <th scope="row" className="py-1.5 pr-2 font-medium">{name}</th>
+                <td className="num py-1.5 pr-2 text-right whitespace-nowrap">{formatFigure(shown.value)}</td>
+                <td className="py-1.5 pr-2 text-xs text-ink-soft">{shown.unit || 'no unit'}</td>
+                <td className="py-1.5 pr-2">
+                  {p.source}
+                  <FlagBadge flag={p.flag} />
+                </td>
+                <td className="py-1.5 text-xs text-ink-soft">{p.method}</td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

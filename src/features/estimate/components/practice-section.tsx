@@ -1,0 +1,56 @@
+// P, support practice, and the soil-loss tolerance T and field area the results use.
+import { useFormContext, useWatch } from 'react-hook-form';
+import { ChoiceGroup } from '../../../components/ui/choice-group';
+import { SelectField } from '../../../components/ui/select-field';
+import { tonPerAcToTPerHa } from '../../../../shared/erosion';
+import type { EstimateFormValues } from './estimate-form-values';
+import { FormGroup, NumField } from './form-bits';
+
+export function PracticeSection() {
+  const { register, control } = useFormContext<EstimateFormValues>();
+  const [from, practice] = useWatch({ control, name: ['p.from', 'p.practice'] });
+  return (
+    <FormGroup title="Practice: P factor" testId="estimate-p" help="Work across the slope that slows the water down.">
+      <ChoiceGroup
+        label="P from"
+        inputProps={register('p.from')}
+        choices={[
+          { value: 'practice', label: 'A practice' },
+          { value: 'value', label: 'A known P value' },
+        ]}
+      />
+      {from === 'value' ? (
+        <NumField name="p.value" label="P" unit="0–1, no unit" testId="input-p-value" />
+      ) : (
+        <>
+          <SelectField label="Support practice" data-testid="input-p-practice" {...register('p.practice')}>
+            <option value="none">None (up and down the slope)</option>
+            <option value="contouring">Contour farming</option>
+            <option value="strip cropping">Contour strip cropping</option>
+            <option value="terraces">Terraces</option>
+          </SelectField>
+          {practice === 'terraces' ? (
+            <NumField name="p.terraceIntervalM" label="Distance between terraces" unit="m" testId="input-p-terrace-interval" />
+          ) : null}
+        </>
+      )}
+    </FormGroup>
+  );
+}
+
+export function TargetSection() {
+  const { control } = useFormContext<EstimateFormValues>();
+  const t = useWatch({ control, name: 'tTonPerAcYr' });
+  const tHint =
+    typeof t === 'number' && Number.isFinite(t)
+      ? `= ${tonPerAcToTPerHa(t).toLocaleString('en-US', { maximumFractionDigits: 1 })} t/ha/yr`
+      : 'From the soil survey; 5 t/ac/yr (11.2 t/ha/yr) for a deep soil when left empty.';
+  return (
+    <FormGroup title="Tolerance and area" testId="estimate-t">
+      <div className="grid gap-3 sm:grid-cols-2">
+        <NumField name="tTonPerAcYr" label="Soil-loss tolerance T" unit="t/ac/yr" optional hint={tHint} testId="input-t" />
+        <NumField name="areaHa" label="Field area" unit="ha" optional hint="Gives tonnes per year and runoff volume." testId="input-area" />
+      </div>
+    </FormGroup>
+  );
+}
