@@ -82,6 +82,8 @@ export async function uploadSoilMap(
   const names: string[] = [];
   for (const u of read.units) for (const k of Object.keys(u.properties)) if (!names.includes(k)) names.push(k);
   return sequelize.transaction(async (t) => {
+    // One upload per farm at a time: the farm row is the lock, so two uploads cannot both replace the map.
+    await sequelize.query('SELECT id FROM farms WHERE id = :farmId FOR UPDATE', { replacements: { farmId }, transaction: t });
     const previous = await mapRow(sequelize, farmId, t);
     await sequelize.query('DELETE FROM soil_maps WHERE farm_id = :farmId', { replacements: { farmId }, transaction: t });
     const mapping = guessMapping(names, previous ? mappingOf(previous) : undefined);
