@@ -64,7 +64,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/farms', farmsRoutes({ sequelize, jobs }));
   api.use('/farms', fieldImportRoutes({ sequelize, jobs }));
   api.use('/farms', terrain.farms);
-  api.use('/fields', fieldsRoutes({ sequelize, jobs }));
+  api.use('/fields', fieldsRoutes({ sequelize, jobs, storage }));
   api.use('/fields', terrain.fields);
   api.use('/jobs', terrain.jobs);
   api.use('/estimate', estimateRoutes());

@@ -8,8 +8,9 @@ import { queryFields } from '../services/field-presenter';
 import { deleteField, updateField } from '../services/fields.service';
 import { refreshTerrainIfAny } from '../services/terrain-refresh';
 import type { JobQueue } from '../services/jobs/job-queue';
+import type { FileStorage } from '../services/storage/file-storage';
 
-export function fieldsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
+export function fieldsRoutes({ sequelize, jobs, storage }: { sequelize: Sequelize; jobs?: JobQueue; storage: FileStorage }): Router {
   const r = Router();
   r.get('/:fieldId', loadFieldMembership, async (req, res) => {
     const m = req.membership!;
@@ -22,7 +23,8 @@ export function fieldsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?:
     res.json(updated);
   });
   r.delete('/:fieldId', loadFieldMembership, requireRole('farmer'), async (req, res) => {
-    await deleteField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number);
+    const fileKeys = await deleteField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number);
+    await Promise.all(fileKeys.map((k) => storage.remove(k).catch((e: unknown) => console.error(`could not remove ${k}:`, e))));
     res.status(204).end();
   });
   return r;

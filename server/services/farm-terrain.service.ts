@@ -1,10 +1,11 @@
 // The terrain job: run the pipeline on the farm's newest elevation model, render the map
 // layers, and store every field's terrain figures. Re-run when a boundary changes (the
-// whole pipeline takes ~1 s for 4 M cells, see docs/benchmarks.md, so no partial update).
+// whole pipeline takes ~1.7 s for 4 M cells, see docs/benchmarks.md, so no partial update).
+// Field borders break overland flow for LS; where water gathers is drawn from unbroken flow.
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { FileStorage } from './storage/file-storage';
 import { newKey } from './storage/file-storage';
-import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats, converterBetween, DEFAULT_SLOPE_CLASSES, parseSlopeClasses } from './terrain';
+import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats, converterBetween, rasterisePolygon, DEFAULT_SLOPE_CLASSES, parseSlopeClasses } from './terrain';
 import type { LayerKind, SlopeClass } from './terrain';
 import { queryFields } from './field-presenter';
 import type { JobHandler } from './jobs/job-queue';
@@ -41,9 +42,21 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
     const read = await readDem(await storage.get(model.file_key));
     if (!read.ok) throw new Error(`The elevation model cannot be read: ${read.reason}`);
     const dem = read.dem;
+    const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
+    // Each field's cells carry its label, so overland flow starts afresh at its border.
+    const fields = await queryFields(sequelize, { farmId: job.farmId });
+    const labels = new Int32Array(dem.width * dem.height);
+    const ringsByField = new Map<number, Array<Array<[number, number]>>>();
+    fields.forEach((f, idx) => {
+      const rings = reprojectBoundary(f.geometry, dem.epsg);
+      if (!rings.ok) return;
+      ringsByField.set(f.id, rings.rings);
+      for (const cell of rasterisePolygon(rings.rings, frame)) labels[cell] = idx + 1;
+    });
     let last = 0;
     const pending: Promise<void>[] = [];
     const grids = runTerrain(dem, {
+      flowBreakLabels: labels,
       onProgress: (f, stage) => {
         if (f - last >= 0.05 || f === 1) {
           last = f;
@@ -52,7 +65,6 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
       },
     });
     await Promise.all(pending);
-    const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
     const slopeClasses = await farmSlopeClasses(sequelize, job.farmId);
 
     await report(0.7, 'Drawing map layers');
@@ -73,7 +85,6 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
     }
 
     await report(0.85, 'Working out each field');
-    const fields = await queryFields(sequelize, { farmId: job.farmId });
     const toWgs = converterBetween(dem.epsg, 4326);
     let covered = 0;
     const old = await sequelize.query<{ file_key: string }>(
@@ -93,9 +104,9 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
       }
       await sequelize.query(`DELETE FROM field_terrain WHERE field_id IN (SELECT id FROM fields WHERE farm_id = :farmId)`, { replacements: { farmId: job.farmId }, transaction: t });
       for (const f of fields) {
-        const rings = reprojectBoundary(f.geometry, dem.epsg);
-        if (!rings.ok) continue;
-        const s = fieldTerrainStats({ rings: rings.rings, grid: frame, slopePct: grids.slopePct, ls: grids.ls, contributingAreaM2: grids.contributingAreaM2, slopeClasses });
+        const rings = ringsByField.get(f.id);
+        if (!rings) continue;
+        const s = fieldTerrainStats({ rings, grid: frame, slopePct: grids.slopePct, ls: grids.ls, contributingAreaM2: grids.contributingAreaM2, slopeClasses });
         if (!s.ok) continue;
         covered++;
         const { cells: _cells, points, ...flow } = s.stats.concentratedFlow;

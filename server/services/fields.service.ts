@@ -107,11 +107,17 @@ export async function updateField(sequelize: Sequelize, actor: Actor, fieldId: n
   });
 }
 
-export async function deleteField(sequelize: Sequelize, actor: Actor, fieldId: number): Promise<void> {
-  await sequelize.transaction(async (t) => {
+/** Removes the field and its rows; returns the storage keys of its files for the caller to delete after commit. */
+export async function deleteField(sequelize: Sequelize, actor: Actor, fieldId: number): Promise<string[]> {
+  return sequelize.transaction(async (t) => {
     const field = await Field.findByPk(fieldId, { transaction: t });
     if (!field) throw notFound('That field');
+    const photos = await sequelize.query<{ image_key: string; thumbnail_key: string }>(
+      `SELECT image_key, thumbnail_key FROM soil_photos WHERE field_id = :fieldId`,
+      { replacements: { fieldId }, type: QueryTypes.SELECT, transaction: t },
+    );
     await field.destroy({ transaction: t });
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'field', entityId: fieldId, action: 'deleted', detail: { name: field.name } }, t);
+    return photos.flatMap((p) => [p.image_key, p.thumbnail_key]);
   });
 }

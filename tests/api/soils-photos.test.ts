@@ -150,4 +150,13 @@ describe('soil profile photos', () => {
     expect(files()).toBe(before);
     expect((await agent.get(res.body.url)).status).toBe(404);
   });
+
+  it('removes the photo files when their field is deleted', async () => {
+    const { agent, fieldId } = await fieldWithAgent();
+    const before = files();
+    await agent.post(`/api/fields/${fieldId}/soil-photos`).attach('file', await makeImage('png', 40, 30), 'p.png');
+    expect(files()).toBe(before + 2);
+    expect((await agent.delete(`/api/fields/${fieldId}`)).status).toBe(204);
+    expect(files()).toBe(before);
+  });
 });

@@ -48,9 +48,9 @@ export async function makeFarm(roles: Role[] = ['farmer', 'advisor', 'landowner'
 }
 
 /** A supertest agent signed in as the user (keeps the session cookie). */
-export async function signedIn(app: Express, user: User) {
+export async function signedIn(app: Express, user: User, password = TEST_PASSWORD) {
   const agent = request.agent(app);
-  const res = await agent.post('/api/auth/login').send({ email: user.email, password: TEST_PASSWORD });
+  const res = await agent.post('/api/auth/login').send({ email: user.email, password });
   if (res.status !== 200) throw new Error(`login failed: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
 }

@@ -59,12 +59,15 @@ export function flowDirectionD8(filledM: Float32Array, grid: GridShape): Uint8Ar
  * topological order (a cell is passed on once all its donors are in; no queue is needed).
  * Cells that are NaN in `nodataMask` (e.g. the filled DEM) get NaN. `out` may be a spent
  * Float32 grid to reuse, even `nodataMask` itself (each cell is read before it is written).
+ * With `labels`, area passes from a cell to its receiver only when both carry the same label:
+ * a flow break at label edges (e.g. field borders), while the walk order stays the same.
  */
 export function flowAccumulationM2(
   dir: Uint8Array,
   grid: GridShape,
   nodataMask: Float32Array,
   out?: Float32Array,
+  labels?: Int32Array,
 ): Float32Array {
   const { width: w, height: h } = grid;
   const n = w * h;
@@ -91,7 +94,7 @@ export function flowAccumulationM2(
       const d = dir[j];
       if (d === 0) break;
       const k = j + off[d];
-      acc[k] += acc[j];
+      if (!labels || labels[k] === labels[j]) acc[k] += acc[j];
       if (--indeg[k] !== 0) break;
       j = k;
     }

@@ -17,7 +17,15 @@ export type LsGridArgs = {
   contributingAreaM2: Float32Array;
   flowDir: Uint8Array;
   rillRatio?: RillRatio;
+  /**
+   * Longest slope length the L factor may reach, m. RUSLE's slope-length relations were fitted
+   * to plots and hillslopes up to about 305 m (1000 ft, AH-703 ch. 4); past that, overland flow
+   * has gathered into channels, which RUSLE does not model. Default 305 m.
+   */
+  maxSlopeLengthM?: number;
 };
+
+export const DEFAULT_MAX_SLOPE_LENGTH_M = 305;
 
 const BETA_SCALE: Record<RillRatio, number> = { low: 0.5, moderate: 1, high: 2 };
 
@@ -37,11 +45,13 @@ export function lsGrid(args: LsGridArgs): Float32Array {
     const d = Math.sqrt(cellAreaM2);
     for (let k = 0; k < 9; k++) lnScale[k] = Math.log(d / (D8_DIR_FACTOR[k] * UNIT_PLOT_LENGTH_M));
     const invArea = 1 / cellAreaM2;
+    // A_in = λ·D for a flow strip one cell wide, so u = A_in/D² = λ/D: cap u at λmax/D.
+    const uMax = (args.maxSlopeLengthM ?? DEFAULT_MAX_SLOPE_LENGTH_M) / d;
     for (let i = r * w, end = i + w; i < end; i++) {
       const s = slopePct[i];
       const a = acc[i] - cellAreaM2;
       if (!(s >= 0) || !(a >= -1e-3 * cellAreaM2)) { out[i] = NaN; continue; }
-      const u = a > 0 ? a * invArea : 0;
+      const u = a > 0 ? Math.min(a * invArea, uMax) : 0;
       // θ = atan(s/100), so sin θ = s / √(s² + 100²)
       const sin = s / Math.sqrt(s * s + 10000);
       // AH-703 eq. 4-4: S = 10.8 sin θ + 0.03 (s < 9 %), 16.8 sin θ − 0.50 (s ≥ 9 %)

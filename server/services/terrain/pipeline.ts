@@ -23,6 +23,12 @@ export type TerrainOptions = {
   computeEdges?: boolean;
   /** Skip the hillshade (e.g. when only field figures are wanted). */
   skipHillshade?: boolean;
+  /**
+   * Field label per cell (0 outside fields). When given, LS counts only the area upslope inside
+   * the same field: field borders, headlands, roads and ditches usually interrupt overland flow
+   * (common practice, no single source). `contributingAreaM2` stays unbroken, for where water gathers.
+   */
+  flowBreakLabels?: Int32Array;
 };
 
 export type TerrainGrids = {
@@ -68,7 +74,8 @@ export function runTerrain(dem: DemGrid, options: TerrainOptions = {}): TerrainG
   step('flow-direction');
   const contributingAreaM2 = flowAccumulationM2(flowDir, dem, filled, filled);
   step('flow-accumulation');
-  const ls = lsGrid({ grid: dem, slopePct, contributingAreaM2, flowDir, rillRatio: options.rillRatio });
+  const lsAreaM2 = options.flowBreakLabels ? flowAccumulationM2(flowDir, dem, contributingAreaM2, undefined, options.flowBreakLabels) : contributingAreaM2;
+  const ls = lsGrid({ grid: dem, slopePct, contributingAreaM2: lsAreaM2, flowDir, rillRatio: options.rillRatio });
   step('ls');
   const soilLoss = options.soilLossFactors ? soilLossGrid(ls, options.soilLossFactors) : null;
   step('soil-loss');

@@ -25,7 +25,7 @@ describe('LS grid', () => {
       dir[i] = Math.floor(rnd() * 9);
     }
     for (const rillRatio of ['low', 'moderate', 'high'] as const) {
-      const ls = lsGrid({ grid, slopePct: slope, contributingAreaM2: acc, flowDir: dir, rillRatio });
+      const ls = lsGrid({ grid, slopePct: slope, contributingAreaM2: acc, flowDir: dir, rillRatio, maxSlopeLengthM: Infinity });
       for (let i = 0; i < n; i++) {
         const m = rusleLengthExponent(slope[i], rillRatio);
         const l = desmetGoversL({ upslopeAreaM2: acc[i] - 25, cellSizeM: 5, flowDirFactor: D8_DIR_FACTOR[dir[i]], m });
@@ -34,6 +34,17 @@ describe('LS grid', () => {
         expect(Math.abs(ls[i] - expected)).toBeLessThanOrEqual(2e-6 * Math.max(1, expected));
       }
     }
+  });
+
+  it('stops L growing past the longest RUSLE slope length (305 m, AH-703 ch. 4)', () => {
+    const grid = projectedDem({ width: 2, height: 1, elevationM: new Float32Array(2), cellSizeM: 5 });
+    // Cell 0: A_in = 305 m × 5 m (exactly the cap); cell 1: ten times more upslope area.
+    const acc = Float32Array.of(25 + 305 * 5, 25 + 3050 * 5);
+    const ls = lsGrid({ grid, slopePct: Float32Array.of(10, 10), contributingAreaM2: acc, flowDir: Uint8Array.of(3, 3) });
+    expect(ls[1]).toBeCloseTo(ls[0], 5);
+    const m = rusleLengthExponent(10);
+    const uncapped = desmetGoversL({ upslopeAreaM2: 3050 * 5, cellSizeM: 5, flowDirFactor: 1, m }) * rusleSlopeFactor(10);
+    expect(ls[1]).toBeLessThan(uncapped);
   });
 
   it('on a uniform plane gives each cell the 1-D segment L (Desmet–Govers plane identity)', () => {

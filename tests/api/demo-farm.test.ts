@@ -1,0 +1,90 @@
+// The demo scenario, seeded and processed as `npm start` does, gives the board the design
+// asks for: every field ranked with its reasons, the clay bottom flagged.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { inject } from 'vitest';
+import request from 'supertest';
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import type { Express } from 'express';
+import { createSequelize } from '../../server/db/sequelize';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { initModels, User } from '../../server/models';
+import { JobQueue } from '../../server/services/jobs/job-queue';
+import { LocalFileStorage } from '../../server/services/storage/file-storage';
+import { terrainJobHandler } from '../../server/services/farm-terrain.service';
+import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/seeders/demo-farm';
+import { seedDemoSeason } from '../../server/db/seeders/demo-season';
+import { seedDemoTerrain } from '../../server/db/seeders/demo-terrain';
+import { signedIn } from '../helpers/test-app';
+
+const sequelize = createSequelize(inject('databaseUrl'));
+const uploads = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-demo-uploads-'));
+const storage = new LocalFileStorage(uploads);
+let jobs: JobQueue;
+let app: Express;
+let seeded = false;
+
+beforeAll(async () => {
+  initModels(sequelize);
+  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) });
+  app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'demo-secret-demo-secret' }), storage, jobs, clientDir: '/nonexistent' });
+  seeded = await seedDemoFarm(sequelize);
+  await seedDemoSeason(sequelize);
+  await seedDemoTerrain({ sequelize, storage, jobs });
+  const [job] = (await sequelize.query(`SELECT id FROM processing_jobs ORDER BY created_at DESC LIMIT 1`))[0] as { id: string }[];
+  await JobQueue.waitFor(sequelize, job.id);
+});
+afterAll(async () => {
+  await jobs.stop();
+  await sequelize.close();
+  rmSync(uploads, { recursive: true, force: true });
+});
+
+const farmerAgent = async () => signedIn(app, (await User.findOne({ where: { email: DEMO_ACCOUNTS[0].email } }))!, DEMO_PASSWORD);
+
+describe('the demo farm', () => {
+  it('seeds once, with the three demo sign-ins working', async () => {
+    expect(seeded).toBe(true);
+    expect(await seedDemoFarm(sequelize)).toBe(false);
+    for (const a of DEMO_ACCOUNTS) expect((await request(app).post('/api/auth/login').send({ email: a.email, password: DEMO_PASSWORD })).status).toBe(200);
+  });
+
+  it('ranks every field with figures and reasons from its DEM, soils and cropping', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const board = (await farmer.get(`/api/farms/${farm.id}/board?season=2027`)).body;
+    expect(board.rows).toHaveLength(9);
+    for (const r of board.rows) {
+      expect([r.name, r.gaps]).toEqual([r.name, []]);
+      expect(r.aOverT).toBeGreaterThan(0);
+    }
+    const names = board.rows.map((r: { name: string }) => r.name);
+    // The scenario: steep, ploughed continuous corn loses most; permanent grass least (AH-537 ordering of C).
+    expect(names[0]).toBe('Long Slope');
+    expect(names.indexOf('East Pasture')).toBeGreaterThan(names.indexOf('Mill Hill'));
+    expect(board.rows[0].reasons.length).toBeGreaterThan(0);
+  });
+
+  it('flags the clay bottom as problem clay and steers it away from amendments', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const board = (await farmer.get(`/api/farms/${farm.id}/board?season=2027`)).body;
+    const creek = board.rows.find((r: { name: string }) => r.name === 'Creek Bottom');
+    expect(creek.problemClay).toBe(true);
+    expect(board.rows.filter((r: { problemClay: boolean }) => r.problemClay).map((r: { name: string }) => r.name)).toEqual(['Creek Bottom']);
+    const a = (await farmer.get(`/api/fields/${creek.fieldId}/assessment?season=2027`)).body;
+    expect(a.groundAdvice).toMatch(/will not fix/);
+    expect(a.lsSource).toBe('elevation model');
+  });
+
+  it('finds concentrated flow in the swale field, a grassed-waterway candidate', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const fields = (await farmer.get(`/api/farms/${farm.id}/fields`)).body.features;
+    const swale = fields.find((f: { properties: { name: string } }) => f.properties.name === 'Swale Field');
+    const t = (await farmer.get(`/api/fields/${swale.id}/terrain`)).body;
+    expect(t.concentratedFlow.cellCount).toBeGreaterThan(50);
+  });
+});
