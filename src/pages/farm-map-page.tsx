@@ -76,11 +76,18 @@ export function FarmMapPage() {
           mapLayers={(selected) => (
             <TerrainMapLayers
               farmId={farmId}
-              selectedField={selected ? { id: selected.id, name: selected.properties.name } : null}
+              selectedField={
+                selected ? { id: selected.id, version: selected.properties.version, name: selected.properties.name } : null
+              }
             />
           )}
-          fieldExtra={(field) => <FieldTerrainFigures fieldId={field.id} farmId={farmId} units={units} />}
-          panelSections={<ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />}
+          fieldExtra={(field) => (
+            <FieldTerrainFigures fieldId={field.id} fieldVersion={field.properties.version} farmId={farmId} units={units} />
+          )}
+          panelSections={
+            // A landowner sees their own fields, not the farm's survey data.
+            farm.data.role === 'landowner' ? null : <ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />
+          }
           banner={
             <div className="flex flex-col gap-2">
               <div className="flex items-center gap-2">

@@ -24,7 +24,7 @@ export function ChoiceGroup<V extends string>({ label, choices, inputProps, test
         {choices.map((c) => (
           <label key={c.value} className="cursor-pointer">
             <input type="radio" value={c.value} className="peer sr-only" {...inputProps} />
-            <span className="inline-block rounded-md border border-ink-faint bg-paper px-2.5 py-1 text-sm font-medium text-ink hover:bg-paper-deep peer-checked:border-clay-dark peer-checked:bg-clay peer-checked:text-paper peer-focus-visible:outline peer-focus-visible:outline-3 peer-focus-visible:outline-offset-2 peer-focus-visible:outline-ink">
+            <span className="inline-block rounded-md border border-ink-faint bg-paper px-2.5 py-1 text-sm font-medium text-ink hover:bg-paper-deep peer-checked:border-clay-dark peer-checked:bg-clay peer-checked:text-paper peer-checked:hover:bg-clay-dark peer-focus-visible:outline peer-focus-visible:outline-3 peer-focus-visible:outline-offset-2 peer-focus-visible:outline-ink">
               {c.label}
             </span>
           </label>

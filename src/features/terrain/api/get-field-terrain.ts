@@ -24,21 +24,32 @@ export type FieldTerrain = {
 
 /** How often figures for an outdated outline are asked for again, ms. */
 export const STALE_TERRAIN_POLL_MS = 3000;
+/**
+ * A changed outline may answer no_terrain for a moment while the server works its figures
+ * out; so many more tries are made before "no model covers this field" is taken as final.
+ */
+export const NO_TERRAIN_RETRIES = 3;
 
 export const getFieldTerrain = (fieldId: number) => api.get<FieldTerrain>(`/api/fields/${fieldId}/terrain`);
 
 /** The key every field's terrain figures sit under (invalidated when a terrain job finishes). */
 export const fieldTerrainRootKey = ['field-terrain'] as const;
 
-export const getFieldTerrainQueryOptions = (fieldId: number) =>
+/** `fieldVersion` is the outline's version: a new outline asks again at once. */
+export const getFieldTerrainQueryOptions = (fieldId: number, fieldVersion: number) =>
   queryOptions({
-    queryKey: [...fieldTerrainRootKey, fieldId],
+    queryKey: [...fieldTerrainRootKey, fieldId, fieldVersion],
     queryFn: () => getFieldTerrain(fieldId),
     // Figures for an older outline are being recomputed on the server: ask again shortly.
-    refetchInterval: (query) => (query.state.data && !query.state.data.upToDate ? STALE_TERRAIN_POLL_MS : false),
+    refetchInterval: (query) => {
+      if (query.state.data && !query.state.data.upToDate) return STALE_TERRAIN_POLL_MS;
+      if (isNoTerrain(query.state.error) && query.state.errorUpdateCount <= NO_TERRAIN_RETRIES)
+        return STALE_TERRAIN_POLL_MS;
+      return false;
+    },
   });
 
-export const useFieldTerrain = (fieldId: number | null) =>
-  useQuery({ ...getFieldTerrainQueryOptions(fieldId ?? 0), enabled: fieldId !== null });
+export const useFieldTerrain = (field: { id: number; version: number } | null) =>
+  useQuery({ ...getFieldTerrainQueryOptions(field?.id ?? 0, field?.version ?? 0), enabled: field !== null });
 
 export const isNoTerrain = (error: unknown) => isApiError(error, 404) && error.code === 'no_terrain';

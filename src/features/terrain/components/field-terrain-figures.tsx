@@ -14,10 +14,10 @@ const fmt = (x: number, digits: number) =>
   x.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 const M2_PER_HA = 10_000;
 
-type Props = { fieldId: number; farmId: number; units: Units };
+type Props = { fieldId: number; fieldVersion: number; farmId: number; units: Units };
 
-export function FieldTerrainFigures({ fieldId, farmId, units }: Props) {
-  const terrain = useFieldTerrain(fieldId);
+export function FieldTerrainFigures({ fieldId, fieldVersion, farmId, units }: Props) {
+  const terrain = useFieldTerrain({ id: fieldId, version: fieldVersion });
   const layers = useLayers(farmId);
   const slopeLegend = layers.data?.find((l) => l.key === 'slope-classes')?.legend;
 

@@ -21,12 +21,12 @@ const rank = (key: LayerKey) => {
   return i === -1 ? LAYER_ORDER.length : i;
 };
 
-type Props = { farmId: number; selectedField: { id: number; name: string } | null };
+type Props = { farmId: number; selectedField: { id: number; version: number; name: string } | null };
 
 export function TerrainMapLayers({ farmId, selectedField }: Props) {
   const layers = useLayers(farmId);
   const elevation = useElevation(farmId);
-  const terrain = useFieldTerrain(selectedField?.id ?? null);
+  const terrain = useFieldTerrain(selectedField);
   const [chosen, setChosen] = useState<ActiveLayer | null>(null);
   const [reliefUnder, setReliefUnder] = useState(true);
 
