@@ -7,7 +7,9 @@ import { badRequest, HttpError, notFound } from '../lib/http-error';
 import type { FileStorage } from '../services/storage/file-storage';
 import { JobQueue } from '../services/jobs/job-queue';
 import { acceptDem, DEM_LIMIT_BYTES } from '../services/elevation-models.service';
-import { LAYER_LABELS } from '../services/farm-terrain.service';
+import { LAYER_LABELS, farmSlopeClasses } from '../services/farm-terrain.service';
+import { parseSlopeClasses } from '../services/terrain';
+import { refreshTerrainIfAny } from '../services/terrain-refresh';
 import type { LayerKind } from '../services/terrain';
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: DEM_LIMIT_BYTES, files: 1 } });
@@ -67,6 +69,24 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
     );
     if (!row) throw notFound('That map layer');
     res.type('png').set('Cache-Control', 'private, max-age=60').send(await deps.storage.get(row.file_key));
+  });
+
+  // Slope-class breaks per farm (default: SSM names with 0-2-6-12-18-25 % breaks [memory]).
+  farms.get('/:farmId/slope-classes', loadFarmMembership, async (req, res) => {
+    const farmId = req.membership!.farmId;
+    const [row] = await sequelize.query<{ slope_breaks: unknown }>(`SELECT slope_breaks FROM farms WHERE id = :farmId`, { replacements: { farmId }, type: QueryTypes.SELECT });
+    res.json({ classes: await farmSlopeClasses(sequelize, farmId), custom: row?.slope_breaks != null });
+  });
+  farms.put('/:farmId/slope-classes', loadFarmMembership, requireRole('farmer', 'advisor'), async (req, res) => {
+    const farmId = req.membership!.farmId;
+    const reset = req.body?.classes === null;
+    const parsed = reset ? null : parseSlopeClasses(req.body);
+    if (parsed && !parsed.ok) throw badRequest('invalid_input', `classes: ${parsed.reason}`);
+    await sequelize.query(`UPDATE farms SET slope_breaks = :breaks, updated_at = now() WHERE id = :farmId`, {
+      replacements: { farmId, breaks: parsed?.ok ? JSON.stringify(parsed.classes) : null },
+    });
+    const jobId = await refreshTerrainIfAny(deps, farmId, req.user!.id);
+    res.json({ classes: await farmSlopeClasses(sequelize, farmId), custom: !reset, jobId });
   });
 
   const fields = Router();

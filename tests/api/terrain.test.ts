@@ -149,4 +149,24 @@ describe('terrain from an uploaded DEM', () => {
     expect((await stranger.get(`/api/jobs/${up.body.jobId}`)).status).toBe(404);
     await JobQueue.waitFor(sequelize, up.body.jobId);
   });
+
+  it('uses the farm’s own slope-class breaks when set, and refuses broken ones', async () => {
+    const { farm, agent, fieldId, users } = await farmWithField();
+    const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
+    await JobQueue.waitFor(sequelize, up.body.jobId);
+    const def = (await agent.get(`/api/farms/${farm.id}/slope-classes`)).body;
+    expect(def.custom).toBe(false);
+    expect(def.classes[0]).toEqual({ name: 'nearly level', minPct: 0, maxPct: 2 });
+    const gap = await agent.put(`/api/farms/${farm.id}/slope-classes`).send({ classes: [{ name: 'flat', minPct: 0, maxPct: 3 }, { name: 'sloping', minPct: 4, maxPct: null }] });
+    expect(gap.status).toBe(400);
+    expect(gap.body.message).toMatch(/minPct/);
+    const set = await agent.put(`/api/farms/${farm.id}/slope-classes`).send({ classes: [{ name: 'flat', minPct: 0, maxPct: 4 }, { name: 'sloping', minPct: 4, maxPct: null }] });
+    expect(set.status).toBe(200);
+    await JobQueue.waitFor(sequelize, set.body.jobId);
+    const t = (await agent.get(`/api/fields/${fieldId}/terrain`)).body;
+    // The 5 % plane lies wholly in "sloping" (4 % and over).
+    expect(t.slopeClasses.map((c: { name: string; share: number }) => [c.name, c.share])).toEqual([['flat', 0], ['sloping', 1]]);
+    const landowner = await signedIn(app, users.landowner);
+    expect((await landowner.put(`/api/farms/${farm.id}/slope-classes`).send({ classes: null })).status).toBe(403);
+  });
 });
