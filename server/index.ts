@@ -13,6 +13,7 @@ import { LocalFileStorage } from './services/storage/file-storage';
 import { terrainJobHandler } from './services/farm-terrain.service';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
 import { seedDemoSeason } from './db/seeders/demo-season';
+import { seedDemoSecondFarm } from './db/seeders/demo-second-farm';
 
 function newestMtime(dir: string): number {
   let newest = 0;
@@ -41,6 +42,7 @@ async function main(): Promise<void> {
   const jobs = await JobQueue.start(db.sequelize, db.url, { terrain: terrainJobHandler({ sequelize: db.sequelize, storage }) });
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
     await seedDemoSeason(db.sequelize);
+    await seedDemoSecondFarm(db.sequelize);
     console.log('Loaded the demo farm (Alder Run Farm) and its 2027 season.');
     if (await seedDemoTerrain({ sequelize: db.sequelize, storage, jobs })) console.log('Queued the demo elevation model for processing.');
   }

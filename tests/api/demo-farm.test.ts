@@ -16,6 +16,7 @@ import { LocalFileStorage } from '../../server/services/storage/file-storage';
 import { terrainJobHandler } from '../../server/services/farm-terrain.service';
 import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/seeders/demo-farm';
 import { seedDemoSeason } from '../../server/db/seeders/demo-season';
+import { seedDemoSecondFarm } from '../../server/db/seeders/demo-second-farm';
 import { seedDemoTerrain } from '../../server/db/seeders/demo-terrain';
 import { signedIn } from '../helpers/test-app';
 
@@ -32,6 +33,7 @@ beforeAll(async () => {
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'demo-secret-demo-secret' }), storage, jobs, clientDir: '/nonexistent' });
   seeded = await seedDemoFarm(sequelize);
   await seedDemoSeason(sequelize);
+  await seedDemoSecondFarm(sequelize);
   await seedDemoTerrain({ sequelize, storage, jobs });
   const [job] = (await sequelize.query(`SELECT id FROM processing_jobs ORDER BY created_at DESC LIMIT 1`))[0] as { id: string }[];
   await JobQueue.waitFor(sequelize, job.id);
@@ -86,5 +88,15 @@ describe('the demo farm', () => {
     const swale = fields.find((f: { properties: { name: string } }) => f.properties.name === 'Swale Field');
     const t = (await farmer.get(`/api/fields/${swale.id}/terrain`)).body;
     expect(t.concentratedFlow.cellCount).toBeGreaterThan(50);
+  });
+
+  it('gives the advisor one board across both client farms', async () => {
+    const advisor = await signedIn(app, (await User.findOne({ where: { email: DEMO_ACCOUNTS[1].email } }))!, DEMO_PASSWORD);
+    const farms = (await advisor.get('/api/farms')).body;
+    expect(farms.map((f: { role: string }) => f.role)).toEqual(['advisor', 'advisor']);
+    const board = (await advisor.get('/api/board?season=2027')).body;
+    expect(board.rows).toHaveLength(12);
+    expect(new Set(board.rows.map((r: { farmName: string }) => r.farmName))).toEqual(new Set(['Alder Run Farm', 'Birch Hollow']));
+    for (const r of board.rows) expect([r.name, r.gaps]).toEqual([r.name, []]);
   });
 });
