@@ -18,7 +18,8 @@ const CROP_LABELS: Record<string, string> = {
 
 export function CoverSection() {
   const { register, control, setValue, getValues } = useFormContext<EstimateFormValues>();
-  const [from, crop] = useWatch({ control, name: ['c.from', 'c.crop'] });
+  const from = useWatch({ control, name: 'c.from' });
+  const crop = useWatch({ control, name: 'c.crop' });
   const tillages = tillagesFor(crop);
   // A crop with other tillage rows: keep the choice one the table has.
   useEffect(() => {

@@ -8,7 +8,8 @@ import { FormGroup, NumField } from './form-bits';
 
 export function PracticeSection() {
   const { register, control } = useFormContext<EstimateFormValues>();
-  const [from, practice] = useWatch({ control, name: ['p.from', 'p.practice'] });
+  const from = useWatch({ control, name: 'p.from' });
+  const practice = useWatch({ control, name: 'p.practice' });
   return (
     <FormGroup title="Practice: P factor" testId="estimate-p" help="Work across the slope that slows the water down.">
       <ChoiceGroup

@@ -11,7 +11,9 @@ const rowLabel = (c: (typeof CN_CHOICES)[number]) =>
 
 export function RunoffSection({ kFromSoil }: { kFromSoil: boolean }) {
   const { register, control } = useFormContext<EstimateFormValues>();
-  const [on, cnFrom, hsg] = useWatch({ control, name: ['runoffOn', 'runoff.cnFrom', 'runoff.hsg'] });
+  const on = useWatch({ control, name: 'runoffOn' });
+  const cnFrom = useWatch({ control, name: 'runoff.cnFrom' });
+  const hsg = useWatch({ control, name: 'runoff.hsg' });
   return (
     <FormGroup title="Runoff from a design storm" testId="estimate-runoff">
       <label className="flex items-center gap-2 text-sm">

@@ -11,7 +11,9 @@ const num = (x: number | undefined) => (typeof x === 'number' && Number.isFinite
 
 function TextureInputs({ textureClass }: { textureClass?: string }) {
   const { register, control } = useFormContext<EstimateFormValues>();
-  const [sand, silt, clay] = useWatch({ control, name: ['k.sandPct', 'k.siltPct', 'k.clayPct'] });
+  const sand = useWatch({ control, name: 'k.sandPct' });
+  const silt = useWatch({ control, name: 'k.siltPct' });
+  const clay = useWatch({ control, name: 'k.clayPct' });
   const sum = num(sand) + num(silt) + num(clay);
   return (
     <>
@@ -43,7 +45,8 @@ function TextureInputs({ textureClass }: { textureClass?: string }) {
 
 function FeelInputs({ textureClass }: { textureClass?: string }) {
   const { register, control } = useFormContext<EstimateFormValues>();
-  const [balls, ribbonCm] = useWatch({ control, name: ['k.balls', 'k.ribbonCm'] });
+  const balls = useWatch({ control, name: 'k.balls' });
+  const ribbonCm = useWatch({ control, name: 'k.ribbonCm' });
   const ribbons = balls === 'yes' && num(ribbonCm) > 0;
   return (
     <div className="flex flex-col gap-3" data-testid="feel-test">
