@@ -26,7 +26,9 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
     res.status(202).json(r);
   });
 
-  farms.get('/:farmId/elevation', loadFarmMembership, async (req, res) => {
+  // A landowner sees only the fields they own (DESIGN.md roles), so not the farm-wide model and
+  // layers, which show every field; their own fields' figures come with /fields/:id/terrain.
+  farms.get('/:farmId/elevation', loadFarmMembership, requireRole('farmer', 'advisor'), async (req, res) => {
     const farmId = req.membership!.farmId;
     const [model] = await sequelize.query<Record<string, unknown>>(
       `SELECT id, original_name AS "originalName", epsg, width, height, cell_size_m AS "cellSizeM", created_at AS "createdAt"
@@ -42,8 +44,12 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
 
   farms.get('/:farmId/layers', loadFarmMembership, async (req, res) => {
     const farmId = req.membership!.farmId;
-    const rows = await sequelize.query<{ kind: LayerKind; bounds: { west: number; south: number; east: number; north: number }; legend: unknown }>(
-      `SELECT l.kind, l.bounds, l.legend FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id
+    if (req.membership!.role === 'landowner') {
+      res.json([]);
+      return;
+    }
+    const rows = await sequelize.query<{ kind: LayerKind; file_key: string; bounds: { west: number; south: number; east: number; north: number }; legend: unknown }>(
+      `SELECT l.kind, l.file_key, l.bounds, l.legend FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id
         WHERE m.farm_id = :farmId ORDER BY l.kind`,
       { replacements: { farmId }, type: QueryTypes.SELECT },
     );
@@ -51,7 +57,8 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
       rows.map((r) => ({
         key: r.kind,
         label: LAYER_LABELS[r.kind] ?? r.kind,
-        url: `/api/farms/${farmId}/layers/${r.kind}.png`,
+        // The key changes with every terrain run, so a new picture is never hidden by a cache.
+        url: `/api/farms/${farmId}/layers/${r.kind}.png?v=${r.file_key.replace(/^.*\/|\.png$/g, '')}`,
         bounds: [
           [r.bounds.south, r.bounds.west],
           [r.bounds.north, r.bounds.east],
@@ -61,7 +68,7 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
     );
   });
 
-  farms.get('/:farmId/layers/:file', loadFarmMembership, async (req, res) => {
+  farms.get('/:farmId/layers/:file', loadFarmMembership, requireRole('farmer', 'advisor'), async (req, res) => {
     const kind = String(req.params.file).replace(/\.png$/, '');
     const [row] = await sequelize.query<{ file_key: string }>(
       `SELECT l.file_key FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id WHERE m.farm_id = :farmId AND l.kind = :kind`,
@@ -96,6 +103,12 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
       { replacements: { id: res.locals.fieldId }, type: QueryTypes.SELECT },
     );
     if (!row) {
+      const [pending] = await sequelize.query<{ n: number }>(
+        `SELECT count(*)::int AS n FROM processing_jobs j JOIN fields f ON f.farm_id = j.farm_id
+          WHERE f.id = :id AND j.kind = 'terrain' AND j.state IN ('queued', 'running')`,
+        { replacements: { id: res.locals.fieldId }, type: QueryTypes.SELECT },
+      );
+      if (pending.n > 0) throw new HttpError(404, 'terrain_pending', 'The terrain figures of this field are being worked out; they will be here in a moment.');
       throw new HttpError(404, 'no_terrain', 'No elevation model covers this field yet: upload one for the farm, or type the slope % and slope length.');
     }
     res.json({ ...row.stats, computedAt: row.computed_at, upToDate: row.field_version === row.version });

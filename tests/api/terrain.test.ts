@@ -135,6 +135,11 @@ describe('terrain from an uploaded DEM', () => {
       expect((await a.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'p.tif')).status).toBe(403);
       expect((await a.get(`/api/farms/${farm.id}/layers`)).status).toBe(200);
     }
+    // The farm-wide model and its pictures show every field: not for a landowner.
+    const landowner = await signedIn(app, users.landowner);
+    expect((await landowner.get(`/api/farms/${farm.id}/layers`)).body).toEqual([]);
+    expect((await landowner.get(`/api/farms/${farm.id}/elevation`)).status).toBe(403);
+    expect((await landowner.get(`/api/farms/${farm.id}/layers/hillshade.png`)).status).toBe(403);
     expect((await request(app).post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'p.tif')).status).toBe(401);
     const stranger = await signedIn(app, (await makeFarm(['farmer'])).users.farmer);
     expect((await stranger.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'p.tif')).status).toBe(404);
