@@ -34,9 +34,12 @@ async function buildClientIfStale(): Promise<void> {
   await build({ logLevel: 'warn' });
 }
 
+let startedClusterDir: string | null = null;
+
 async function main(): Promise<void> {
   const config = loadConfig();
   const db = await openDatabase(config);
+  startedClusterDir = db.localClusterDir;
   initModels(db.sequelize);
   const storage = new LocalFileStorage(path.join(config.dataDir, 'uploads'));
   const jobs = await JobQueue.start(db.sequelize, db.url, { terrain: terrainJobHandler({ sequelize: db.sequelize, storage }) });
@@ -75,7 +78,9 @@ async function main(): Promise<void> {
   process.on('SIGTERM', () => void stop('SIGTERM'));
 }
 
-main().catch((e: unknown) => {
+main().catch(async (e: unknown) => {
   console.error(`\nFieldshed could not start:\n${e instanceof Error ? e.message : String(e)}`);
+  // Do not leave the local database running behind a failed start.
+  if (startedClusterDir) await stopLocalCluster(startedClusterDir).catch(() => undefined);
   process.exit(1);
 });
