@@ -28,6 +28,18 @@ const router = createBrowserRouter([
         path: paths.estimate.path,
         lazy: async () => ({ Component: (await import('./pages/estimate-page')).EstimatePage }),
       },
+      {
+        path: paths.field.path,
+        lazy: async () => ({ Component: (await import('./pages/field-page')).FieldPage }),
+      },
+      {
+        path: paths.board.path,
+        lazy: async () => ({ Component: (await import('./pages/board-page')).BoardPage }),
+      },
+      {
+        path: paths.clientBoard.path,
+        lazy: async () => ({ Component: (await import('./pages/board-page')).ClientBoardPage }),
+      },
     ],
   },
   { path: '*', element: <NotFoundPage /> },

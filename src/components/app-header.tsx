@@ -1,10 +1,17 @@
 // The bar across every signed-in screen: product name, the farm in view, the quick-estimate
 // link and a slot for the user menu.
 import type { ReactNode } from 'react';
-import { Link, NavLink } from 'react-router-dom';
+import { Link, NavLink, useMatch } from 'react-router-dom';
 import { paths } from '../lib/paths';
 
+const navClass = ({ isActive }: { isActive: boolean }) =>
+  `rounded px-2 py-0.5 text-sm font-semibold underline-offset-2 hover:underline ${
+    isActive ? 'bg-clay-light text-clay-dark' : 'text-clay-dark'
+  }`;
+
 export function AppHeader({ farmName, screen, menu }: { farmName?: string; screen: string; menu?: ReactNode }) {
+  // On a farm's screens, links to the farm's map and its priority board.
+  const farmId = useMatch('/farms/:farmId/*')?.params.farmId;
   return (
     <header className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-paper-edge bg-paper px-4 py-2">
       <Link to={paths.farms.getHref()} className="font-serif text-xl font-semibold tracking-tight text-clay-dark">
@@ -23,6 +30,16 @@ export function AppHeader({ farmName, screen, menu }: { farmName?: string; scree
         ) : null}
       </nav>
       <div className="ml-auto flex flex-wrap items-center gap-x-4 gap-y-2">
+        {farmId && /^\d+$/.test(farmId) ? (
+          <>
+            <NavLink to={paths.farmMap.getHref(farmId)} end data-testid="nav-farm-map" className={navClass}>
+              Farm map
+            </NavLink>
+            <NavLink to={paths.board.getHref(farmId)} data-testid="nav-board" className={navClass}>
+              Priority board
+            </NavLink>
+          </>
+        ) : null}
         <NavLink
           to={paths.estimate.getHref()}
           data-testid="nav-estimate"

@@ -10,4 +10,20 @@ export const paths = {
   farms: { path: '/farms', getHref: () => '/farms' },
   farmMap: { path: '/farms/:farmId', getHref: (farmId: number | string) => `/farms/${farmId}` },
   estimate: { path: '/estimate', getHref: () => '/estimate' },
+  field: {
+    path: '/farms/:farmId/fields/:fieldId',
+    getHref: (farmId: number | string, fieldId: number | string, query?: { tab?: string; season?: string | null }) => {
+      const q = new URLSearchParams();
+      if (query?.tab) q.set('tab', query.tab);
+      if (query?.season) q.set('season', query.season);
+      const qs = q.toString();
+      return `/farms/${farmId}/fields/${fieldId}${qs ? `?${qs}` : ''}`;
+    },
+  },
+  board: {
+    path: '/farms/:farmId/board',
+    getHref: (farmId: number | string, season?: string | null) =>
+      `/farms/${farmId}/board${season ? `?season=${encodeURIComponent(season)}` : ''}`,
+  },
+  clientBoard: { path: '/board', getHref: () => '/board' },
 } as const;

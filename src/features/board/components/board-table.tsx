@@ -1,0 +1,341 @@
+// The priority board as a table (TanStack Table): rank from the server's order, every figure
+// with its unit, sortable by any column, filtered by name, risk class, problem clay and gaps.
+// Clicking a row picks the field on the map; its name opens the Field screen.
+import { useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type FilterFn,
+  type SortingState,
+} from '@tanstack/react-table';
+import { RISK_CLASSES } from '../../../../shared/erosion/risk-class';
+import type { BoardRow } from '../../../../shared/schemas/assessment';
+import type { Units } from '../../../../shared/schemas/auth';
+import { paths } from '../../../lib/paths';
+import { formatArea } from '../../../lib/units';
+import { formatFigure } from '../../estimate/components/format-figure';
+import { lossFigure, runoffFigure, tonnesFigure, type Figure } from './loss-units';
+import { RiskBadge } from './risk-badge';
+
+export type RankedRow = BoardRow & { rank: number };
+
+const col = createColumnHelper<RankedRow>();
+
+function FigureCell({ figure, testId }: { figure: Figure | null; testId?: string }) {
+  if (!figure) return <span className="text-ink-faint">—</span>;
+  return (
+    <span className="num block text-right" data-testid={testId}>
+      <span className="whitespace-nowrap">{figure.main}</span>
+      <span className="block whitespace-nowrap text-xs text-ink-soft">{figure.alt}</span>
+    </span>
+  );
+}
+
+const riskFilter: FilterFn<RankedRow> = (row, _id, value: string) =>
+  !value || (value === 'not-assessed' ? row.original.riskClass === null : row.original.riskClass?.key === value);
+const trueOnly: FilterFn<RankedRow> = (row, id, value: boolean) => !value || Boolean(row.getValue(id));
+
+type Props = {
+  rows: RankedRow[];
+  units: Units;
+  selectedId: number | null;
+  onSelect: (row: RankedRow) => void;
+  /** Show the farm of each row (the advisor's board across client farms). */
+  showFarm?: boolean;
+};
+
+export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false }: Props) {
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
+  const [globalFilter, setGlobalFilter] = useState('');
+
+  const columns = useMemo(
+    () => [
+      col.accessor('rank', {
+        header: 'Rank',
+        cell: (c) => <span className="num block text-right font-semibold">{c.getValue()}</span>,
+      }),
+      col.accessor((r) => (showFarm && r.farmName ? `${r.name} ${r.farmName}` : r.name), {
+        id: 'field',
+        header: 'Field',
+        sortingFn: (a, b) => a.original.name.localeCompare(b.original.name),
+        cell: (c) => (
+          <span className="flex flex-col">
+            <Link
+              to={paths.field.getHref(c.row.original.farmId, c.row.original.fieldId)}
+              className="font-semibold text-clay-dark underline-offset-2 hover:underline"
+              data-testid="board-field-link"
+              onClick={(e) => e.stopPropagation()}
+            >
+              {c.row.original.name}
+            </Link>
+            {showFarm && c.row.original.farmName ? <span className="text-xs text-ink-soft">{c.row.original.farmName}</span> : null}
+          </span>
+        ),
+      }),
+      col.accessor('areaHa', {
+        header: `Area (${units})`,
+        cell: (c) => <span className="num block whitespace-nowrap text-right">{formatArea(c.getValue(), units)}</span>,
+      }),
+      col.accessor((r) => r.soilLossTPerHaYr ?? undefined, {
+        id: 'soilLoss',
+        header: units === 'ac' ? 'A (US t/ac/yr)' : 'A (t/ha/yr)',
+        sortUndefined: 'last',
+        cell: (c) => {
+          const v = c.row.original.soilLossTPerHaYr;
+          return <FigureCell figure={v === null ? null : lossFigure(v, units)} testId="board-a" />;
+        },
+      }),
+      col.accessor((r) => r.toleranceTPerHaYr ?? undefined, {
+        id: 'tolerance',
+        header: units === 'ac' ? 'T (US t/ac/yr)' : 'T (t/ha/yr)',
+        sortUndefined: 'last',
+        cell: (c) => {
+          const v = c.row.original.toleranceTPerHaYr;
+          return <FigureCell figure={v === null ? null : lossFigure(v, units)} />;
+        },
+      }),
+      col.accessor((r) => r.aOverT ?? undefined, {
+        id: 'aOverT',
+        header: 'A/T',
+        sortUndefined: 'last',
+        cell: (c) => {
+          const v = c.row.original.aOverT;
+          return v === null ? (
+            <span className="text-ink-faint">—</span>
+          ) : (
+            <span className="num block text-right font-semibold" data-testid="board-a-over-t">
+              {formatFigure(v)}
+            </span>
+          );
+        },
+      }),
+      col.accessor((r) => r.tonnesPerYr ?? undefined, {
+        id: 'tonnes',
+        header: units === 'ac' ? 'Soil lost (US tons/yr)' : 'Soil lost (t/yr)',
+        sortUndefined: 'last',
+        cell: (c) => {
+          const v = c.row.original.tonnesPerYr;
+          return <FigureCell figure={v === null ? null : tonnesFigure(v, units)} testId="board-tonnes" />;
+        },
+      }),
+      col.accessor((r) => r.runoffMm ?? undefined, {
+        id: 'runoff',
+        header: units === 'ac' ? 'Storm runoff (in)' : 'Storm runoff (mm)',
+        sortUndefined: 'last',
+        cell: (c) => {
+          const v = c.row.original.runoffMm;
+          return <FigureCell figure={v === null ? null : runoffFigure(v, units)} />;
+        },
+      }),
+      col.accessor((r) => (r.riskClass ? RISK_CLASSES.findIndex((k) => k.key === r.riskClass!.key) : undefined), {
+        id: 'risk',
+        header: 'Risk class',
+        sortUndefined: 'last',
+        filterFn: riskFilter,
+        cell: (c) => <RiskBadge riskClass={c.row.original.riskClass} />,
+      }),
+      col.accessor('problemClay', {
+        header: 'Problem clay',
+        filterFn: trueOnly,
+        cell: (c) =>
+          c.getValue() ? (
+            <span className="whitespace-nowrap rounded border border-caution bg-caution-light px-1.5 py-0.5 text-xs font-semibold text-caution" data-testid="board-problem-clay">
+              Problem clay
+            </span>
+          ) : (
+            <span className="text-xs text-ink-soft">no</span>
+          ),
+      }),
+      col.accessor((r) => r.gaps.length, {
+        id: 'gaps',
+        header: 'What is missing',
+        filterFn: trueOnly,
+        cell: (c) =>
+          c.row.original.gaps.length ? (
+            <ul className="min-w-40 list-inside list-disc text-xs text-caution">
+              {c.row.original.gaps.map((g) => (
+                <li key={g}>{g}</li>
+              ))}
+            </ul>
+          ) : (
+            <span className="text-xs text-ink-soft">nothing</span>
+          ),
+      }),
+      col.display({
+        id: 'reasons',
+        header: 'Why it ranks here',
+        cell: (c) =>
+          c.row.original.reasons.length ? (
+            <ul className="min-w-48 list-inside list-disc text-xs">
+              {c.row.original.reasons.map((r) => (
+                <li key={r}>{r}</li>
+              ))}
+            </ul>
+          ) : (
+            <span className="text-xs text-ink-soft">no strong driver</span>
+          ),
+      }),
+    ],
+    [units, showFarm],
+  );
+
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting, columnFilters, globalFilter },
+    onSortingChange: setSorting,
+    onColumnFiltersChange: setColumnFilters,
+    onGlobalFilterChange: setGlobalFilter,
+    globalFilterFn: (row, _id, value: string) => {
+      const q = value.trim().toLowerCase();
+      return !q || `${row.original.name} ${row.original.farmName ?? ''}`.toLowerCase().includes(q);
+    },
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+
+  const riskValue = (table.getColumn('risk')?.getFilterValue() as string | undefined) ?? '';
+  const clayOnly = Boolean(table.getColumn('problemClay')?.getFilterValue());
+  const gapsOnly = Boolean(table.getColumn('gaps')?.getFilterValue());
+  const shown = table.getRowModel().rows;
+
+  return (
+    <div className="flex min-w-0 flex-col gap-2">
+      <div className="flex flex-wrap items-end gap-3 text-sm" role="group" aria-label="Filter the board">
+        <label className="flex flex-col gap-1 font-medium">
+          Find a field
+          <input
+            type="search"
+            value={globalFilter}
+            onChange={(e) => setGlobalFilter(e.target.value)}
+            placeholder={showFarm ? 'Field or farm name' : 'Field name'}
+            className="w-44 rounded-md border border-ink-faint bg-white/70 px-2 py-1 text-base"
+            data-testid="board-filter-name"
+          />
+        </label>
+        <label className="flex flex-col gap-1 font-medium">
+          Risk class
+          <select
+            value={riskValue}
+            onChange={(e) => table.getColumn('risk')?.setFilterValue(e.target.value || undefined)}
+            className="rounded-md border border-ink-faint bg-white/70 px-2 py-1 text-base"
+            data-testid="board-filter-risk"
+          >
+            <option value="">Every class</option>
+            {RISK_CLASSES.map((c) => (
+              <option key={c.key} value={c.key}>
+                {c.label}
+              </option>
+            ))}
+            <option value="not-assessed">Not assessed</option>
+          </select>
+        </label>
+        <label className="flex items-center gap-1.5 pb-1">
+          <input
+            type="checkbox"
+            checked={clayOnly}
+            onChange={(e) => table.getColumn('problemClay')?.setFilterValue(e.target.checked || undefined)}
+            data-testid="board-filter-clay"
+          />
+          Problem clay only
+        </label>
+        <label className="flex items-center gap-1.5 pb-1">
+          <input
+            type="checkbox"
+            checked={gapsOnly}
+            onChange={(e) => table.getColumn('gaps')?.setFilterValue(e.target.checked || undefined)}
+            data-testid="board-filter-gaps"
+          />
+          Missing inputs only
+        </label>
+        <p className="num pb-1 text-ink-soft" aria-live="polite">
+          {shown.length} of {rows.length} fields
+        </p>
+      </div>
+      <div className="overflow-x-auto rounded-md border border-paper-edge bg-white/40">
+        <table className="w-full border-collapse text-left text-sm" data-testid="board-table">
+          <caption className="sr-only">Fields ranked by A/T, then soil lost a year</caption>
+          <thead>
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id} className="border-b border-ink-faint bg-paper-deep/60 text-ink-soft">
+                {hg.headers.map((h) => {
+                  const sorted = h.column.getIsSorted();
+                  return (
+                    <th
+                      key={h.id}
+                      scope="col"
+                      className="px-2 py-1.5 align-bottom font-medium"
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                    >
+                      {h.column.getCanSort() ? (
+                        <button
+                          type="button"
+                          onClick={h.column.getToggleSortingHandler()}
+                          className="inline-flex items-center gap-1 text-left font-medium hover:text-ink"
+                          data-testid={`board-sort-${h.column.id}`}
+                          title="Sort by this column"
+                        >
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <span aria-hidden="true" className="text-xs">
+                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
+                          </span>
+                        </button>
+                      ) : (
+                        flexRender(h.column.columnDef.header, h.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {shown.map((row) => {
+              const selected = row.original.fieldId === selectedId;
+              return (
+                <tr
+                  key={row.id}
+                  data-testid="board-row"
+                  data-field-id={row.original.fieldId}
+                  aria-selected={selected}
+                  tabIndex={0}
+                  onClick={() => onSelect(row.original)}
+                  onKeyDown={(e) => {
+                    if (e.key === 'Enter' || e.key === ' ') {
+                      e.preventDefault();
+                      onSelect(row.original);
+                    }
+                  }}
+                  className={`cursor-pointer border-b border-paper-edge align-top ${
+                    selected ? 'bg-clay-light outline outline-2 -outline-offset-2 outline-clay' : 'hover:bg-paper-deep/60'
+                  }`}
+                >
+                  {row.getVisibleCells().map((cell) => (
+                    <td key={cell.id} className="px-2 py-1.5">
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ))}
+                </tr>
+              );
+            })}
+            {shown.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="px-2 py-4 text-center text-ink-soft">
+                  No field matches these filters.
+                </td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

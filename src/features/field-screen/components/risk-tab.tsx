@@ -1,0 +1,172 @@
+// Risk: the field's assessment for the season. A in t/ha/yr and US t/ac/yr against T, A/T
+// with its risk class, tonnes a year, the design storm's runoff; how A builds up, every factor
+// with its source, what went in and what is missing, problem clay and what to do about it,
+// and the cautions.
+import { Notice } from '../../../components/ui/notice';
+import type { FieldAssessment } from '../../../../shared/schemas/assessment';
+import type { Units } from '../../../../shared/schemas/auth';
+import { RiskBadge } from '../../board/components/risk-badge';
+import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../board/components/loss-units';
+import { FactorTable } from '../../estimate/components/factor-table';
+import { formatFigure } from '../../estimate/components/format-figure';
+import { useAssessment } from '../../seasons/api/get-assessment';
+import { TERRACE_CAUTION } from '../../seasons/components/cropping-form';
+import { AssessmentInputs } from './assessment-inputs';
+import { FactorBuildUpChart } from './factor-build-up-chart';
+
+function Big({ label, figure, testId }: { label: string; figure: Figure | null; testId?: string }) {
+  return (
+    <div className="flex flex-col">
+      <dt className="text-sm text-ink-soft">{label}</dt>
+      <dd data-testid={testId}>
+        {figure ? (
+          <>
+            <span className="num text-2xl font-semibold">{figure.main}</span>
+            <span className="num block text-sm text-ink-soft">{figure.alt}</span>
+          </>
+        ) : (
+          <span className="text-ink-faint">not worked out</span>
+        )}
+      </dd>
+    </div>
+  );
+}
+
+function Gaps({ gaps }: { gaps: string[] }) {
+  return (
+    <section aria-labelledby="gaps-heading" data-testid="assessment-gaps" className="flex flex-col gap-1">
+      <h3 id="gaps-heading" className="font-serif text-lg font-semibold">
+        What is missing
+      </h3>
+      {gaps.length ? (
+        <ul className="list-inside list-disc text-sm">
+          {gaps.map((g) => (
+            <li key={g}>{g}</li>
+          ))}
+        </ul>
+      ) : (
+        <p className="text-sm text-ink-soft">Nothing: every input the estimate needs is there.</p>
+      )}
+    </section>
+  );
+}
+
+function ProblemClay({ a }: { a: FieldAssessment }) {
+  if (!a.problemClay && !a.groundAdvice && !a.drainageClass) return null;
+  return (
+    <Notice title={a.problemClay ? 'Problem clay: amending will not fix this ground' : 'Drainage'} testId="assessment-problem-clay">
+      {a.drainageClass ? (
+        <p>
+          Drainage from the soil checks: <span className="font-semibold">{a.drainageClass}</span>.
+        </p>
+      ) : null}
+      {a.problemClayReasons.length ? (
+        <ul className="mt-1 list-inside list-disc">
+          {a.problemClayReasons.map((r) => (
+            <li key={r}>{r}</li>
+          ))}
+        </ul>
+      ) : null}
+      {a.groundAdvice ? (
+        <p className="mt-1" data-testid="assessment-ground-advice">
+          {a.groundAdvice}
+        </p>
+      ) : null}
+    </Notice>
+  );
+}
+
+export function RiskTab({ fieldId, season, units }: { fieldId: number; season: string; units: Units }) {
+  const q = useAssessment(fieldId, season);
+  if (q.isPending) return <p className="text-sm text-ink-soft">Working out the risk…</p>;
+  if (q.isError) return <Notice tone="error" title="The risk could not be worked out">{q.error.message}</Notice>;
+  const a = q.data;
+  const e = a.estimate;
+  const ro = e?.runoff;
+  const terraces = e?.practice?.practice === 'terraces';
+
+  return (
+    <div className="flex flex-col gap-5" data-testid="risk-tab">
+      {e && a.riskClass && a.soilLossTPerHaYr !== null && a.aOverT !== null ? (
+        <section aria-labelledby="risk-heading" className="flex flex-col gap-3 rounded-md border border-clay bg-white/60 p-3">
+          <h3 id="risk-heading" className="text-xs font-semibold uppercase tracking-wide text-clay-dark">
+            Estimated soil loss, RUSLE, season {a.season}
+          </h3>
+          <dl className="grid gap-3 sm:grid-cols-3">
+            <Big label="A, average yearly loss" figure={lossFigure(a.soilLossTPerHaYr, units)} testId="assessment-soil-loss" />
+            <Big label="T, what the soil can stand" figure={a.toleranceTPerHaYr !== null ? lossFigure(a.toleranceTPerHaYr, units) : null} testId="assessment-tolerance" />
+            <Big label="From the whole field" figure={a.tonnesPerYr !== null ? tonnesFigure(a.tonnesPerYr, units) : null} testId="assessment-tonnes" />
+          </dl>
+          <p className="flex flex-wrap items-center gap-2 border-t border-paper-edge pt-2" data-testid="assessment-risk">
+            <span className="text-sm text-ink-soft">A/T</span>
+            <span className="num text-xl font-semibold" data-testid="assessment-a-over-t">
+              {formatFigure(a.aOverT)}
+            </span>
+            <RiskBadge riskClass={a.riskClass} size="md" />
+            <span className="text-sm text-ink-soft">
+              {a.aOverT > 1
+                ? `The field loses soil ${formatFigure(a.aOverT)} times as fast as it is tolerated.`
+                : 'The field loses soil no faster than it is tolerated.'}
+            </span>
+          </p>
+          {ro ? (
+            <div className="flex flex-col gap-2 border-t border-paper-edge pt-2" data-testid="assessment-runoff">
+              <dl className="grid gap-3 sm:grid-cols-3">
+                <Big label={`Runoff from a ${formatFigure(ro.rainfallMm)} mm design storm`} figure={runoffFigure(ro.runoffMm, units)} testId="assessment-runoff-depth" />
+                <Big label="Runoff volume from the field" figure={a.runoffM3 !== null ? volumeFigure(a.runoffM3, units) : null} testId="assessment-runoff-volume" />
+                <div className="flex flex-col">
+                  <dt className="text-sm text-ink-soft">Curve number</dt>
+                  <dd className="num text-2xl font-semibold">
+                    {formatFigure(ro.cn.value)}
+                    {ro.hsg ? <span className="block text-sm font-normal text-ink-soft">hydrologic soil group {ro.hsg}</span> : null}
+                  </dd>
+                </div>
+              </dl>
+            </div>
+          ) : null}
+          <p className="text-xs text-ink-soft">
+            Slope from the {a.lsSource ?? 'typed slope'}; engine {a.engineVersion}, worked out{' '}
+            {new Date(a.computedAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}.
+          </p>
+        </section>
+      ) : (
+        <Notice tone="caution" title="Not assessed yet" testId="assessment-not-ready">
+          {a.failure ? <p>{a.failure}</p> : <p>The estimate waits for the inputs listed under "What is missing".</p>}
+        </Notice>
+      )}
+
+      <Gaps gaps={a.gaps} />
+      <ProblemClay a={a} />
+      {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
+      {e ? <FactorTable factors={e.factors} units={units === 'ac' ? 'us' : 'si'} extra={ro ? [{ name: 'CN, curve number', p: ro.cn }] : undefined} /> : null}
+      <AssessmentInputs inputs={a.inputs} />
+
+      {e?.practice && e.practice.notes.length > 0 ? (
+        <Notice title="About the practice">
+          <ul className="list-inside list-disc">
+            {e.practice.notes.map((n) => (
+              <li key={n}>{n}</li>
+            ))}
+          </ul>
+        </Notice>
+      ) : null}
+      {e && e.warnings.length > 0 ? (
+        <Notice title="Points to check" testId="assessment-warnings">
+          <ul className="list-inside list-disc">
+            {e.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        </Notice>
+      ) : null}
+      <Notice title="Before you act on these figures" testId="assessment-cautions">
+        <ul className="list-inside list-disc">
+          {(e?.cautions ?? ['These figures are planning aids, not designs.']).map((c) => (
+            <li key={c}>{c}</li>
+          ))}
+          {terraces && !(e?.cautions ?? []).some((c) => /qualified person/i.test(c)) ? <li>{TERRACE_CAUTION}</li> : null}
+        </ul>
+      </Notice>
+    </div>
+  );
+}
