@@ -8,7 +8,9 @@ import type { FileStorage } from '../services/storage/file-storage';
 import { JobQueue } from '../services/jobs/job-queue';
 import { acceptDem, DEM_LIMIT_BYTES } from '../services/elevation-models.service';
 import { LAYER_LABELS, farmSlopeClasses } from '../services/farm-terrain.service';
-import { parseSlopeClasses } from '../services/terrain';
+import { parseSlopeClasses, layerLegend } from '../services/terrain';
+import { keptGrids, renderSoilLossLayer } from '../services/soil-loss-layer.service';
+import { listSeasons, resolveSeason } from '../services/seasons.service';
 import { refreshTerrainIfAny } from '../services/terrain-refresh';
 import type { LayerKind } from '../services/terrain';
 
@@ -53,8 +55,7 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
         WHERE m.farm_id = :farmId ORDER BY l.kind`,
       { replacements: { farmId }, type: QueryTypes.SELECT },
     );
-    res.json(
-      rows.map((r) => ({
+    const toEntry = (r: (typeof rows)[number]) => ({
         key: r.kind,
         label: LAYER_LABELS[r.kind] ?? r.kind,
         // The key changes with every terrain run, so a new picture is never hidden by a cache.
@@ -64,12 +65,33 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
           [r.bounds.north, r.bounds.east],
         ],
         legend: r.legend,
-      })),
-    );
+      });
+    const entries = rows.map(toEntry);
+    // Soil loss per cell is drawn on request from the kept LS grid and each field's assessment.
+    const grids = await keptGrids(sequelize, farmId);
+    const [season] = await listSeasons(sequelize, farmId);
+    if (grids && season && rows[0]) {
+      entries.push({
+        ...toEntry(rows[0]),
+        key: 'soil-loss',
+        label: `${LAYER_LABELS['soil-loss']} (${season.label})`,
+        url: `/api/farms/${farmId}/layers/soil-loss.png?season=${encodeURIComponent(season.label)}&v=${grids.ls.file_key.replace(/^.*\/|\.f32$/g, '')}`,
+        legend: layerLegend({ kind: 'soil-loss' }),
+      });
+    }
+    res.json(entries);
   });
 
   farms.get('/:farmId/layers/:file', loadFarmMembership, requireRole('farmer', 'advisor'), async (req, res) => {
     const kind = String(req.params.file).replace(/\.png$/, '');
+    if (kind === 'soil-loss') {
+      const season = await resolveSeason(sequelize, req.membership!.farmId, typeof req.query.season === 'string' ? req.query.season : undefined);
+      const r = await renderSoilLossLayer(deps, req.membership!.farmId, season);
+      if (!r) throw notFound('That map layer');
+      if (!r.ok) throw new HttpError(422, 'cannot_draw', r.reason);
+      res.type('png').set('Cache-Control', 'private, no-cache').send(r.png);
+      return;
+    }
     const [row] = await sequelize.query<{ file_key: string }>(
       `SELECT l.file_key FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id WHERE m.farm_id = :farmId AND l.kind = :kind`,
       { replacements: { farmId: req.membership!.farmId, kind }, type: QueryTypes.SELECT },

@@ -84,11 +84,19 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
       rendered.push({ kind: l.kind, key, bounds: r.bounds, legend: r.legend });
     }
 
+    // Keep LS and the field labels for pictures drawn on request (soil loss per cell).
+    const lsKey = newKey('grids', '.f32');
+    const labelsKey = newKey('grids', '.i32');
+    await storage.put(lsKey, Buffer.from(grids.ls.buffer, grids.ls.byteOffset, grids.ls.byteLength));
+    await storage.put(labelsKey, Buffer.from(labels.buffer, labels.byteOffset, labels.byteLength));
+    const fieldIdsByLabel = fields.map((f) => f.id);
+
     await report(0.85, 'Working out each field');
     const toWgs = converterBetween(dem.epsg, 4326);
     let covered = 0;
     const old = await sequelize.query<{ file_key: string }>(
-      `SELECT l.file_key FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id WHERE m.farm_id = :farmId`,
+      `SELECT l.file_key FROM terrain_layers l JOIN elevation_models m ON m.id = l.elevation_model_id WHERE m.farm_id = :farmId
+       UNION ALL SELECT g.file_key FROM terrain_grids g JOIN elevation_models m ON m.id = g.elevation_model_id WHERE m.farm_id = :farmId`,
       { replacements: { farmId: job.farmId }, type: QueryTypes.SELECT },
     );
     await sequelize.transaction(async (t) => {
@@ -96,6 +104,16 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
         `DELETE FROM terrain_layers WHERE elevation_model_id IN (SELECT id FROM elevation_models WHERE farm_id = :farmId)`,
         { replacements: { farmId: job.farmId }, transaction: t },
       );
+      await sequelize.query(
+        `DELETE FROM terrain_grids WHERE elevation_model_id IN (SELECT id FROM elevation_models WHERE farm_id = :farmId)`,
+        { replacements: { farmId: job.farmId }, transaction: t },
+      );
+      for (const [kind, key] of [['ls', lsKey], ['field-labels', labelsKey]] as const) {
+        await sequelize.query(`INSERT INTO terrain_grids (elevation_model_id, kind, file_key, frame, detail) VALUES (:id, :kind, :key, :frame, :detail)`, {
+          replacements: { id: model.id, kind, key, frame: JSON.stringify(frame), detail: JSON.stringify(kind === 'field-labels' ? { fieldIdsByLabel } : {}) },
+          transaction: t,
+        });
+      }
       for (const r of rendered) {
         await sequelize.query(`INSERT INTO terrain_layers (elevation_model_id, kind, file_key, bounds, legend) VALUES (:id, :kind, :key, :bounds, :legend)`, {
           replacements: { id: model.id, kind: r.kind, key: r.key, bounds: JSON.stringify(r.bounds), legend: JSON.stringify(r.legend) },

@@ -1,5 +1,6 @@
 // The demo scenario, seeded and processed as `npm start` does, gives the board the design
 // asks for: every field ranked with its reasons, the clay bottom flagged.
+import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import request from 'supertest';
@@ -29,7 +30,7 @@ let seeded = false;
 
 beforeAll(async () => {
   initModels(sequelize);
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) });
+  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'demo-secret-demo-secret' }), storage, jobs, clientDir: '/nonexistent' });
   seeded = await seedDemoFarm(sequelize);
   await seedDemoSeason(sequelize);
@@ -98,5 +99,17 @@ describe('the demo farm', () => {
     expect(board.rows).toHaveLength(12);
     expect(new Set(board.rows.map((r: { farmName: string }) => r.farmName))).toEqual(new Set(['Alder Run Farm', 'Birch Hollow']));
     for (const r of board.rows) expect([r.name, r.gaps]).toEqual([r.name, []]);
+  });
+
+  it('draws per-cell soil loss from each field’s K, C, P and the DEM’s LS', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const layers = (await farmer.get(`/api/farms/${farm.id}/layers`)).body;
+    const loss = layers.find((l: { key: string }) => l.key === 'soil-loss');
+    expect(loss.label).toMatch(/2027/);
+    expect(loss.legend.map((e: { label: string }) => e.label).join(' ')).toMatch(/t\/ha\/yr/);
+    const png = await farmer.get(loss.url);
+    expect(png.status).toBe(200);
+    expect(png.body.subarray(0, 4).toString('hex')).toBe('89504e47');
   });
 });

@@ -1,4 +1,5 @@
 // DEM upload → background job with progress → per-field terrain figures and map layers.
+import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import proj4 from 'proj4';
@@ -26,7 +27,7 @@ let app: Express;
 
 beforeAll(async () => {
   initModels(sequelize);
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) });
+  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'terrain-secret-terrain' }), storage, jobs, clientDir: '/nonexistent' });
 });
 afterAll(async () => {

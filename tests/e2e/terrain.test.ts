@@ -1,5 +1,6 @@
 // A farmer uploads an elevation model in the browser, watches the progress bar, then sees the
 // layers and the field's slope figures.
+import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import type { Browser } from 'playwright-core';
@@ -33,7 +34,7 @@ beforeAll(async () => {
   if (!existsSync(path.join(dist, 'index.html'))) throw new Error('dist/ is missing: run `npx vite build` (npm test does it first)');
   initModels(sequelize);
   const storage = new LocalFileStorage(path.join(tmp, 'uploads'));
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) });
+  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
   const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'e2e-terrain-secret-x' });
   ({ url: baseUrl, server } = await listen(createApp({ sequelize, config, storage, jobs, clientDir: dist })));
   browser = await launchChromium();

@@ -16,19 +16,24 @@ export class JobQueue {
   private constructor(
     private readonly sequelize: Sequelize,
     private readonly boss: PgBoss,
+    private readonly prefix: string,
   ) {}
 
-  /** Starts pg-boss; with `handlers` this process also works the queues. */
-  static async start(sequelize: Sequelize, url: string, handlers?: Partial<Record<JobKind, JobHandler>>): Promise<JobQueue> {
+  /**
+   * Starts pg-boss; with `handlers` this process also works the queues. `queuePrefix` keeps
+   * separate sets of workers apart on one database (each test file has its own file storage).
+   */
+  static async start(sequelize: Sequelize, url: string, handlers?: Partial<Record<JobKind, JobHandler>>, queuePrefix = ''): Promise<JobQueue> {
     const boss = new PgBoss({ connectionString: url, schema: BOSS_SCHEMA, max: 3, supervise: !!handlers, schedule: false });
     boss.on('error', (e) => console.error('job queue:', e));
     await boss.start();
-    const q = new JobQueue(sequelize, boss);
+    const q = new JobQueue(sequelize, boss, queuePrefix);
     for (const kind of ['terrain'] as JobKind[]) {
-      await boss.createQueue(kind).catch(() => undefined); // exists already
+      const name = `${queuePrefix}${kind}`;
+      await boss.createQueue(name).catch(() => undefined); // exists already
       const handler = handlers?.[kind];
       if (handler) {
-        await boss.work<{ jobId: string }>(kind, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => q.run(job.data.jobId, handler));
+        await boss.work<{ jobId: string }>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => q.run(job.data.jobId, handler));
       }
     }
     return q;
@@ -40,7 +45,7 @@ export class JobQueue {
       `INSERT INTO processing_jobs (id, farm_id, kind, created_by, payload) VALUES (:id, :farmId, :kind, :userId, :payload)`,
       { replacements: { id, farmId, kind, userId, payload: JSON.stringify(payload) } },
     );
-    await this.boss.send(kind, { jobId: id }, { retryLimit: 0, expireInSeconds: 15 * 60 });
+    await this.boss.send(`${this.prefix}${kind}`, { jobId: id }, { retryLimit: 0, expireInSeconds: 15 * 60 });
     return id;
   }
 

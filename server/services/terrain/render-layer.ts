@@ -85,6 +85,11 @@ function colourerFor(args: RenderArgs): Colourer {
   }
 }
 
+/** The legend in words of a layer kind, without drawing it. */
+export function layerLegend(args: Pick<RenderArgs, 'kind' | 'slopeClasses' | 'concentratedFlowMinAreaM2'>): LegendEntry[] {
+  return colourerFor(args as RenderArgs).legend;
+}
+
 /** Renders one layer. { ok: false } when the grid's CRS is unknown. */
 export function renderLayer(args: RenderArgs): RenderResult {
   const { grid, values } = args;

@@ -1,0 +1,48 @@
+// Per-cell soil loss for the map: A = R·K·C·P of each field's assessment (for a season) times
+// the cell's LS from the last terrain run (RUSLE, AH-703 ch. 1). Drawn on request, so it follows
+// cropping, soil and climate changes without another terrain run; cells outside assessed
+// fields stay transparent.
+import { QueryTypes, type Sequelize } from 'sequelize';
+import type { FileStorage } from './storage/file-storage';
+import { renderLayer, type RenderResult } from './terrain';
+import { queryFields } from './field-presenter';
+import { assessField } from './assessment.service';
+
+type GridRow = { kind: string; file_key: string; frame: { width: number; height: number; originX: number; originY: number; cellSizeX: number; cellSizeY: number; epsg: number }; detail: { fieldIdsByLabel?: number[] } };
+
+/** The kept grids of the farm's newest terrain run, or null before any run. */
+export async function keptGrids(sequelize: Sequelize, farmId: number): Promise<{ ls: GridRow; labels: GridRow } | null> {
+  const rows = await sequelize.query<GridRow>(
+    `SELECT g.kind, g.file_key, g.frame, g.detail FROM terrain_grids g JOIN elevation_models m ON m.id = g.elevation_model_id WHERE m.farm_id = :farmId`,
+    { replacements: { farmId }, type: QueryTypes.SELECT },
+  );
+  const ls = rows.find((r) => r.kind === 'ls');
+  const labels = rows.find((r) => r.kind === 'field-labels');
+  return ls && labels ? { ls, labels } : null;
+}
+
+export async function renderSoilLossLayer(
+  deps: { sequelize: Sequelize; storage: FileStorage },
+  farmId: number,
+  season: { id: number; label: string },
+): Promise<RenderResult | null> {
+  const grids = await keptGrids(deps.sequelize, farmId);
+  if (!grids) return null;
+  const lsBuf = await deps.storage.get(grids.ls.file_key);
+  const labelBuf = await deps.storage.get(grids.labels.file_key);
+  const ls = new Float32Array(lsBuf.buffer.slice(lsBuf.byteOffset, lsBuf.byteOffset + lsBuf.byteLength));
+  const labels = new Int32Array(labelBuf.buffer.slice(labelBuf.byteOffset, labelBuf.byteOffset + labelBuf.byteLength));
+  const ids = grids.labels.detail.fieldIdsByLabel ?? [];
+  const fields = new Map((await queryFields(deps.sequelize, { farmId })).map((f) => [f.id, f]));
+  // Label k (1-based) → R·K·C·P of that field's assessment, NaN when it cannot be assessed.
+  const factor = new Float64Array(ids.length + 1).fill(NaN);
+  for (const [i, id] of ids.entries()) {
+    const f = fields.get(id);
+    if (!f) continue;
+    const e = (await assessField(deps.sequelize, f, season)).estimate;
+    if (e) factor[i + 1] = e.factors.r.value * e.factors.k.value * e.factors.c.value * e.factors.p.value;
+  }
+  const values = new Float32Array(ls.length);
+  for (let i = 0; i < ls.length; i++) values[i] = ls[i] * factor[labels[i]];
+  return renderLayer({ kind: 'soil-loss', grid: grids.ls.frame, values });
+}
