@@ -5,11 +5,15 @@ import { ClimateUpdate, CroppingUpdate, GroundUpdate, SeasonCreate, SeasonLabel 
 import { validate } from '../middleware/validate';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
-import { badRequest, notFound } from '../lib/http-error';
+import { badRequest, HttpError, notFound } from '../lib/http-error';
+
+const recordUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: RAINFALL_CSV_LIMIT_BYTES, files: 1 } });
 import { Farm, Membership } from '../models';
 import { queryFields } from '../services/field-presenter';
 import { ensureSeason, findSeason, getCropping, listSeasons, putCropping, resolveSeason } from '../services/seasons.service';
-import { getClimate, getGround, putClimate, putGround } from '../services/climate-ground.service';
+import { getClimate, getGround, putClimate, putClimateFromRecord, putGround } from '../services/climate-ground.service';
+import { RAINFALL_CSV_LIMIT_BYTES, rFromRainfallCsv } from '../services/rainfall-record';
+import multer from 'multer';
 import { assessField } from '../services/assessment.service';
 import { farmBoard, rankRows } from '../services/board.service';
 
@@ -45,6 +49,18 @@ export function seasonsRoutes(sequelize: Sequelize): { farms: Router; fields: Ro
   });
   farms.put('/:farmId/climate', loadFarmMembership, requireRole('farmer', 'advisor'), validate(ClimateUpdate), async (req, res) => {
     res.json(await putClimate(sequelize, { userId: req.user!.id }, req.membership!.farmId, req.body));
+  });
+  farms.post('/:farmId/climate/rainfall-record', loadFarmMembership, requireRole('farmer', 'advisor'), recordUpload.single('file'), async (req, res) => {
+    if (!req.file) throw badRequest('no_file', 'Attach the rainfall record as the multipart part named "file".');
+    const num = (v: unknown, name: string, min: number, max: number) => {
+      if (v === undefined || v === '') return undefined;
+      const n = Number(v);
+      if (!Number.isFinite(n) || n < min || n > max) throw badRequest('invalid_input', `${name}: must be a number from ${min} to ${max}.`);
+      return n;
+    };
+    const r = rFromRainfallCsv(req.file.buffer, num(req.body?.years, 'years', 0.1, 200));
+    if (!r.ok) throw new HttpError(r.status, r.error, r.message);
+    res.json(await putClimateFromRecord(sequelize, { userId: req.user!.id }, req.membership!.farmId, r.summary, num(req.body?.designStormMm, 'designStormMm', 1, 1000)));
   });
   farms.get('/:farmId/board', loadFarmMembership, async (req, res) => {
     const m = req.membership!;

@@ -75,7 +75,11 @@ export function buildEstimateInput(g: GatheredInputs): { input: EstimateInput | 
 
   let r: EstimateInput['r'] | null = null;
   if (!g.climate) gaps.push("the farm's rainfall erosivity R (set the farm climate)");
-  else if (g.climate.rFrom === 'value' && g.climate.rValue != null) {
+  else if (g.climate.rFrom === 'record' && g.climate.rValue != null) {
+    r = { from: 'value', value: g.climate.rValue, units: 'si' };
+    const rec = g.climate.record;
+    lines.push({ key: 'r', label: 'Rainfall erosivity R', value: `${fmt(g.climate.rValue, 0)} MJ·mm/(ha·h·yr)`, origin: 'derived', note: rec ? `from a rainfall record, ${rec.years} yr, ${rec.erosiveStorms} erosive storms (storm EI30, AH-703 ch. 2)` : 'from a rainfall record' });
+  } else if (g.climate.rFrom === 'value' && g.climate.rValue != null) {
     r = { from: 'value', value: g.climate.rValue, units: 'si' };
     lines.push({ key: 'r', label: 'Rainfall erosivity R', value: `${fmt(g.climate.rValue, 0)} MJ·mm/(ha·h·yr)`, origin: 'typed' });
   } else if (g.climate.annualPrecipitationMm != null) {

@@ -1,15 +1,17 @@
 // The farm's climate (R and the design storm) and a field's typed ground (slope % and
 // slope length where no elevation model covers it). Both versioned: 409 when stale.
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
-import type { Climate, ClimateUpdate, Ground } from '../../shared/schemas/season';
-import { conflict } from '../lib/http-error';
+import type { Climate, ClimateUpdate, Ground, RainfallRecordSummary } from '../../shared/schemas/season';
+import { conflict, invalid } from '../lib/http-error';
 import { recordEvent } from './audit';
 
-type ClimateRow = { r_from: Climate['rFrom']; r_value: number | null; annual_precipitation_mm: number | null; design_storm_mm: number; version: number };
+type ClimateRow = { r_from: Climate['rFrom']; r_value: number | null; annual_precipitation_mm: number | null; design_storm_mm: number; r_record: Climate['record']; version: number };
 
 export async function getClimate(sequelize: Sequelize, farmId: number, transaction?: Transaction): Promise<Climate | null> {
   const [r] = await sequelize.query<ClimateRow>(`SELECT * FROM farm_climates WHERE farm_id = :farmId`, { replacements: { farmId }, type: QueryTypes.SELECT, transaction });
-  return r ? { rFrom: r.r_from, rValue: r.r_value, annualPrecipitationMm: r.annual_precipitation_mm, designStormMm: r.design_storm_mm, version: r.version } : null;
+  return r
+    ? { rFrom: r.r_from, rValue: r.r_value, annualPrecipitationMm: r.annual_precipitation_mm, designStormMm: r.design_storm_mm, record: r.r_record, version: r.version }
+    : null;
 }
 
 function staleCheck(what: string, current: { version: number } | null, sent: number | undefined): void {
@@ -25,10 +27,33 @@ export async function putClimate(sequelize: Sequelize, actor: { userId: number }
     await sequelize.query(
       `INSERT INTO farm_climates (farm_id, r_from, r_value, annual_precipitation_mm, design_storm_mm) VALUES (:farmId, :rFrom, :rValue, :p, :storm)
        ON CONFLICT (farm_id) DO UPDATE SET r_from = EXCLUDED.r_from, r_value = EXCLUDED.r_value, annual_precipitation_mm = EXCLUDED.annual_precipitation_mm,
-         design_storm_mm = EXCLUDED.design_storm_mm, version = farm_climates.version + 1, updated_at = now()`,
+         design_storm_mm = EXCLUDED.design_storm_mm, r_record = NULL, version = farm_climates.version + 1, updated_at = now()`,
       { replacements: { farmId, rFrom: input.rFrom, rValue: input.rValue ?? null, p: input.annualPrecipitationMm ?? null, storm: input.designStormMm }, transaction: t },
     );
     await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: cur ? 'updated' : 'created' }, t);
+    return (await getClimate(sequelize, farmId, t))!;
+  });
+}
+
+/** R from an uploaded rainfall record; the design storm stays unless given. */
+export async function putClimateFromRecord(
+  sequelize: Sequelize,
+  actor: { userId: number },
+  farmId: number,
+  summary: RainfallRecordSummary,
+  designStormMm: number | undefined,
+): Promise<Climate> {
+  return sequelize.transaction(async (t) => {
+    const [cur] = await sequelize.query<{ design_storm_mm: number }>(`SELECT design_storm_mm FROM farm_climates WHERE farm_id = :farmId FOR UPDATE`, { replacements: { farmId }, type: QueryTypes.SELECT, transaction: t });
+    const storm = designStormMm ?? cur?.design_storm_mm;
+    if (storm === undefined) throw invalid('invalid_input', 'designStormMm: give the design storm depth (mm) with the first climate record of a farm.');
+    await sequelize.query(
+      `INSERT INTO farm_climates (farm_id, r_from, r_value, annual_precipitation_mm, design_storm_mm, r_record) VALUES (:farmId, 'record', :r, NULL, :storm, :rec)
+       ON CONFLICT (farm_id) DO UPDATE SET r_from = 'record', r_value = EXCLUDED.r_value, annual_precipitation_mm = NULL,
+         design_storm_mm = EXCLUDED.design_storm_mm, r_record = EXCLUDED.r_record, version = farm_climates.version + 1, updated_at = now()`,
+      { replacements: { farmId, r: summary.r, storm, rec: JSON.stringify(summary) }, transaction: t },
+    );
+    await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: 'rainfall-record', detail: { r: summary.r, years: summary.years } }, t);
     return (await getClimate(sequelize, farmId, t))!;
   });
 }

@@ -61,7 +61,17 @@ export const ClimateUpdate = z
   .refine((c) => c.rFrom !== 'value' || c.rValue != null, { message: 'rValue is required when rFrom is value', path: ['rValue'] })
   .refine((c) => c.rFrom !== 'precipitation' || c.annualPrecipitationMm != null, { message: 'annualPrecipitationMm is required when rFrom is precipitation', path: ['annualPrecipitationMm'] });
 export type ClimateUpdate = z.input<typeof ClimateUpdate>;
-export type Climate = { rFrom: 'value' | 'precipitation'; rValue: number | null; annualPrecipitationMm: number | null; designStormMm: number; version: number };
+/** What an uploaded rainfall record gave: R (MJ·mm/(ha·h·yr)) and the record's extent. */
+export type RainfallRecordSummary = { r: number; years: number; from: string; to: string; breakpoints: number; storms: number; erosiveStorms: number };
+export type Climate = {
+  rFrom: 'value' | 'precipitation' | 'record';
+  rValue: number | null;
+  annualPrecipitationMm: number | null;
+  designStormMm: number;
+  /** When rFrom is 'record'. */
+  record: RainfallRecordSummary | null;
+  version: number;
+};
 
 export const GroundUpdate = z.object({
   version: z.number().int().nonnegative().optional(),

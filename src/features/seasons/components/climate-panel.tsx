@@ -49,7 +49,8 @@ function ClimateForm({ climate, units, onSave, saving }: { climate: Climate | nu
     // The boxes may be empty (null); the schema says what is required.
     resolver: zodResolver(ClimateUpdate) as unknown as Resolver<Values, unknown, z.output<typeof ClimateUpdate>>,
     defaultValues: {
-      rFrom: climate?.rFrom ?? 'precipitation',
+      // R from a rainfall record is shown as the typed value it gave.
+      rFrom: climate?.rFrom === 'record' ? 'value' : (climate?.rFrom ?? 'precipitation'),
       rValue: climate?.rValue ?? null,
       annualPrecipitationMm: climate?.annualPrecipitationMm ?? null,
       designStormMm: climate?.designStormMm ?? null,
