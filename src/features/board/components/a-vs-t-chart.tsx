@@ -60,7 +60,7 @@ export function AVsTChart({ rows, units, showFarm = false }: { rows: BoardRow[];
               label={{ value: unit, position: 'insideBottomRight', offset: -2, fill: '#574d42', fontSize: 12 }}
               height={40}
             />
-            <YAxis type="category" dataKey="name" width={showFarm ? 190 : 110} tick={{ fill: '#1f1b16', fontSize: 12 }} stroke="#857a6c" />
+            <YAxis type="category" dataKey="name" width={showFarm ? 240 : 110} tick={{ fill: '#1f1b16', fontSize: 12 }} stroke="#857a6c" />
             <Tooltip
               formatter={(value, name) => [`${formatFigure(Number(value))} ${unit}`, name === 'a' ? 'A, estimated loss' : 'T, tolerated loss']}
               labelFormatter={(label, payload) => {

@@ -51,7 +51,9 @@ function FitAndFocus({ fields, selectedId }: { fields: FieldFeature[]; selectedI
 function BoardPolygon({ field, row, selected, onSelect }: { field: FieldFeature; row: BoardRow | undefined; selected: boolean; onSelect: (id: number) => void }) {
   const positions = useMemo(() => geometryToLatLngs(field.geometry), [field.geometry]);
   const handlers = useMemo(() => ({ click: () => onSelect(field.id) }), [onSelect, field.id]);
-  const classText = row?.riskClass?.label ?? NOT_ASSESSED_LABEL;
+  // The class's name before its colon ("Severe"), so labels fit on small fields; the key
+  // beside the map gives the whole name and the A/T range.
+  const classText = row?.riskClass ? row.riskClass.label.split(':')[0] : NOT_ASSESSED_LABEL.toLowerCase();
   return (
     <Polygon positions={positions} pathOptions={styleFor(row, selected)} eventHandlers={handlers}>
       <Tooltip key={selected ? 'selected' : 'plain'} permanent direction="center" className={selected ? 'fs-label fs-label-selected' : 'fs-label'}>

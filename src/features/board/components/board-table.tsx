@@ -27,13 +27,31 @@ export type RankedRow = BoardRow & { rank: number };
 
 const col = createColumnHelper<RankedRow>();
 
+/** The figure in the chosen units; the other units on hover. The column header names the unit. */
 function FigureCell({ figure, testId }: { figure: Figure | null; testId?: string }) {
   if (!figure) return <span className="text-ink-faint">—</span>;
   return (
-    <span className="num block text-right" data-testid={testId}>
-      <span className="whitespace-nowrap">{figure.main}</span>
-      <span className="block whitespace-nowrap text-xs text-ink-soft">{figure.alt}</span>
+    <span className="num block whitespace-nowrap text-right" data-testid={testId} title={figure.alt}>
+      {figure.main}
     </span>
+  );
+}
+
+/** Under each row, in words: why it ranks where it does, and what its estimate still waits for. */
+function Reasons({ row }: { row: BoardRow }) {
+  return (
+    <p className="flex flex-wrap gap-x-3 gap-y-0.5 text-ink-soft">
+      <span>
+        <span className="font-semibold text-ink">Why: </span>
+        {row.reasons.length ? row.reasons.join(' · ') : 'no strong driver'}
+      </span>
+      {row.gaps.length ? (
+        <span className="text-caution">
+          <span className="font-semibold">Missing: </span>
+          {row.gaps.join(' · ')}
+        </span>
+      ) : null}
+    </p>
   );
 }
 
@@ -43,14 +61,17 @@ const trueOnly: FilterFn<RankedRow> = (row, id, value: boolean) => !value || Boo
 
 type Props = {
   rows: RankedRow[];
+  /** Area units, from the user's setting. */
   units: Units;
+  /** Soil loss, tonnes and runoff: SI ('ha') or US ('ac'), the board's own toggle. */
+  lossUnits: Units;
   selectedId: number | null;
   onSelect: (row: RankedRow) => void;
   /** Show the farm of each row (the advisor's board across client farms). */
   showFarm?: boolean;
 };
 
-export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false }: Props) {
+export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showFarm = false }: Props) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const [globalFilter, setGlobalFilter] = useState('');
@@ -69,7 +90,7 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
           <span className="flex flex-col">
             <Link
               to={paths.field.getHref(c.row.original.farmId, c.row.original.fieldId)}
-              className="font-semibold text-clay-dark underline-offset-2 hover:underline"
+              className="whitespace-nowrap font-semibold text-clay-dark underline-offset-2 hover:underline"
               data-testid="board-field-link"
               onClick={(e) => e.stopPropagation()}
             >
@@ -85,20 +106,20 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
       }),
       col.accessor((r) => r.soilLossTPerHaYr ?? undefined, {
         id: 'soilLoss',
-        header: units === 'ac' ? 'A (US t/ac/yr)' : 'A (t/ha/yr)',
+        header: lossUnits === 'ac' ? 'A (US t/ac/yr)' : 'A (t/ha/yr)',
         sortUndefined: 'last',
         cell: (c) => {
           const v = c.row.original.soilLossTPerHaYr;
-          return <FigureCell figure={v === null ? null : lossFigure(v, units)} testId="board-a" />;
+          return <FigureCell figure={v === null ? null : lossFigure(v, lossUnits)} testId="board-a" />;
         },
       }),
       col.accessor((r) => r.toleranceTPerHaYr ?? undefined, {
         id: 'tolerance',
-        header: units === 'ac' ? 'T (US t/ac/yr)' : 'T (t/ha/yr)',
+        header: lossUnits === 'ac' ? 'T (US t/ac/yr)' : 'T (t/ha/yr)',
         sortUndefined: 'last',
         cell: (c) => {
           const v = c.row.original.toleranceTPerHaYr;
-          return <FigureCell figure={v === null ? null : lossFigure(v, units)} />;
+          return <FigureCell figure={v === null ? null : lossFigure(v, lossUnits)} />;
         },
       }),
       col.accessor((r) => r.aOverT ?? undefined, {
@@ -118,20 +139,20 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
       }),
       col.accessor((r) => r.tonnesPerYr ?? undefined, {
         id: 'tonnes',
-        header: units === 'ac' ? 'Soil lost (US tons/yr)' : 'Soil lost (t/yr)',
+        header: lossUnits === 'ac' ? 'Soil lost (US tons/yr)' : 'Soil lost (t/yr)',
         sortUndefined: 'last',
         cell: (c) => {
           const v = c.row.original.tonnesPerYr;
-          return <FigureCell figure={v === null ? null : tonnesFigure(v, units)} testId="board-tonnes" />;
+          return <FigureCell figure={v === null ? null : tonnesFigure(v, lossUnits)} testId="board-tonnes" />;
         },
       }),
       col.accessor((r) => r.runoffMm ?? undefined, {
         id: 'runoff',
-        header: units === 'ac' ? 'Storm runoff (in)' : 'Storm runoff (mm)',
+        header: lossUnits === 'ac' ? 'Storm runoff (in)' : 'Storm runoff (mm)',
         sortUndefined: 'last',
         cell: (c) => {
           const v = c.row.original.runoffMm;
-          return <FigureCell figure={v === null ? null : runoffFigure(v, units)} />;
+          return <FigureCell figure={v === null ? null : runoffFigure(v, lossUnits)} />;
         },
       }),
       col.accessor((r) => (r.riskClass ? RISK_CLASSES.findIndex((k) => k.key === r.riskClass!.key) : undefined), {
@@ -147,7 +168,7 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
         cell: (c) =>
           c.getValue() ? (
             <span className="whitespace-nowrap rounded border border-caution bg-caution-light px-1.5 py-0.5 text-xs font-semibold text-caution" data-testid="board-problem-clay">
-              Problem clay
+              yes
             </span>
           ) : (
             <span className="text-xs text-ink-soft">no</span>
@@ -157,33 +178,19 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
         id: 'gaps',
         header: 'What is missing',
         filterFn: trueOnly,
-        cell: (c) =>
-          c.row.original.gaps.length ? (
-            <ul className="min-w-40 list-inside list-disc text-xs text-caution">
-              {c.row.original.gaps.map((g) => (
-                <li key={g}>{g}</li>
-              ))}
-            </ul>
+        cell: (c) => {
+          const n = c.getValue();
+          return n ? (
+            <span className="whitespace-nowrap text-xs font-semibold text-caution">
+              <span className="num">{n}</span> missing
+            </span>
           ) : (
-            <span className="text-xs text-ink-soft">nothing</span>
-          ),
-      }),
-      col.display({
-        id: 'reasons',
-        header: 'Why it ranks here',
-        cell: (c) =>
-          c.row.original.reasons.length ? (
-            <ul className="min-w-48 list-inside list-disc text-xs">
-              {c.row.original.reasons.map((r) => (
-                <li key={r}>{r}</li>
-              ))}
-            </ul>
-          ) : (
-            <span className="text-xs text-ink-soft">no strong driver</span>
-          ),
+            <span className="text-xs text-ink-soft">none</span>
+          );
+        },
       }),
     ],
-    [units, showFarm],
+    [units, lossUnits, showFarm],
   );
 
   const table = useReactTable({
@@ -272,7 +279,7 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
                     <th
                       key={h.id}
                       scope="col"
-                      className="px-2 py-1.5 align-bottom font-medium"
+                      className="px-1.5 py-1.5 align-bottom font-medium"
                       aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
                     >
                       {h.column.getCanSort() ? (
@@ -300,7 +307,7 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
           <tbody>
             {shown.map((row) => {
               const selected = row.original.fieldId === selectedId;
-              return (
+              const main = (
                 <tr
                   key={row.id}
                   data-testid="board-row"
@@ -314,17 +321,31 @@ export function BoardTable({ rows, units, selectedId, onSelect, showFarm = false
                       onSelect(row.original);
                     }
                   }}
-                  className={`cursor-pointer border-b border-paper-edge align-top ${
-                    selected ? 'bg-clay-light outline outline-2 -outline-offset-2 outline-clay' : 'hover:bg-paper-deep/60'
+                  className={`cursor-pointer align-top ${
+                    selected ? 'bg-clay-light' : 'hover:bg-paper-deep/60'
                   }`}
                 >
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-2 py-1.5">
+                    <td key={cell.id} className="px-1.5 pt-1.5">
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}
                 </tr>
               );
+              const why = (
+                <tr
+                  key={`${row.id}-why`}
+                  onClick={() => onSelect(row.original)}
+                  className={`cursor-pointer border-b border-paper-edge ${selected ? 'bg-clay-light' : ''}`}
+                  data-testid="board-row-reasons"
+                >
+                  <td />
+                  <td colSpan={columns.length - 1} className="px-1.5 pb-1.5 pt-0.5 text-xs">
+                    <Reasons row={row.original} />
+                  </td>
+                </tr>
+              );
+              return [main, why];
             })}
             {shown.length === 0 ? (
               <tr>

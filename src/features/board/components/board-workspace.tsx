@@ -15,6 +15,11 @@ import { lossFigure } from './loss-units';
 import { RiskBadge } from './risk-badge';
 import { RiskLegend } from './risk-legend';
 
+const LOSS_UNIT_CHOICES: { value: Units; label: string }[] = [
+  { value: 'ha', label: 't/ha/yr, mm' },
+  { value: 'ac', label: 'US t/ac/yr, in' },
+];
+
 type Props = {
   rows: BoardRow[];
   fields: FieldFeature[];
@@ -28,6 +33,9 @@ type Props = {
 export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution }: Props) {
   const navigate = useNavigate();
   const [selectedId, setSelectedId] = useState<number | null>(null);
+  // Follows the user's area setting until the board's own toggle is used.
+  const [lossChoice, setLossUnits] = useState<Units | null>(null);
+  const lossUnits = lossChoice ?? units;
   const ranked: RankedRow[] = useMemo(() => rows.map((r, i) => ({ ...r, rank: i + 1 })), [rows]);
   const selected = ranked.find((r) => r.fieldId === selectedId) ?? null;
   const counts = useMemo(() => {
@@ -40,8 +48,26 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
 
   return (
     <div className="flex flex-col gap-4">
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(340px,34%)]">
-        <BoardTable rows={ranked} units={units} selectedId={selectedId} onSelect={(r) => setSelectedId(r.fieldId)} showFarm={showFarm} />
+      <div role="group" aria-label="Units of soil loss" className="flex items-center gap-1 text-sm" data-testid="board-loss-units">
+        <span className="text-ink-soft">Soil loss and runoff in</span>
+        {LOSS_UNIT_CHOICES.map((c) => (
+          <button
+            key={c.value}
+            type="button"
+            aria-pressed={lossUnits === c.value}
+            onClick={() => setLossUnits(c.value)}
+            data-testid={`board-loss-units-${c.value === 'ha' ? 'si' : 'us'}`}
+            className={`rounded border px-2 py-0.5 font-medium ${
+              lossUnits === c.value ? 'border-clay-dark bg-clay text-paper' : 'border-ink-faint bg-paper text-ink hover:bg-paper-deep'
+            }`}
+          >
+            {c.label}
+          </button>
+        ))}
+        <span className="text-xs text-ink-soft">(hover a figure for the other units)</span>
+      </div>
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(320px,28%)]">
+        <BoardTable rows={ranked} units={units} lossUnits={lossUnits} selectedId={selectedId} onSelect={(r) => setSelectedId(r.fieldId)} showFarm={showFarm} />
         <div className="flex flex-col gap-2 xl:sticky xl:top-2 xl:self-start">
           <div className="flex min-h-12 flex-wrap items-center gap-2 rounded-md border border-paper-edge bg-white/50 px-3 py-2 text-sm" data-testid="board-selection" aria-live="polite">
             {selected ? (
@@ -49,7 +75,7 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
                 <span className="num font-semibold">{selected.rank}.</span>
                 <span className="font-semibold">{selected.name}</span>
                 <RiskBadge riskClass={selected.riskClass} />
-                {selected.soilLossTPerHaYr !== null ? <span className="num text-ink-soft">{lossFigure(selected.soilLossTPerHaYr, units).main}</span> : null}
+                {selected.soilLossTPerHaYr !== null ? <span className="num text-ink-soft">{lossFigure(selected.soilLossTPerHaYr, lossUnits).main}</span> : null}
                 <Button size="sm" className="ml-auto" onClick={() => open(selected)} data-testid="board-open-field">
                   Open the Field screen
                 </Button>
@@ -65,7 +91,7 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
         </div>
       </div>
       <div className="max-w-4xl">
-        <AVsTChart rows={rows} units={units} showFarm={showFarm} />
+        <AVsTChart rows={rows} units={lossUnits} showFarm={showFarm} />
       </div>
     </div>
   );

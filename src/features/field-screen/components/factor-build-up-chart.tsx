@@ -12,6 +12,16 @@ const T_COLOUR = '#1f1b16';
 
 type Step = { step: string; value: number; factor: string };
 
+/** A round axis end (1, 2 or 5 × a power of ten per step) and its ticks. */
+function niceAxis(top: number): { max: number; ticks: number[] } {
+  if (!(top > 0)) return { max: 1, ticks: [0, 1] };
+  const raw = top / 4;
+  const pow = 10 ** Math.floor(Math.log10(raw));
+  const step = [1, 2, 5, 10].map((m) => m * pow).find((s) => s >= raw) ?? 10 * pow;
+  const n = Math.ceil(top / step);
+  return { max: n * step, ticks: Array.from({ length: n + 1 }, (_, i) => i * step) };
+}
+
 export function FactorBuildUpChart({ estimate, riskColour, units }: { estimate: EstimateSuccess; riskColour: string; units: Units }) {
   const f = estimate.factors;
   const conv = (tPerHa: number) => (units === 'ac' ? tPerHaToTonPerAc(tPerHa) : tPerHa);
@@ -25,7 +35,7 @@ export function FactorBuildUpChart({ estimate, riskColour, units }: { estimate: 
     { step: '× P, this practice = A', value: conv(unitPlot * f.ls.value * f.c.value * f.p.value), factor: `P ${formatFigure(f.p.value)}` },
   ];
   const t = conv(f.t.value);
-  const max = Math.max(t, ...steps.map((s) => s.value)) * 1.15;
+  const { max, ticks } = niceAxis(Math.max(t, ...steps.map((s) => s.value)) * 1.05);
 
   return (
     <figure className="flex flex-col gap-1" data-testid="factor-chart">
@@ -38,7 +48,7 @@ export function FactorBuildUpChart({ estimate, riskColour, units }: { estimate: 
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={steps} layout="vertical" margin={{ top: 18, right: 72, bottom: 4, left: 8 }}>
             <CartesianGrid horizontal={false} stroke="#d9cfba" />
-            <XAxis type="number" domain={[0, max]} tickFormatter={(v: number) => formatFigure(v)} tick={{ fill: '#574d42', fontSize: 12 }} stroke="#857a6c" />
+            <XAxis type="number" domain={[0, max]} ticks={ticks} tickFormatter={(v: number) => formatFigure(v)} tick={{ fill: '#574d42', fontSize: 12 }} stroke="#857a6c" />
             <YAxis type="category" dataKey="step" width={160} tick={{ fill: '#1f1b16', fontSize: 12 }} stroke="#857a6c" />
             <Tooltip
               formatter={(value) => [`${formatFigure(Number(value))} ${unit}`, 'Yearly loss']}

@@ -12,9 +12,9 @@ export function GroundTab({ field, canEdit, units }: { field: FieldFeature; canE
   const hasTerrain = terrain.isSuccess;
   const noTerrain = terrain.isError && isNoTerrain(terrain.error);
   return (
-    <section className="flex flex-col gap-4" data-testid="ground-tab" aria-label="Ground">
+    <section className="flex max-w-3xl flex-col gap-4" data-testid="ground-tab" aria-label="Ground">
       {hasTerrain ? (
-        <div className="rounded-md border border-paper-edge bg-white/40 p-3">
+        <div>
           <FieldTerrainFigures fieldId={field.id} fieldVersion={field.properties.version} farmId={field.properties.farmId} units={units} />
           <p className="mt-2 text-sm text-ink-soft">
             The risk uses the mean LS of these cells; a typed slope % is not needed while the elevation model covers the field.

@@ -1,6 +1,7 @@
 // PUT /api/farms/:farmId/climate (farmer, advisor) — with the version read; 409 carries the
 // record the server holds now, which the cache takes.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { isApiError } from '../../../lib/api-client';
 import type { Climate, ClimateUpdate } from '../../../../shared/schemas/season';
 import { getClimateQueryOptions } from './get-climate';
 import { putJson } from './put-json';
@@ -21,6 +22,8 @@ export function useUpdateClimate(farmId: number) {
       const current = currentFromConflict<Climate>(error);
       if (current) queryClient.setQueryData(key, current);
       else void queryClient.invalidateQueries({ queryKey: key });
+      // The other person's change is an input too.
+      if (isApiError(error, 409)) invalidateAssessments(queryClient);
     },
   });
 }

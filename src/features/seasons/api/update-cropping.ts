@@ -1,6 +1,7 @@
 // PUT /api/fields/:fieldId/cropping (farmer, advisor) — the season's crop, tillage, residue,
 // cover crop and support practice, with the version read; 409 carries the current record.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { isApiError } from '../../../lib/api-client';
 import type { z } from 'zod';
 import type { Cropping, CroppingUpdate } from '../../../../shared/schemas/season';
 import { getCroppingQueryOptions } from './get-cropping';
@@ -24,6 +25,8 @@ export function useUpdateCropping(fieldId: number) {
       const current = currentFromConflict<Cropping>(error);
       if (current) queryClient.setQueryData(key, current);
       else void queryClient.invalidateQueries({ queryKey: key });
+      // The other person's change is an input too.
+      if (isApiError(error, 409)) invalidateAssessments(queryClient);
     },
   });
 }

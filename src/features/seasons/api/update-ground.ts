@@ -1,6 +1,7 @@
 // PUT /api/fields/:fieldId/ground (farmer, advisor) — typed slope, with the version read; 409
 // carries the current record.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { isApiError } from '../../../lib/api-client';
 import type { z } from 'zod';
 import type { GroundUpdate } from '../../../../shared/schemas/season';
 import { getGroundQueryOptions, type GroundRecord } from './get-ground';
@@ -24,6 +25,8 @@ export function useUpdateGround(fieldId: number) {
       const current = currentFromConflict<GroundRecord>(error);
       if (current) queryClient.setQueryData(key, current);
       else void queryClient.invalidateQueries({ queryKey: key });
+      // The other person's change is an input too.
+      if (isApiError(error, 409)) invalidateAssessments(queryClient);
     },
   });
 }

@@ -218,7 +218,7 @@ export function CroppingPanel({ fieldId, season, canEdit, units }: Props) {
   if (cropping.isError) return <Notice tone="error">{cropping.error.message}</Notice>;
 
   return (
-    <div className="flex flex-col gap-3" data-testid="cropping-panel">
+    <div className="flex max-w-3xl flex-col gap-3" data-testid="cropping-panel">
       {cropping.data === null ? (
         <Notice tone="caution" testId="cropping-missing">
           No cropping recorded for {season} yet: the field's risk waits for it.
