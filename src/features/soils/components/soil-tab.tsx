@@ -1,26 +1,103 @@
-// The Field screen's Soil tab: the field's soil summary, its samples, the triangle chart,
-// CSV upload, profile photos and the soil map units under the field.
+// The Field screen's Soil tab: the field's soil summary at the top; its samples (typed lab
+// results, a feel test, or a CSV from the lab) with the texture triangle; profile photos; the
+// soil map units under the field, and for farmer and advisor the farm's soil map itself.
+// Farmer and advisor change soils; a landowner reads.
+import { useState } from 'react';
+import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
+import type { Separates, TextureClass } from '../../../../shared/erosion/texture';
+import { useMe } from '../../auth/api/get-me';
+import { useSoilSamples } from '../api/get-soil-samples';
 import { useSoilSummary } from '../api/get-soil-summary';
+import { FeelTestWizard } from './feel-test-wizard';
+import { FieldSoilMapUnits } from './field-soil-map-units';
+import { SampleForm } from './sample-form';
+import { SoilCsvUpload } from './soil-csv-upload';
+import { SoilMapPanel } from './soil-map-panel';
+import { SoilPhotos } from './soil-photos';
+import { SoilSampleTable } from './soil-sample-table';
+import { SoilSummaryCard } from './soil-summary-card';
+import { TextureTriangle, type TrianglePoint } from './texture-triangle';
 
 export type SoilTabProps = { fieldId: number; farmId: number; role: 'farmer' | 'advisor' | 'landowner' };
 
-export function SoilTab({ fieldId }: SoilTabProps) {
+type Adding = 'lab' | 'feel' | null;
+
+export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
+  const canEdit = role === 'farmer' || role === 'advisor';
+  const units = useMe().data?.units ?? 'ha';
+  const samples = useSoilSamples(fieldId);
   const summary = useSoilSummary(fieldId);
+  const [adding, setAdding] = useState<Adding>(null);
+
+  const list = samples.data ?? [];
+  const points: TrianglePoint[] = list
+    .filter((s) => s.sandPct !== null && s.siltPct !== null && s.clayPct !== null)
+    .map((s) => ({ id: s.id, label: s.label ?? `Sample ${s.id}`, separates: { sand: s.sandPct!, silt: s.siltPct!, clay: s.clayPct! } }));
+  const sm = summary.data;
+  const mean: Separates | null =
+    sm && sm.sandPct !== null && sm.siltPct !== null && sm.clayPct !== null && points.length > 1 ? { sand: sm.sandPct, silt: sm.siltPct, clay: sm.clayPct } : null;
+  const feelCount = list.filter((s) => s.kind === 'feel').length;
+
   return (
-    <div className="flex flex-col gap-4" data-testid="soil-tab">
-      <section data-testid="soil-summary" className="rounded-md border border-paper-edge bg-white/40 p-3">
-        <h2 className="text-lg font-semibold">Soil of this field</h2>
-        {summary.isPending ? (
+    <div className="flex flex-col gap-5" data-testid="soil-tab">
+      <SoilSummaryCard fieldId={fieldId} units={units} />
+
+      <section aria-labelledby="soil-samples-heading" className="flex flex-col gap-3">
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 id="soil-samples-heading" className="text-lg font-semibold">
+            Soil samples
+          </h2>
+          {canEdit ? (
+            <div className="flex flex-wrap gap-2">
+              <Button variant={adding === 'lab' ? 'primary' : 'secondary'} size="sm" onClick={() => setAdding(adding === 'lab' ? null : 'lab')} aria-expanded={adding === 'lab'} data-testid="add-lab-sample">
+                Type lab results
+              </Button>
+              <Button variant={adding === 'feel' ? 'primary' : 'secondary'} size="sm" onClick={() => setAdding(adding === 'feel' ? null : 'feel')} aria-expanded={adding === 'feel'} data-testid="add-feel-test">
+                Do a feel test
+              </Button>
+            </div>
+          ) : null}
+        </div>
+        {adding === 'lab' ? <SampleForm fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
+        {adding === 'feel' ? <FeelTestWizard fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
+        {samples.isPending ? (
           <p className="text-sm text-ink-soft">Loading…</p>
-        ) : summary.isError ? (
-          <Notice tone="error">{summary.error.message}</Notice>
+        ) : samples.isError ? (
+          <Notice tone="error">{samples.error.message}</Notice>
         ) : (
-          <p className="text-sm">
-            Texture class: {summary.data.textureClass ?? 'not known yet'}
-          </p>
+          <SoilSampleTable fieldId={fieldId} samples={list} canEdit={canEdit} />
         )}
       </section>
+
+      <div className="grid gap-5 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <section aria-labelledby="texture-triangle-heading" className="flex flex-col gap-2">
+          <h3 id="texture-triangle-heading" className="text-base font-semibold">
+            Where the lab samples sit on the texture triangle
+          </h3>
+          <TextureTriangle points={points} mean={mean} meanClass={mean ? ((sm?.textureClass as TextureClass | null) ?? null) : null} />
+          {feelCount ? (
+            <p className="text-sm text-ink-soft">
+              <span className="num">{feelCount}</span> feel {feelCount === 1 ? 'test has' : 'tests have'} a class but no percentages, so{' '}
+              {feelCount === 1 ? 'it is' : 'they are'} not drawn.
+            </p>
+          ) : null}
+        </section>
+        {canEdit ? <SoilCsvUpload fieldId={fieldId} /> : null}
+      </div>
+
+      <SoilPhotos fieldId={fieldId} canEdit={canEdit} samples={list} />
+
+      <FieldSoilMapUnits fieldId={fieldId} units={units} />
+
+      {canEdit ? (
+        <details className="rounded-md border border-paper-edge" data-testid="soil-tab-farm-map">
+          <summary className="cursor-pointer px-3 py-2 font-medium">The farm's soil map (for every field)</summary>
+          <div className="p-2">
+            <SoilMapPanel farmId={farmId} role={role} />
+          </div>
+        </details>
+      ) : null}
     </div>
   );
 }

@@ -1,0 +1,129 @@
+// The field's soil samples, one row each: what kind, when and how deep, the separates, the
+// texture class, organic matter, pH, the drainage verdict. Farmer and advisor change or
+// delete a row in place (delete asks once more).
+import { Fragment, useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import type { SoilSample } from '../../../../shared/schemas/soils';
+import { useDeleteSoilSample } from '../api/delete-soil-sample';
+import { depthRange, fmt, fmtCm, fmtPct, fmtPh, formatDay } from './format-soil';
+import { SampleForm } from './sample-form';
+
+const dash = <span className="text-ink-faint">—</span>;
+
+function feelWords(s: SoilSample): string {
+  const f = s.feelTest;
+  if (!f) return '';
+  if (!f.balls) return 'will not ball';
+  if (!f.ribbonCm) return 'balls, no ribbon';
+  return `ribbon ${fmt(f.ribbonCm, 1)} cm${f.ribbonClass ? ` (${f.ribbonClass})` : ''}, ${f.feel === 'neither' ? 'neither gritty nor smooth' : `very ${f.feel}`}`;
+}
+
+function Separates({ s }: { s: SoilSample }) {
+  if (s.sandPct === null || s.siltPct === null || s.clayPct === null) return s.kind === 'feel' ? <span className="text-ink-soft">{feelWords(s)}</span> : dash;
+  return (
+    <span className="num whitespace-nowrap">
+      {fmt(s.sandPct, 0)} / {fmt(s.siltPct, 0)} / {fmt(s.clayPct, 0)} %
+    </span>
+  );
+}
+
+function DeleteButton({ sample, fieldId }: { sample: SoilSample; fieldId: number }) {
+  const [confirm, setConfirm] = useState(false);
+  const remove = useDeleteSoilSample(fieldId);
+  if (!confirm)
+    return (
+      <Button variant="danger" size="sm" onClick={() => setConfirm(true)} data-testid="sample-delete">
+        Delete
+      </Button>
+    );
+  return (
+    <span className="flex flex-wrap items-center gap-1">
+      <Button variant="danger" size="sm" disabled={remove.isPending} onClick={() => remove.mutate(sample.id)} data-testid="sample-delete-confirm">
+        {remove.isPending ? 'Deleting…' : 'Yes, delete'}
+      </Button>
+      <Button variant="secondary" size="sm" onClick={() => setConfirm(false)}>
+        Keep
+      </Button>
+      {remove.isError ? <span className="text-sm text-alert">{remove.error.message}</span> : null}
+    </span>
+  );
+}
+
+const COLUMNS = ['Sample', 'Sampled', 'Depth', 'Sand / silt / clay', 'Texture class', 'Organic matter', 'pH', 'Gray from', 'Drainage'];
+
+type Props = { fieldId: number; samples: SoilSample[]; canEdit: boolean };
+
+export function SoilSampleTable({ fieldId, samples, canEdit }: Props) {
+  const [editing, setEditing] = useState<number | null>(null);
+  if (samples.length === 0)
+    return (
+      <Notice tone="info" testId="soil-samples-none">
+        No soil samples yet.{canEdit ? ' Type lab results, run a feel test, or upload a CSV from the lab.' : ''}
+      </Notice>
+    );
+  const span = COLUMNS.length + (canEdit ? 1 : 0);
+  return (
+    <div className="overflow-x-auto rounded-md border border-paper-edge bg-white/40">
+      <table className="w-full border-collapse text-sm" data-testid="soil-sample-table">
+        <thead>
+          <tr className="border-b border-paper-edge text-left text-ink-soft">
+            {COLUMNS.map((c) => (
+              <th key={c} scope="col" className="px-2 py-1.5 font-medium">
+                {c}
+              </th>
+            ))}
+            {canEdit ? <th scope="col" className="px-2 py-1.5"><span className="sr-only">Change</span></th> : null}
+          </tr>
+        </thead>
+        <tbody>
+          {samples.map((s) => (
+            <Fragment key={s.id}>
+              <tr className="border-b border-paper-edge align-top last:border-b-0" data-testid="soil-sample-row" data-sample-id={s.id}>
+                <td className="px-2 py-1.5">
+                  <span className="font-medium">{s.label ?? `Sample ${s.id}`}</span>
+                  <span className="block text-xs text-ink-soft">{s.kind === 'lab' ? 'lab results' : 'feel test'}</span>
+                </td>
+                <td className="num whitespace-nowrap px-2 py-1.5">{s.sampledOn ? formatDay(s.sampledOn) : dash}</td>
+                <td className="num whitespace-nowrap px-2 py-1.5">{depthRange(s.depthTopCm, s.depthBottomCm) ?? dash}</td>
+                <td className="px-2 py-1.5">
+                  <Separates s={s} />
+                  {s.separatesSumPct !== null && Math.abs(s.separatesSumPct - 100) > 0.05 ? (
+                    <span className="num block text-xs text-ink-soft">typed sum {fmt(s.separatesSumPct, 1)} %, scaled</span>
+                  ) : null}
+                </td>
+                <td className="px-2 py-1.5">{s.textureClass ?? dash}</td>
+                <td className="num px-2 py-1.5">{s.organicMatterPct !== null ? fmtPct(s.organicMatterPct, 1) : dash}</td>
+                <td className="num px-2 py-1.5">
+                  {s.ph !== null ? fmtPh(s.ph) : dash}
+                  {s.bufferPh !== null ? <span className="block text-xs text-ink-soft">buffer {fmtPh(s.bufferPh)}</span> : null}
+                </td>
+                <td className="num whitespace-nowrap px-2 py-1.5">
+                  {s.depthToGrayCm !== null ? fmtCm(s.depthToGrayCm) : s.describedToCm !== null ? <span className="text-ink-soft">none to {fmtCm(s.describedToCm)}</span> : dash}
+                </td>
+                <td className="px-2 py-1.5">{s.drainageClass ?? dash}</td>
+                {canEdit ? (
+                  <td className="px-2 py-1.5">
+                    <span className="flex flex-wrap justify-end gap-1">
+                      <Button variant="secondary" size="sm" onClick={() => setEditing(editing === s.id ? null : s.id)} data-testid="sample-edit" aria-expanded={editing === s.id}>
+                        Change
+                      </Button>
+                      <DeleteButton sample={s} fieldId={fieldId} />
+                    </span>
+                  </td>
+                ) : null}
+              </tr>
+              {editing === s.id ? (
+                <tr className="border-b border-paper-edge bg-paper">
+                  <td colSpan={span} className="p-2">
+                    <SampleForm key={s.id} fieldId={fieldId} sample={s} onDone={() => setEditing(null)} />
+                  </td>
+                </tr>
+              ) : null}
+            </Fragment>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
