@@ -43,7 +43,7 @@ function Reasons({ row }: { row: BoardRow }) {
     <p className="flex flex-wrap gap-x-3 gap-y-0.5 text-ink-soft">
       <span>
         <span className="font-semibold text-ink">Why: </span>
-        {row.reasons.length ? row.reasons.join(' · ') : 'no strong driver'}
+        {row.reasons.length ? row.reasons.join(' · ') : row.riskClass ? 'no strong driver' : 'not ranked until the missing inputs are in'}
       </span>
       {row.gaps.length ? (
         <span className="text-caution">

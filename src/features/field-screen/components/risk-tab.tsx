@@ -32,7 +32,18 @@ function Big({ label, figure, testId }: { label: string; figure: Figure | null; 
   );
 }
 
-function Gaps({ gaps }: { gaps: string[] }) {
+type TabName = 'ground' | 'soil' | 'cropping';
+
+/** The tab where a gap is filled, from the words of the gap. */
+const tabFor = (gap: string): TabName | null => {
+  if (/slope|elevation/i.test(gap)) return 'ground';
+  if (/soil|texture|\bK\b|sample/i.test(gap)) return 'soil';
+  if (/cropping|crop/i.test(gap)) return 'cropping';
+  return null;
+};
+const TAB_WORDS: Record<TabName, string> = { ground: 'Ground', soil: 'Soil', cropping: 'Cropping' };
+
+function Gaps({ gaps, onOpenTab }: { gaps: string[]; onOpenTab?: (tab: TabName) => void }) {
   return (
     <section aria-labelledby="gaps-heading" data-testid="assessment-gaps" className="flex flex-col gap-1">
       <h3 id="gaps-heading" className="font-serif text-lg font-semibold">
@@ -40,9 +51,22 @@ function Gaps({ gaps }: { gaps: string[] }) {
       </h3>
       {gaps.length ? (
         <ul className="list-inside list-disc text-sm">
-          {gaps.map((g) => (
-            <li key={g}>{g}</li>
-          ))}
+          {gaps.map((g) => {
+            const tab = tabFor(g);
+            return (
+              <li key={g}>
+                {g}
+                {tab && onOpenTab ? (
+                  <>
+                    {' '}
+                    <button type="button" className="font-semibold text-clay-dark underline underline-offset-2" onClick={() => onOpenTab(tab)}>
+                      Open the {TAB_WORDS[tab]} tab
+                    </button>
+                  </>
+                ) : null}
+              </li>
+            );
+          })}
         </ul>
       ) : (
         <p className="text-sm text-ink-soft">Nothing: every input the estimate needs is there.</p>
@@ -76,7 +100,9 @@ function ProblemClay({ a }: { a: FieldAssessment }) {
   );
 }
 
-export function RiskTab({ fieldId, season, units }: { fieldId: number; season: string; units: Units }) {
+type Props = { fieldId: number; season: string; units: Units; onOpenTab?: (tab: TabName) => void };
+
+export function RiskTab({ fieldId, season, units, onOpenTab }: Props) {
   const q = useAssessment(fieldId, season);
   if (q.isPending) return <p className="text-sm text-ink-soft">Working out the risk…</p>;
   if (q.isError) return <Notice tone="error" title="The risk could not be worked out">{q.error.message}</Notice>;
@@ -135,7 +161,7 @@ export function RiskTab({ fieldId, season, units }: { fieldId: number; season: s
         </Notice>
       )}
 
-      <Gaps gaps={a.gaps} />
+      <Gaps gaps={a.gaps} onOpenTab={onOpenTab} />
       <ProblemClay a={a} />
       {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
       {e ? <FactorTable factors={e.factors} units={units === 'ac' ? 'us' : 'si'} extra={ro ? [{ name: 'CN, curve number', p: ro.cn }] : undefined} /> : null}

@@ -8,6 +8,7 @@ import type { FieldFeature } from '../../../../shared/schemas/field';
 import { useDeleteField } from '../api/delete-field';
 import { fieldEditErrorMessage } from './conflict-message';
 import { RenameFieldForm } from './rename-field-form';
+import { OpenFieldLink } from '../../field-screen/components/open-field-link';
 
 type Props = {
   field: FieldFeature;
@@ -62,6 +63,7 @@ export function FieldDetails({ field, units, canEdit, onClose, onDeleted, childr
           </>
         ) : null}
       </dl>
+      <OpenFieldLink farmId={p.farmId} fieldId={field.id} className="mt-2 text-sm" />
       {p.overlaps.length > 0 ? (
         <Notice tone="caution" title="Overlaps other fields" className="mt-2">
           <ul className="list-inside list-disc">
