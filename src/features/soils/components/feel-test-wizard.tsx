@@ -15,12 +15,15 @@ import { ChemistryInputs, DrainageInputs, WhereWhenInputs } from './sample-input
 
 const { weakBelowCm, strongAboveCm } = DEFAULT_FEEL_KEY.ribbonThresholdsCm;
 
+/** To the nearest half centimetre. */
+const half = (cm: number) => Math.round(cm * 2) / 2;
+
 type RibbonChoice = { key: string; label: string; detail: string; cm: number };
 /** A typical length for each ribbon class, stored when the person picks the class, not a length. */
 const RIBBONS: RibbonChoice[] = [
   { key: 'none', label: 'No ribbon', detail: 'it breaks at once', cm: 0 },
-  { key: 'weak', label: 'Short', detail: `under ${fmt(weakBelowCm, 1)} cm`, cm: weakBelowCm / 2 },
-  { key: 'medium', label: 'Medium', detail: `${fmt(weakBelowCm, 1)}–${fmt(strongAboveCm, 0)} cm`, cm: (weakBelowCm + strongAboveCm) / 2 },
+  { key: 'weak', label: 'Short', detail: `under ${fmt(weakBelowCm, 1)} cm`, cm: half(weakBelowCm * 0.6) },
+  { key: 'medium', label: 'Medium', detail: `${fmt(weakBelowCm, 1)}–${fmt(strongAboveCm, 0)} cm`, cm: half((weakBelowCm + strongAboveCm) / 2) },
   { key: 'strong', label: 'Long', detail: `over ${fmt(strongAboveCm, 0)} cm`, cm: strongAboveCm + 2 },
 ];
 

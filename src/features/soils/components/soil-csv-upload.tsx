@@ -32,12 +32,12 @@ function RejectedRows({ rejected }: { rejected: CsvRejectedRow[] }) {
   return (
     <div>
       <p className="font-semibold">
-        <span className="num">{rejected.length}</span> {rejected.length === 1 ? 'row' : 'rows'} cannot be used:
+        <span className="num">{rejected.length}</span> {rejected.length === 1 ? 'row' : 'rows'} cannot be used (the header is row 1):
       </p>
       <ul className="mt-1 flex max-h-48 flex-col gap-0.5 overflow-auto" data-testid="soil-csv-rejected">
         {rejected.map((r) => (
           <li key={r.row} data-testid="soil-csv-rejected-row">
-            <span className="num font-medium">Row {r.row}</span>: {r.reason}
+            <span className="num font-medium">Row {r.row}</span>: {r.reason.replace(/^row \d+,\s*/i, '')}
           </li>
         ))}
       </ul>
@@ -93,7 +93,7 @@ export function SoilCsvUpload({ fieldId }: { fieldId: number }) {
         }`}
       >
         <p>
-          Drop a CSV here (one sample a row, up to <span className="num">{SOIL_CSV_MAX_BYTES / KB} kB</span>), or
+          Drop a CSV here (one sample a row, up to <span className="num">1 MB</span>), or
         </p>
         <label
           htmlFor={inputId}
@@ -132,8 +132,8 @@ export function SoilCsvUpload({ fieldId }: { fieldId: number }) {
       {fileError ? <Notice tone="error">{fileError}</Notice> : null}
       {upload.isError ? (
         <Notice tone="error" title="Nothing was stored" testId="soil-csv-error">
-          <p>{upload.error.message}</p>
-          {rejected.length ? <RejectedRows rejected={rejected} /> : null}
+          {/* With rejected rows, the list says it all; the server's message also speaks to API callers. */}
+          {rejected.length ? <RejectedRows rejected={rejected} /> : <p>{upload.error.message}</p>}
           {rejected.length && file && goodRows !== 0 ? (
             <Button
               variant="secondary"

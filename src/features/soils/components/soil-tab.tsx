@@ -17,6 +17,7 @@ import { SoilMapPanel } from './soil-map-panel';
 import { SoilPhotos } from './soil-photos';
 import { SoilSampleTable } from './soil-sample-table';
 import { SoilSummaryCard } from './soil-summary-card';
+import { fmtPct } from './format-soil';
 import { TextureTriangle, type TrianglePoint } from './texture-triangle';
 
 export type SoilTabProps = { fieldId: number; farmId: number; role: 'farmer' | 'advisor' | 'landowner' };
@@ -68,23 +69,41 @@ export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
         ) : (
           <SoilSampleTable fieldId={fieldId} samples={list} canEdit={canEdit} />
         )}
+        {canEdit ? <SoilCsvUpload fieldId={fieldId} /> : null}
       </section>
 
-      <div className="grid gap-5 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <section aria-labelledby="texture-triangle-heading" className="flex flex-col gap-2">
-          <h3 id="texture-triangle-heading" className="text-base font-semibold">
-            Where the lab samples sit on the texture triangle
-          </h3>
+      <section aria-labelledby="texture-triangle-heading" className="flex flex-col gap-2">
+        <h3 id="texture-triangle-heading" className="text-base font-semibold">
+          Where the lab samples sit on the texture triangle
+        </h3>
+        <div className="grid gap-4 md:grid-cols-[minmax(0,3fr)_minmax(0,1fr)]">
           <TextureTriangle points={points} mean={mean} meanClass={mean ? ((sm?.textureClass as TextureClass | null) ?? null) : null} />
-          {feelCount ? (
-            <p className="text-sm text-ink-soft">
-              <span className="num">{feelCount}</span> feel {feelCount === 1 ? 'test has' : 'tests have'} a class but no percentages, so{' '}
-              {feelCount === 1 ? 'it is' : 'they are'} not drawn.
-            </p>
-          ) : null}
-        </section>
-        {canEdit ? <SoilCsvUpload fieldId={fieldId} /> : null}
-      </div>
+          <div className="flex flex-col gap-2 text-sm">
+            {points.length ? (
+              <ul className="flex flex-col gap-1" aria-label="Samples on the chart">
+                {list
+                  .filter((s) => points.some((p) => p.id === s.id))
+                  .map((s) => (
+                    <li key={s.id}>
+                      <span className="font-medium">{s.label ?? `Sample ${s.id}`}</span>
+                      <span className="num block text-ink-soft">
+                        {s.textureClass}: sand {fmtPct(s.sandPct!)}, silt {fmtPct(s.siltPct!)}, clay {fmtPct(s.clayPct!)}
+                      </span>
+                    </li>
+                  ))}
+              </ul>
+            ) : (
+              <p className="text-ink-soft">No lab samples with sand, silt and clay yet.</p>
+            )}
+            {feelCount ? (
+              <p className="text-ink-soft">
+                <span className="num">{feelCount}</span> feel {feelCount === 1 ? 'test has' : 'tests have'} a class but no percentages, so{' '}
+                {feelCount === 1 ? 'it is' : 'they are'} not drawn.
+              </p>
+            ) : null}
+          </div>
+        </div>
+      </section>
 
       <SoilPhotos fieldId={fieldId} canEdit={canEdit} samples={list} />
 

@@ -63,14 +63,16 @@ const area = (poly: Separates[]) =>
     return s + p.sand * q.clay - q.sand * p.clay;
   }, 0)) / 2;
 
-export type TextureRegion = { name: TextureClass; pieces: Separates[][]; labelAt: Separates };
+export type RegionLabel = { at: Separates; rotateDeg?: number; small?: boolean };
+export type TextureRegion = { name: TextureClass; pieces: Separates[][]; label: RegionLabel };
 
 /** Where a class name sits when the centre of its biggest piece is too tight for the words. */
-const LABEL_AT: Partial<Record<TextureClass, Separates>> = {
-  sand: { sand: 92, silt: 5, clay: 3 },
-  'loamy sand': { sand: 82, silt: 12, clay: 6 },
-  silt: { sand: 8, silt: 87, clay: 5 },
-  'sandy loam': { sand: 64, silt: 25, clay: 11 },
+const LABEL_AT: Partial<Record<TextureClass, RegionLabel>> = {
+  sand: { at: { sand: 91, silt: 6, clay: 3 }, small: true },
+  // Along the thin loamy-sand band, which runs at 30° to the sand axis.
+  'loamy sand': { at: { sand: 79.5, silt: 17.5, clay: 3 }, rotateDeg: 30, small: true },
+  silt: { at: { sand: 7, silt: 88, clay: 5 } },
+  'sandy loam': { at: { sand: 64, silt: 25, clay: 11 } },
 };
 
 function centroid(poly: Separates[]): Separates {
@@ -82,5 +84,5 @@ function centroid(poly: Separates[]): Separates {
 export const TEXTURE_REGIONS: TextureRegion[] = TEXTURE_CLASSES.map((name) => {
   const pieces = TEXTURE_PIECES[name].map((planes) => planes.reduce(clip, CORNERS)).filter((p) => p.length >= 3 && area(p) > 1e-9);
   const biggest = [...pieces].sort((a, b) => area(b) - area(a))[0];
-  return { name, pieces, labelAt: LABEL_AT[name] ?? centroid(biggest) };
+  return { name, pieces, label: LABEL_AT[name] ?? { at: centroid(biggest) } };
 });

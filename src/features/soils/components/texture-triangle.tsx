@@ -82,11 +82,13 @@ function AxisTitles() {
   const [lx, ly] = xy({ sand: 50, silt: 0, clay: 50 });
   const [rx, ry] = xy({ sand: 0, silt: 50, clay: 50 });
   const [bx, by] = xy({ sand: 50, silt: 50, clay: 0 });
+  // Outward from each edge, past the tick labels; the arrows point the way the percentage grows.
+  const out = 40;
   return (
     <g fill={INK} fontWeight={600} style={{ fontSize: 12 }}>
-      <text transform={`translate(${lx - 34} ${ly}) rotate(-60)`} textAnchor="middle">Clay, % (lines run across) ↑</text>
-      <text transform={`translate(${rx + 34} ${ry}) rotate(60)`} textAnchor="middle">Silt, % (lines run down-left) ↓</text>
-      <text x={bx} y={by + 34} textAnchor="middle">← Sand, % (lines run up-right)</text>
+      <text transform={`translate(${lx - out * 0.866} ${ly - out * 0.5}) rotate(-60)`} textAnchor="middle">Clay, % →</text>
+      <text transform={`translate(${rx + out * 0.866} ${ry - out * 0.5}) rotate(60)`} textAnchor="middle">Silt, % →</text>
+      <text x={bx} y={by + 36} textAnchor="middle">← Sand, %</text>
     </g>
   );
 }
@@ -115,14 +117,22 @@ function RegionOutlines() {
 
 function RegionNames({ shaded }: { shaded: TextureClass | null }) {
   return (
-    <g fill={INK_SOFT} textAnchor="middle" style={{ fontSize: 11 }}>
+    <g textAnchor="middle">
       {TEXTURE_REGIONS.map((r) => {
-        const [x, y] = xy(r.labelAt);
+        const [x, y] = xy(r.label.at);
         const lines = nameLines(r.name);
+        const size = r.label.small ? 9.5 : 11;
+        const strong = r.name === shaded;
         return (
-          <text key={r.name} x={x} y={y - ((lines.length - 1) * 12) / 2} fontWeight={r.name === shaded ? 700 : 400} fill={r.name === shaded ? INK : INK_SOFT}>
+          <text
+            key={r.name}
+            transform={`translate(${x.toFixed(1)} ${(y - ((lines.length - 1) * 12) / 2).toFixed(1)})${r.label.rotateDeg ? ` rotate(${r.label.rotateDeg})` : ''}`}
+            fontWeight={strong ? 700 : 400}
+            fill={strong ? INK : '#857a6c'}
+            style={{ fontSize: size }}
+          >
             {lines.map((l, i) => (
-              <tspan key={l} x={x} dy={i === 0 ? 0 : 12} dominantBaseline="central">{l}</tspan>
+              <tspan key={l} x={0} dy={i === 0 ? 0 : 12} dominantBaseline="central">{l}</tspan>
             ))}
           </text>
         );
@@ -137,8 +147,10 @@ function Points({ points }: { points: TrianglePoint[] }) {
   return (
     <g>
       {placed.map(({ p, at: [x, y] }, i) => {
-        const crowded = placed.some((o, j) => j < i && Math.abs(o.at[1] - y) < 14 && o.at[0] >= x - 4 && o.at[0] - x < 120);
-        const right = !crowded && x < PAD_X + SIDE - 60;
+        // Toward the middle of the triangle, so words stay inside; away from a close earlier dot.
+        const towardRight = x < PAD_X + SIDE / 2;
+        const crowded = placed.some((o, j) => j < i && Math.abs(o.at[1] - y) < 14 && Math.abs(o.at[0] - x) < 110);
+        const right = crowded ? !towardRight : towardRight;
         return (
           <g key={p.id} data-testid="texture-triangle-point">
             <circle cx={x} cy={y} r={5.5} fill={DOT} stroke={PAPER} strokeWidth={2} />
@@ -152,7 +164,7 @@ function Points({ points }: { points: TrianglePoint[] }) {
               stroke={PAPER}
               strokeWidth={3}
               paintOrder="stroke"
-              style={{ fontSize: 11 }}
+              style={{ fontSize: 11.5 }}
             >
               {p.label}
             </text>
@@ -190,7 +202,7 @@ export function TextureTriangle({ points, mean = null, meanClass = null }: Props
         role="img"
         aria-label={`Texture triangle with the field's lab samples: ${summary}.`}
         viewBox={`0 0 ${WIDTH} ${HEIGHT.toFixed(0)}`}
-        className="num w-full max-w-xl text-ink"
+        className="num w-full max-w-2xl text-ink"
       >
         <Regions shaded={meanClass} />
         <Grid />
