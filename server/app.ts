@@ -69,7 +69,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/jobs', terrain.jobs);
   api.use('/estimate', estimateRoutes());
   api.use('/', soilsRoutes({ sequelize, storage }));
-  const seasons = seasonsRoutes(sequelize);
+  const seasons = seasonsRoutes(sequelize, jobs);
   api.use('/farms', seasons.farms);
   api.use('/fields', seasons.fields);
   api.use('/board', seasons.board);

@@ -14,6 +14,8 @@ import { ensureSeason, findSeason, getCropping, listSeasons, putCropping, resolv
 import { getClimate, getGround, putClimate, putClimateFromRecord, putGround } from '../services/climate-ground.service';
 import { RAINFALL_CSV_LIMIT_BYTES, rFromRainfallCsv } from '../services/rainfall-record';
 import multer from 'multer';
+import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import type { JobQueue } from '../services/jobs/job-queue';
 import { assessField } from '../services/assessment.service';
 import { farmBoard, rankRows } from '../services/board.service';
 
@@ -32,7 +34,7 @@ async function fieldOf(sequelize: Sequelize, req: Request, fieldId: number) {
   return f;
 }
 
-export function seasonsRoutes(sequelize: Sequelize): { farms: Router; fields: Router; board: Router } {
+export function seasonsRoutes(sequelize: Sequelize, jobs?: JobQueue): { farms: Router; fields: Router; board: Router } {
   const farms = Router();
   farms.get('/:farmId/seasons', loadFarmMembership, async (req, res) => {
     res.json(await listSeasons(sequelize, req.membership!.farmId));
@@ -44,7 +46,7 @@ export function seasonsRoutes(sequelize: Sequelize): { farms: Router; fields: Ro
   });
   farms.get('/:farmId/climate', loadFarmMembership, async (req, res) => {
     const c = await getClimate(sequelize, req.membership!.farmId);
-    if (!c) throw notFound("This farm's climate");
+    if (!c) throw new HttpError(404, 'no_climate', "This farm's climate (R and the design storm) is not set yet.");
     res.json(c);
   });
   farms.put('/:farmId/climate', loadFarmMembership, requireRole('farmer', 'advisor'), validate(ClimateUpdate), async (req, res) => {
@@ -75,12 +77,16 @@ export function seasonsRoutes(sequelize: Sequelize): { farms: Router; fields: Ro
   });
   fields.put('/:fieldId/ground', loadFieldMembership, requireRole('farmer', 'advisor'), validate(GroundUpdate), async (req, res) => {
     const f = await fieldOf(sequelize, req, res.locals.fieldId as number);
-    res.json(await putGround(sequelize, { userId: req.user!.id }, { id: f.id, farmId: f.properties.farmId }, req.body));
+    const before = await getGround(sequelize, f.id);
+    const ground = await putGround(sequelize, { userId: req.user!.id }, { id: f.id, farmId: f.properties.farmId }, req.body);
+    // The typed slope length caps the DEM's flow length for LS: re-run the terrain when it changes.
+    if (before?.slopeLengthM !== ground.slopeLengthM) await refreshTerrainIfAny({ sequelize, jobs }, f.properties.farmId, req.user!.id);
+    res.json(ground);
   });
   fields.get('/:fieldId/cropping', loadFieldMembership, async (req, res) => {
     const season = await resolveSeason(sequelize, req.membership!.farmId, seasonParam(req));
     const c = await getCropping(sequelize, res.locals.fieldId as number, season.id);
-    if (!c) throw notFound(`Cropping for season ${season.label}`);
+    if (!c) throw new HttpError(404, 'no_cropping', `This field has no cropping for season ${season.label} yet.`);
     res.json(c);
   });
   fields.put('/:fieldId/cropping', loadFieldMembership, requireRole('farmer', 'advisor'), validate(CroppingUpdate), async (req, res) => {

@@ -108,7 +108,9 @@ export function buildEstimateInput(g: GatheredInputs): { input: EstimateInput | 
   } else gaps.push('slope (upload an elevation model, or type the slope % on the Ground tab)');
 
   let slopeLengthM: number | null = g.ground?.slopeLengthM ?? null;
-  if (slopeLengthM != null) lines.push({ key: 'length', label: 'Slope length', value: `${fmt(slopeLengthM, 0)} m`, origin: 'typed' });
+  if (slopeLengthM != null) {
+    lines.push({ key: 'length', label: 'Slope length', value: `${fmt(slopeLengthM, 0)} m`, origin: 'typed', ...(g.terrain ? { note: "also the longest flow path the elevation model's LS may use on this field" } : {}) });
+  }
   else if (g.terrain) {
     slopeLengthM = ASSUMED_SLOPE_LENGTH_M;
     lines.push({ key: 'length', label: 'Slope length', value: `${ASSUMED_SLOPE_LENGTH_M} m`, origin: 'default', note: 'assumed for the practice limit only; LS comes from the elevation model (common practice, no single source)' });

@@ -6,6 +6,8 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { estimate, riskClassOf, ENGINE_VERSION } from '../../shared/erosion';
 import type { FieldAssessment } from '../../shared/schemas/assessment';
 import type { FieldFeature } from '../../shared/schemas/field';
+import type { EstimateSuccess } from '../../shared/schemas/estimate';
+import type { FieldSoilSummary } from './soils/field-soil-summary';
 import { buildEstimateInput, gatherInputs } from './assessment-inputs';
 
 /** DESIGN.md "The job": gray, mottled subsoil means a high water table; amendments will not fix it. */
@@ -15,6 +17,13 @@ export const NOT_WORTH_AMENDING_ADVICE =
   '(check for buried utilities before any digging, and follow local drainage rules).';
 
 const hashOf = (x: unknown) => createHash('sha256').update(JSON.stringify(x)).digest('hex');
+
+/** K and T reach the engine as plain values; name where they really came from. */
+function withSoilSources(e: EstimateSuccess, soil: FieldSoilSummary): EstimateSuccess {
+  const k = soil.kSource ? { ...e.factors.k, source: soil.kSource, method: "from the field's soil checks or soil map" } : e.factors.k;
+  const t = soil.tSource ? { ...e.factors.t, source: soil.tSource, method: soil.tSource.includes('[practice]') ? 'default' : "from the field's soil map", ...(soil.tSource.includes('[practice]') ? { flag: 'practice' as const } : {}) } : e.factors.t;
+  return { ...e, factors: { ...e.factors, k, t } };
+}
 
 export async function assessField(sequelize: Sequelize, field: FieldFeature, season: { id: number; label: string }): Promise<FieldAssessment> {
   const gathered = await gatherInputs(sequelize, field, season);
@@ -27,7 +36,7 @@ export async function assessField(sequelize: Sequelize, field: FieldFeature, sea
 
   const { input, gaps, lines } = buildEstimateInput(gathered);
   const result = input ? estimate(input) : null;
-  const ok = result && result.ok ? result : null;
+  const ok = result && result.ok ? withSoilSources(result, gathered.soil) : null;
   const soil = gathered.soil;
   const assessment: FieldAssessment = {
     fieldId: field.id,

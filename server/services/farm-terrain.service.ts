@@ -53,10 +53,19 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
       ringsByField.set(f.id, rings.rings);
       for (const cell of rasterisePolygon(rings.rings, frame)) labels[cell] = idx + 1;
     });
+    // A slope length typed on the Ground tab (terraces, diversions, field roads) caps the flow length.
+    const typed = await sequelize.query<{ field_id: number; slope_length_m: number }>(
+      `SELECT g.field_id, g.slope_length_m FROM field_grounds g JOIN fields f ON f.id = g.field_id WHERE f.farm_id = :farmId AND g.slope_length_m IS NOT NULL`,
+      { replacements: { farmId: job.farmId }, type: QueryTypes.SELECT },
+    );
+    const typedById = new Map(typed.map((t) => [t.field_id, t.slope_length_m]));
+    const capByLabel = new Float64Array(fields.length + 1).fill(NaN);
+    fields.forEach((f, idx) => (capByLabel[idx + 1] = typedById.get(f.id) ?? NaN));
     let last = 0;
     const pending: Promise<void>[] = [];
     const grids = runTerrain(dem, {
       flowBreakLabels: labels,
+      maxSlopeLengthMByLabel: capByLabel,
       onProgress: (f, stage) => {
         if (f - last >= 0.05 || f === 1) {
           last = f;

@@ -137,7 +137,7 @@ function run(inp: EstimateInputParsed): EstimateResult {
     lsSource = 'AH-703 ch. 4 (McCool et al. 1987, 1989)';
   }
   if (inp.slopePct > 60) warnings.push(`slope ${inp.slopePct} % is beyond the steepness RUSLE was fitted to (about 60 %)`);
-  const lsMethod = `${inp.lsMethod === 'usle' ? 'USLE' : `RUSLE, ${inp.rillRatio} rill/interrill ratio`}, ${inp.slopePct} %, ${round(lengthForLsM, 1)} m, m = ${round(ls.m, 3)}`;
+  const lsMethod = `${inp.lsMethod === 'usle' ? 'USLE' : `RUSLE, ${inp.rillRatio} rill/interrill ratio`}, ${round(inp.slopePct, 2)} %, ${round(lengthForLsM, 1)} m, m = ${round(ls.m, 3)}`;
   const l = prov(ls.l, '', lsSource, lsMethod);
   const s = prov(ls.s, '', lsSource, lsMethod);
   let lsP = prov(ls.ls, '', lsSource, lsMethod);

@@ -23,6 +23,12 @@ export type LsGridArgs = {
    * has gathered into channels, which RUSLE does not model. Default 305 m.
    */
   maxSlopeLengthM?: number;
+  /**
+   * A longest slope length per label (index = label, e.g. a field's typed slope length where
+   * terraces, diversions or field roads interrupt flow), used with `labels`; NaN = no own cap.
+   */
+  maxSlopeLengthMByLabel?: Float64Array;
+  labels?: Int32Array;
 };
 
 export const DEFAULT_MAX_SLOPE_LENGTH_M = 305;
@@ -46,12 +52,20 @@ export function lsGrid(args: LsGridArgs): Float32Array {
     for (let k = 0; k < 9; k++) lnScale[k] = Math.log(d / (D8_DIR_FACTOR[k] * UNIT_PLOT_LENGTH_M));
     const invArea = 1 / cellAreaM2;
     // A_in = λ·D for a flow strip one cell wide, so u = A_in/D² = λ/D: cap u at λmax/D.
-    const uMax = (args.maxSlopeLengthM ?? DEFAULT_MAX_SLOPE_LENGTH_M) / d;
+    const maxLen = args.maxSlopeLengthM ?? DEFAULT_MAX_SLOPE_LENGTH_M;
+    const uMax = maxLen / d;
+    const byLabel = args.maxSlopeLengthMByLabel && args.labels ? args.maxSlopeLengthMByLabel : null;
+    const labels = args.labels;
     for (let i = r * w, end = i + w; i < end; i++) {
       const s = slopePct[i];
       const a = acc[i] - cellAreaM2;
       if (!(s >= 0) || !(a >= -1e-3 * cellAreaM2)) { out[i] = NaN; continue; }
-      const u = a > 0 ? Math.min(a * invArea, uMax) : 0;
+      let cap = uMax;
+      if (byLabel) {
+        const own = byLabel[labels![i]];
+        if (own === own) cap = Math.min(own, maxLen) / d;
+      }
+      const u = a > 0 ? Math.min(a * invArea, cap) : 0;
       // θ = atan(s/100), so sin θ = s / √(s² + 100²)
       const sin = s / Math.sqrt(s * s + 10000);
       // AH-703 eq. 4-4: S = 10.8 sin θ + 0.03 (s < 9 %), 16.8 sin θ − 0.50 (s ≥ 9 %)

@@ -29,6 +29,8 @@ export type TerrainOptions = {
    * (common practice, no single source). `contributingAreaM2` stays unbroken, for where water gathers.
    */
   flowBreakLabels?: Int32Array;
+  /** With flowBreakLabels: a longest slope length per label for LS (NaN = only the 305 m cap). */
+  maxSlopeLengthMByLabel?: Float64Array;
 };
 
 export type TerrainGrids = {
@@ -75,7 +77,15 @@ export function runTerrain(dem: DemGrid, options: TerrainOptions = {}): TerrainG
   const contributingAreaM2 = flowAccumulationM2(flowDir, dem, filled, filled);
   step('flow-accumulation');
   const lsAreaM2 = options.flowBreakLabels ? flowAccumulationM2(flowDir, dem, contributingAreaM2, undefined, options.flowBreakLabels) : contributingAreaM2;
-  const ls = lsGrid({ grid: dem, slopePct, contributingAreaM2: lsAreaM2, flowDir, rillRatio: options.rillRatio });
+  const ls = lsGrid({
+    grid: dem,
+    slopePct,
+    contributingAreaM2: lsAreaM2,
+    flowDir,
+    rillRatio: options.rillRatio,
+    labels: options.flowBreakLabels,
+    maxSlopeLengthMByLabel: options.maxSlopeLengthMByLabel,
+  });
   step('ls');
   const soilLoss = options.soilLossFactors ? soilLossGrid(ls, options.soilLossFactors) : null;
   step('soil-loss');

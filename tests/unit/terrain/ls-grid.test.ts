@@ -47,6 +47,18 @@ describe('LS grid', () => {
     expect(ls[1]).toBeLessThan(uncapped);
   });
 
+  it('caps L at a label’s own slope length (a field’s typed length) below the 305 m cap', () => {
+    const grid = projectedDem({ width: 2, height: 1, elevationM: new Float32Array(2), cellSizeM: 5 });
+    const acc = Float32Array.of(25 + 3050 * 5, 25 + 3050 * 5);
+    const labels = Int32Array.of(1, 2);
+    const ls = lsGrid({ grid, slopePct: Float32Array.of(10, 10), contributingAreaM2: acc, flowDir: Uint8Array.of(3, 3), labels, maxSlopeLengthMByLabel: Float64Array.of(NaN, 60, NaN) });
+    const m = rusleLengthExponent(10);
+    // Label 1 stops at 60 m: u = 60/5; label 2 has no own cap: 305 m.
+    const at = (lenM: number) => desmetGoversL({ upslopeAreaM2: lenM * 5, cellSizeM: 5, flowDirFactor: 1, m }) * rusleSlopeFactor(10);
+    expect(ls[0]).toBeCloseTo(at(60), 5);
+    expect(ls[1]).toBeCloseTo(at(305), 5);
+  });
+
   it('on a uniform plane gives each cell the 1-D segment L (Desmet–Govers plane identity)', () => {
     // A plane falling due south at 8 %: D8 sends each column straight down, so a cell k rows from
     // the top has A_in = k·D² and its L must equal AH-703 eq. 4-6 for the segment [kD, (k+1)D].

@@ -4,7 +4,7 @@ import { Notice } from '../../../components/ui/notice';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FieldFeature } from '../../../../shared/schemas/field';
 import { GroundPanel } from '../../seasons/components/ground-form';
-import { isNoTerrain, useFieldTerrain } from '../../terrain/api/get-field-terrain';
+import { isNoTerrain, isTerrainPending, useFieldTerrain } from '../../terrain/api/get-field-terrain';
 import { FieldTerrainFigures } from '../../terrain/components/field-terrain-figures';
 
 export function GroundTab({ field, canEdit, units }: { field: FieldFeature; canEdit: boolean; units: Units }) {
@@ -22,7 +22,9 @@ export function GroundTab({ field, canEdit, units }: { field: FieldFeature; canE
         </div>
       ) : terrain.isPending ? (
         <p className="text-sm text-ink-soft">Looking for the elevation model's figures…</p>
-      ) : noTerrain ? null : (
+      ) : noTerrain ? null : isTerrainPending(terrain.error) ? (
+        <p className="text-sm text-ink-soft">The slope figures are being worked out from the elevation model…</p>
+      ) : (
         <Notice tone="error">{terrain.error?.message}</Notice>
       )}
       {!terrain.isPending ? <GroundPanel fieldId={field.id} hasTerrain={hasTerrain} canEdit={canEdit} units={units} /> : null}

@@ -7,8 +7,8 @@ export async function getClimate(farmId: number): Promise<Climate | null> {
   try {
     return await api.get<Climate>(`/api/farms/${farmId}/climate`);
   } catch (error) {
-    // The route answers 404 for "not set yet" as for "not a member"; only the first is a value.
-    if (isApiError(error, 404) && /^This farm's climate/.test(error.message)) return null;
+    // 404 no_climate: not set yet (a value); any other 404 means no access.
+    if (isApiError(error, 404) && error.code === 'no_climate') return null;
     throw error;
   }
 }

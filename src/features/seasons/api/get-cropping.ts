@@ -8,7 +8,7 @@ export async function getCropping(fieldId: number, season: string): Promise<Crop
   try {
     return await api.get<Cropping>(`/api/fields/${fieldId}/cropping?season=${encodeURIComponent(season)}`);
   } catch (error) {
-    if (isApiError(error, 404) && /^Cropping/.test(error.message)) return null;
+    if (isApiError(error, 404) && error.code === 'no_cropping') return null;
     throw error;
   }
 }

@@ -43,6 +43,8 @@ export const getFieldTerrainQueryOptions = (fieldId: number, fieldVersion: numbe
     // Figures for an older outline are being recomputed on the server: ask again shortly.
     refetchInterval: (query) => {
       if (query.state.data && !query.state.data.upToDate) return STALE_TERRAIN_POLL_MS;
+      // terrain_pending: a terrain run is queued or running; ask until it lands.
+      if (isTerrainPending(query.state.error)) return STALE_TERRAIN_POLL_MS;
       if (isNoTerrain(query.state.error) && query.state.errorUpdateCount <= NO_TERRAIN_RETRIES)
         return STALE_TERRAIN_POLL_MS;
       return false;
@@ -53,3 +55,4 @@ export const useFieldTerrain = (field: { id: number; version: number } | null) =
   useQuery({ ...getFieldTerrainQueryOptions(field?.id ?? 0, field?.version ?? 0), enabled: field !== null });
 
 export const isNoTerrain = (error: unknown) => isApiError(error, 404) && error.code === 'no_terrain';
+export const isTerrainPending = (error: unknown) => isApiError(error, 404) && error.code === 'terrain_pending';

@@ -4,7 +4,7 @@
 import { Notice } from '../../../components/ui/notice';
 import { formatArea } from '../../../lib/units';
 import type { Units } from '../../../../shared/schemas/auth';
-import { isNoTerrain, useFieldTerrain } from '../api/get-field-terrain';
+import { isNoTerrain, isTerrainPending, useFieldTerrain } from '../api/get-field-terrain';
 import { useLayers } from '../api/get-layers';
 import { FLOW_COLOUR, FLOW_LABEL } from './flow-points-layer';
 import { LegendSwatch } from './legend-swatch';
@@ -29,7 +29,11 @@ export function FieldTerrainFigures({ fieldId, fieldVersion, farmId, units }: Pr
       {terrain.isPending ? (
         <p className="text-sm text-ink-soft">Loading the slope figures…</p>
       ) : terrain.isError ? (
-        isNoTerrain(terrain.error) ? (
+        isTerrainPending(terrain.error) ? (
+          <p className="text-sm text-ink-soft" data-testid="field-terrain-pending">
+            The slope figures are being worked out from the elevation model…
+          </p>
+        ) : isNoTerrain(terrain.error) ? (
           <p className="text-sm text-ink-soft" data-testid="field-terrain-none">
             No elevation model covers this field yet — type the slope on the Ground tab.
           </p>
