@@ -183,7 +183,7 @@ export function SoilMapPanel({ farmId, role }: SoilMapPanelProps) {
               </table>
             </div>
           </details>
-          <SoilMapMappingForm key={`${map.id}-${JSON.stringify(info.data.mapping)}`} farmId={farmId} info={info.data} />
+          <SoilMapMappingForm key={map.id} farmId={farmId} info={info.data} />
           <div className="flex flex-wrap items-center gap-2 border-t border-paper-edge pt-2">
             {confirmDelete ? (
               <>

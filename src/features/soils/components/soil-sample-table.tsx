@@ -50,7 +50,7 @@ function DeleteButton({ sample, fieldId }: { sample: SoilSample; fieldId: number
   );
 }
 
-const COLUMNS = ['Sample', 'Sampled', 'Depth', 'Sand / silt / clay', 'Texture class', 'Organic matter', 'pH', 'Gray from', 'Drainage'];
+const COLUMNS = ['Sample', 'Sand / silt / clay', 'Texture class', 'Organic matter', 'pH', 'Drainage'];
 
 type Props = { fieldId: number; samples: SoilSample[]; canEdit: boolean };
 
@@ -82,10 +82,12 @@ export function SoilSampleTable({ fieldId, samples, canEdit }: Props) {
               <tr className="border-b border-paper-edge align-top last:border-b-0" data-testid="soil-sample-row" data-sample-id={s.id}>
                 <td className="px-2 py-1.5">
                   <span className="font-medium">{s.label ?? `Sample ${s.id}`}</span>
-                  <span className="block text-xs text-ink-soft">{s.kind === 'lab' ? 'lab results' : 'feel test'}</span>
+                  <span className="num block text-xs text-ink-soft">
+                    {[s.kind === 'lab' ? 'lab results' : 'feel test', s.sampledOn ? formatDay(s.sampledOn) : null, depthRange(s.depthTopCm, s.depthBottomCm)]
+                      .filter(Boolean)
+                      .join(' · ')}
+                  </span>
                 </td>
-                <td className="num whitespace-nowrap px-2 py-1.5">{s.sampledOn ? formatDay(s.sampledOn) : dash}</td>
-                <td className="num whitespace-nowrap px-2 py-1.5">{depthRange(s.depthTopCm, s.depthBottomCm) ?? dash}</td>
                 <td className="px-2 py-1.5">
                   <Separates s={s} />
                   {s.separatesSumPct !== null && Math.abs(s.separatesSumPct - 100) > 0.05 ? (
@@ -98,13 +100,19 @@ export function SoilSampleTable({ fieldId, samples, canEdit }: Props) {
                   {s.ph !== null ? fmtPh(s.ph) : dash}
                   {s.bufferPh !== null ? <span className="block text-xs text-ink-soft">buffer {fmtPh(s.bufferPh)}</span> : null}
                 </td>
-                <td className="num whitespace-nowrap px-2 py-1.5">
-                  {s.depthToGrayCm !== null ? fmtCm(s.depthToGrayCm) : s.describedToCm !== null ? <span className="text-ink-soft">none to {fmtCm(s.describedToCm)}</span> : dash}
+                <td className="px-2 py-1.5">
+                  {s.drainageClass ?? dash}
+                  <span className="num block text-xs text-ink-soft">
+                    {s.depthToGrayCm !== null
+                      ? `gray from ${fmtCm(s.depthToGrayCm)}`
+                      : s.describedToCm !== null
+                        ? `no gray to ${fmtCm(s.describedToCm)}`
+                        : null}
+                  </span>
                 </td>
-                <td className="px-2 py-1.5">{s.drainageClass ?? dash}</td>
                 {canEdit ? (
                   <td className="px-2 py-1.5">
-                    <span className="flex flex-wrap justify-end gap-1">
+                    <span className="flex flex-wrap justify-end gap-1 whitespace-nowrap">
                       <Button variant="secondary" size="sm" onClick={() => setEditing(editing === s.id ? null : s.id)} data-testid="sample-edit" aria-expanded={editing === s.id}>
                         Change
                       </Button>
