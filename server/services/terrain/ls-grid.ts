@@ -61,9 +61,13 @@ export function lsGrid(args: LsGridArgs): Float32Array {
       const a = acc[i] - cellAreaM2;
       if (!(s >= 0) || !(a >= -1e-3 * cellAreaM2)) { out[i] = NaN; continue; }
       let cap = uMax;
+      let ownLenM = NaN;
       if (byLabel) {
         const own = byLabel[labels![i]];
-        if (own === own) cap = Math.min(own, maxLen) / d;
+        if (own === own && own < maxLen) {
+          cap = own / d;
+          ownLenM = own;
+        }
       }
       const u = a > 0 ? Math.min(a * invArea, cap) : 0;
       // θ = atan(s/100), so sin θ = s / √(s² + 100²)
@@ -75,6 +79,12 @@ export function lsGrid(args: LsGridArgs): Float32Array {
       const beta = (betaScale * sin) / 0.0896 / (3.0 * Math.exp(0.8 * Math.log(sin)) + 0.56);
       const m = beta / (1 + beta);
       // Desmet & Govers 1996 eq. 6: L = [(A + D²)^(m+1) − A^(m+1)] / [D^(m+2) · x^m · 22.13^m]
+      if (ownLenM === ownLenM && a * invArea > cap) {
+        // Past a label's own slope length, flow starts again (terraces, diversions, roads), so
+        // the cells there stand for a whole slope of that length: L = (λ/22.13)^m (AH-703 eq. 4-1).
+        out[i] = Math.exp(m * Math.log(ownLenM / UNIT_PLOT_LENGTH_M)) * sFactor;
+        continue;
+      }
       const c = m * lnScale[flowDir[i]];
       const m1 = m + 1;
       const l = u > 0 ? Math.exp(c + m1 * Math.log(u + 1)) - Math.exp(c + m1 * Math.log(u)) : Math.exp(c);

@@ -47,15 +47,16 @@ describe('LS grid', () => {
     expect(ls[1]).toBeLessThan(uncapped);
   });
 
-  it('caps L at a label’s own slope length (a field’s typed length) below the 305 m cap', () => {
+  it('past a label’s own slope length (a field’s typed length) gives the whole-slope L of that length', () => {
     const grid = projectedDem({ width: 2, height: 1, elevationM: new Float32Array(2), cellSizeM: 5 });
     const acc = Float32Array.of(25 + 3050 * 5, 25 + 3050 * 5);
     const labels = Int32Array.of(1, 2);
     const ls = lsGrid({ grid, slopePct: Float32Array.of(10, 10), contributingAreaM2: acc, flowDir: Uint8Array.of(3, 3), labels, maxSlopeLengthMByLabel: Float64Array.of(NaN, 60, NaN) });
     const m = rusleLengthExponent(10);
-    // Label 1 stops at 60 m: u = 60/5; label 2 has no own cap: 305 m.
+    // Label 1: flow restarts every 60 m, so the cell stands for a whole 60 m slope,
+    // L = (60/22.13)^m (AH-703 eq. 4-1); label 2 has no own cap: the cell L at 305 m.
     const at = (lenM: number) => desmetGoversL({ upslopeAreaM2: lenM * 5, cellSizeM: 5, flowDirFactor: 1, m }) * rusleSlopeFactor(10);
-    expect(ls[0]).toBeCloseTo(at(60), 5);
+    expect(ls[0]).toBeCloseTo((60 / 22.13) ** m * rusleSlopeFactor(10), 5);
     expect(ls[1]).toBeCloseTo(at(305), 5);
   });
 
