@@ -10,7 +10,7 @@ import { fieldSoilSummary, type FieldSoilSummary } from './soils/field-soil-summ
 import { getClimate, getGround } from './climate-ground.service';
 import { getCropping } from './seasons.service';
 
-export type TerrainFigures = { meanSlopePct: number; meanLS: number | null; cellCount: number; cellSizeM?: number; upToDate: boolean };
+export type TerrainFigures = { meanSlopePct: number; meanLS: number | null; cellCount: number; cellSizeM?: number; upToDate: boolean; concentratedFlowCells: number };
 
 export type GatheredInputs = {
   field: { id: number; farmId: number; name: string; areaHa: number; version: number };
@@ -23,7 +23,7 @@ export type GatheredInputs = {
 };
 
 export async function gatherInputs(sequelize: Sequelize, field: FieldFeature, season: { id: number; label: string }): Promise<GatheredInputs> {
-  const [terrainRow] = await sequelize.query<{ stats: TerrainFigures; field_version: number }>(
+  const [terrainRow] = await sequelize.query<{ stats: TerrainFigures & { concentratedFlow?: { cellCount: number } }; field_version: number }>(
     `SELECT stats, field_version FROM field_terrain WHERE field_id = :id`,
     { replacements: { id: field.id }, type: QueryTypes.SELECT },
   );
@@ -34,7 +34,7 @@ export async function gatherInputs(sequelize: Sequelize, field: FieldFeature, se
     getCropping(sequelize, field.id, season.id),
   ]);
   const terrain = terrainRow
-    ? { meanSlopePct: terrainRow.stats.meanSlopePct, meanLS: terrainRow.stats.meanLS, cellCount: terrainRow.stats.cellCount, cellSizeM: terrainRow.stats.cellSizeM, upToDate: terrainRow.field_version === field.properties.version }
+    ? { meanSlopePct: terrainRow.stats.meanSlopePct, meanLS: terrainRow.stats.meanLS, cellCount: terrainRow.stats.cellCount, cellSizeM: terrainRow.stats.cellSizeM, upToDate: terrainRow.field_version === field.properties.version, concentratedFlowCells: terrainRow.stats.concentratedFlow?.cellCount ?? 0 }
     : null;
   return {
     field: { id: field.id, farmId: field.properties.farmId, name: field.properties.name, areaHa: field.properties.areaHa, version: field.properties.version },

@@ -60,6 +60,7 @@ export async function assessField(sequelize: Sequelize, field: FieldFeature, sea
     drainageClass: soil.drainageClass,
     groundAdvice: soil.notWorthAmending ? NOT_WORTH_AMENDING_ADVICE : null,
     lsSource: ok ? (input?.lsFromGrid ? 'elevation model' : 'typed slope') : null,
+    concentratedFlowCells: gathered.terrain ? gathered.terrain.concentratedFlowCells : null,
     engineVersion: ENGINE_VERSION,
     computedAt: new Date().toISOString(),
   };

@@ -11,13 +11,15 @@ function reasonsFor(a: FieldAssessment): string[] {
   const out: string[] = [];
   const e = a.estimate;
   if (e) {
-    if (e.factors.ls.value >= 2) out.push(`steep or long slope (LS ${e.factors.ls.value.toFixed(1)})`);
-    if (e.factors.c.value >= 0.3) out.push(`little cover (C ${e.factors.c.value.toFixed(2)})`);
+    // Rules of thumb for the words beside a rank (common practice, no single source).
+    if (e.factors.ls.value >= 1.5) out.push(`steep or long slope (LS ${e.factors.ls.value.toFixed(1)})`);
+    if (e.factors.c.value >= 0.2) out.push(`little cover (C ${e.factors.c.value.toFixed(2)})`);
     if (e.factors.k.us && e.factors.k.us.value >= 0.4) out.push(`erodible soil (K ${e.factors.k.us.value.toFixed(2)} US)`);
     // Half or more of the design storm running off (common practice, no single source).
     const storm = e.runoff?.rainfallMm;
     if (a.runoffMm != null && storm && a.runoffMm >= 0.5 * storm) out.push(`much runoff (${a.runoffMm.toFixed(0)} of ${storm.toFixed(0)} mm in the design storm)`);
   }
+  if (a.concentratedFlowCells) out.push(`water gathers in ${a.concentratedFlowCells} cells: a grassed waterway candidate`);
   if (a.problemClay) out.push(...a.problemClayReasons);
   return out;
 }

@@ -30,6 +30,8 @@ export type FieldAssessment = {
   /** When the ground is not worth amending: what to do instead, with the caution. */
   groundAdvice: string | null;
   lsSource: 'elevation model' | 'typed slope' | null;
+  /** Cells of the field where flow from over 1 ha gathers (grassed waterway candidates); null without a DEM. */
+  concentratedFlowCells: number | null;
   engineVersion: string;
   computedAt: string;
 };
