@@ -1,18 +1,17 @@
 import { Router } from 'express';
-import multer from 'multer';
 import type { Sequelize } from 'sequelize';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
+import { singleUpload } from '../middleware/upload';
 import { badRequest } from '../lib/http-error';
 import { IMPORT_LIMIT_BYTES, importFields } from '../services/import-fields.service';
 import { refreshTerrainIfAny } from '../services/terrain-refresh';
 import type { JobQueue } from '../services/jobs/job-queue';
 
-// Memory storage: uploads are parsed in memory and never written to disk under their given name.
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: IMPORT_LIMIT_BYTES, files: 1 } });
+const upload = singleUpload(IMPORT_LIMIT_BYTES, 'boundary file');
 
 export function fieldImportRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
   const r = Router();
-  r.post('/:farmId/fields/import', loadFarmMembership, requireRole('farmer'), upload.single('file'), async (req, res) => {
+  r.post('/:farmId/fields/import', loadFarmMembership, requireRole('farmer'), upload, async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the boundary file as the multipart part named "file".');
     const result = await importFields(sequelize, { userId: req.user!.id }, req.membership!.farmId, {
       buffer: req.file.buffer,

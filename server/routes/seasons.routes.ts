@@ -3,17 +3,17 @@ import { Router, type Request } from 'express';
 import type { Sequelize } from 'sequelize';
 import { ClimateUpdate, CroppingUpdate, GroundUpdate, SeasonCreate, SeasonLabel } from '../../shared/schemas/season';
 import { validate } from '../middleware/validate';
+import { singleUpload } from '../middleware/upload';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
 import { badRequest, HttpError, notFound } from '../lib/http-error';
 
-const recordUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: RAINFALL_CSV_LIMIT_BYTES, files: 1 } });
+const recordUpload = singleUpload(RAINFALL_CSV_LIMIT_BYTES, 'rainfall record');
 import { Farm, Membership } from '../models';
 import { queryFields } from '../services/field-presenter';
 import { ensureSeason, findSeason, getCropping, listSeasons, putCropping, resolveSeason } from '../services/seasons.service';
 import { getClimate, getGround, putClimate, putClimateFromRecord, putGround } from '../services/climate-ground.service';
 import { RAINFALL_CSV_LIMIT_BYTES, rFromRainfallCsv } from '../services/rainfall-record';
-import multer from 'multer';
 import { refreshTerrainIfAny } from '../services/terrain-refresh';
 import type { JobQueue } from '../services/jobs/job-queue';
 import { assessField } from '../services/assessment.service';
@@ -52,7 +52,7 @@ export function seasonsRoutes(sequelize: Sequelize, jobs?: JobQueue): { farms: R
   farms.put('/:farmId/climate', loadFarmMembership, requireRole('farmer', 'advisor'), validate(ClimateUpdate), async (req, res) => {
     res.json(await putClimate(sequelize, { userId: req.user!.id }, req.membership!.farmId, req.body));
   });
-  farms.post('/:farmId/climate/rainfall-record', loadFarmMembership, requireRole('farmer', 'advisor'), recordUpload.single('file'), async (req, res) => {
+  farms.post('/:farmId/climate/rainfall-record', loadFarmMembership, requireRole('farmer', 'advisor'), recordUpload, async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the rainfall record as the multipart part named "file".');
     const num = (v: unknown, name: string, min: number, max: number) => {
       if (v === undefined || v === '') return undefined;

@@ -2,8 +2,8 @@
 // field's soil summary. Farmer and advisor change soils; a landowner reads the samples, photos
 // and summary of the fields they own; non-members get 404.
 import { Router } from 'express';
-import multer from 'multer';
 import type { Sequelize } from 'sequelize';
+import { singleUpload } from '../middleware/upload';
 import { SoilMapMapping, SoilSampleCreate, SoilSampleUpdate } from '../../shared/schemas/soils';
 import { badRequest } from '../lib/http-error';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
@@ -21,9 +21,9 @@ import { querySamples } from '../services/soils/soil-sample-presenter';
 import { SOIL_MAP_LIMIT_BYTES } from '../services/soils/read-soil-map-file';
 
 // Memory storage: uploads are checked in memory and stored only under server-made keys.
-const csvUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: SOIL_CSV_LIMIT_BYTES, files: 1 } });
-const photoUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_LIMIT_BYTES, files: 1 } });
-const mapUpload = multer({ storage: multer.memoryStorage(), limits: { fileSize: SOIL_MAP_LIMIT_BYTES, files: 1 } });
+const csvUpload = singleUpload(SOIL_CSV_LIMIT_BYTES, 'soil sample CSV');
+const photoUpload = singleUpload(PHOTO_LIMIT_BYTES, 'photo');
+const mapUpload = singleUpload(SOIL_MAP_LIMIT_BYTES, 'soil map');
 
 /** Who may change soils on a farm (issue 5 item 6: the advisor edits soils too). */
 const editsSoils = requireRole('farmer', 'advisor');
@@ -45,7 +45,7 @@ export function soilsRoutes({ sequelize, storage }: Deps): Router {
   r.post('/fields/:fieldId/soil-samples', loadFieldMembership, editsSoils, validate(SoilSampleCreate), async (req, res) => {
     res.status(201).json(await createSample(sequelize, actor(req), fieldId(res), req.body));
   });
-  r.post('/fields/:fieldId/soil-samples/import', loadFieldMembership, editsSoils, csvUpload.single('file'), async (req, res) => {
+  r.post('/fields/:fieldId/soil-samples/import', loadFieldMembership, editsSoils, csvUpload, async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the CSV as the multipart part named "file".');
     const accept = String(req.body?.acceptGoodRows ?? req.query.acceptGoodRows ?? '') === 'true';
     const result = await importSoilCsv(sequelize, actor(req), fieldId(res), { buffer: req.file.buffer, originalName: req.file.originalname }, { acceptGoodRows: accept });
@@ -63,7 +63,7 @@ export function soilsRoutes({ sequelize, storage }: Deps): Router {
   r.get('/fields/:fieldId/soil-photos', loadFieldMembership, async (_req, res) => {
     res.json(await listPhotos(sequelize, fieldId(res)));
   });
-  r.post('/fields/:fieldId/soil-photos', loadFieldMembership, editsSoils, photoUpload.single('file'), async (req, res) => {
+  r.post('/fields/:fieldId/soil-photos', loadFieldMembership, editsSoils, photoUpload, async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the photo as the multipart part named "file".');
     const body = (req.body ?? {}) as { caption?: unknown; sampleId?: unknown };
     const photo = await uploadPhoto({ sequelize, storage }, actor(req), fieldId(res), {
@@ -88,7 +88,7 @@ export function soilsRoutes({ sequelize, storage }: Deps): Router {
   r.get('/farms/:farmId/soil-map', loadFarmMembership, editsSoils, async (req, res) => {
     res.json(await soilMapInfo(sequelize, req.membership!.farmId));
   });
-  r.post('/farms/:farmId/soil-map', loadFarmMembership, editsSoils, mapUpload.single('file'), async (req, res) => {
+  r.post('/farms/:farmId/soil-map', loadFarmMembership, editsSoils, mapUpload, async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the soil map as the multipart part named "file".');
     res.status(201).json(await uploadSoilMap(sequelize, actor(req), req.membership!.farmId, { buffer: req.file.buffer, originalName: req.file.originalname }));
   });

@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import multer from 'multer';
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { singleUpload } from '../middleware/upload';
 import { loadFarmMembership, membershipOf, requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
 import { badRequest, HttpError, notFound } from '../lib/http-error';
@@ -14,14 +14,14 @@ import { listSeasons, resolveSeason } from '../services/seasons.service';
 import { refreshTerrainIfAny } from '../services/terrain-refresh';
 import type { LayerKind } from '../services/terrain';
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: DEM_LIMIT_BYTES, files: 1 } });
+const upload = singleUpload(DEM_LIMIT_BYTES, 'elevation model');
 
 type Deps = { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue };
 
 export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs: Router } {
   const { sequelize } = deps;
   const farms = Router();
-  farms.post('/:farmId/dems', loadFarmMembership, requireRole('farmer'), upload.single('file'), async (req, res) => {
+  farms.post('/:farmId/dems', loadFarmMembership, requireRole('farmer'), upload, async (req, res) => {
     if (!req.file) throw badRequest('no_file', 'Attach the elevation model as the multipart part named "file".');
     if (!deps.jobs) throw new HttpError(503, 'jobs_unavailable', 'Background processing is not running on this server; try again later.');
     const r = await acceptDem({ ...deps, jobs: deps.jobs }, { userId: req.user!.id }, req.membership!.farmId, { buffer: req.file.buffer, originalName: req.file.originalname });

@@ -162,6 +162,7 @@ export const SOIL_CSV_COLUMNS = [
   'bulk_density',
   'cec',
   'esp',
+  'described_to_cm',
 ] as const;
 
 /** A profile photo as listed. */

@@ -76,5 +76,6 @@ export const api = {
   get: <T>(url: string) => request<T>('GET', url),
   post: <T>(url: string, body?: Body) => request<T>('POST', url, body),
   patch: <T>(url: string, body?: Body) => request<T>('PATCH', url, body),
+  put: <T>(url: string, body?: Body) => request<T>('PUT', url, body),
   delete: <T = void>(url: string) => request<T>('DELETE', url),
 };

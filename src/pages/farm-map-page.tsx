@@ -10,6 +10,7 @@ import { useFarm } from '../features/farms/api/get-farm';
 import { RoleBadge } from '../features/farms/components/role-badge';
 import { FarmMapWorkspace } from '../features/fields/components/farm-map-workspace';
 import { ElevationPanel } from '../features/terrain/components/elevation-panel';
+import { SoilMapPanel } from '../features/soils/components/soil-map-panel';
 import { FieldTerrainFigures } from '../features/terrain/components/field-terrain-figures';
 import { TerrainMapLayers } from '../features/terrain/components/terrain-map-layers';
 import { isApiError } from '../lib/api-client';
@@ -86,7 +87,12 @@ export function FarmMapPage() {
           )}
           panelSections={
             // A landowner sees their own fields, not the farm's survey data.
-            farm.data.role === 'landowner' ? null : <ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />
+            farm.data.role === 'landowner' ? null : (
+              <>
+                <ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />
+                <SoilMapPanel farmId={farmId} role={farm.data.role} />
+              </>
+            )
           }
           banner={
             <div className="flex flex-col gap-2">

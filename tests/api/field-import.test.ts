@@ -91,6 +91,7 @@ describe('importing boundary files', () => {
     const big = Buffer.alloc(8 * 1024 * 1024 + 10, 0x20);
     const res = await agent.post(`/api/farms/${farmId}/fields/import`).attach('file', big, 'big.geojson');
     expect(res.status).toBe(413);
+    expect(res.body.message).toBe('The boundary file is larger than the 8 MB limit.');
     expect(await Field.count({ where: { farmId } })).toBe(0);
   });
 

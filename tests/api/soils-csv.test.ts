@@ -39,7 +39,7 @@ describe('uploading soil samples as CSV', () => {
     expect(res.status).toBe(422);
     expect(res.body.error).toBe('csv_rows_invalid');
     expect(res.body.message).toMatch(/nothing was stored/);
-    expect(res.body.message).toMatch(/acceptGoodRows=true/);
+    expect(res.body.message).toMatch(/store only the/);
     const rejected = res.body.details.rejected as { row: number; reason: string }[];
     expect(rejected.map((r) => r.row)).toEqual([3, 4, 6, 7]);
     expect(rejected[0].reason).toMatch(/^row 3, column sand_pct, silt_pct, clay_pct: sand \+ silt \+ clay add up to 90 %/);

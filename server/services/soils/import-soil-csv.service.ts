@@ -22,7 +22,7 @@ export async function importSoilCsv(
   if (rejected.length > 0 && (!options.acceptGoodRows || rows.length === 0)) {
     const n = rejected.length;
     const advice = rows.length > 0
-      ? ` Fix ${n === 1 ? 'it' : 'them'} and upload again, or send acceptGoodRows=true to store the ${rows.length} good row${rows.length === 1 ? '' : 's'}.`
+      ? ` Fix ${n === 1 ? 'it' : 'them'} and upload again, or choose to store only the ${rows.length} good row${rows.length === 1 ? '' : 's'}.`
       : ' Fix the file and upload it again.';
     throw invalid('csv_rows_invalid', `${n} row${n === 1 ? '' : 's'} of ${file.originalName || 'the CSV'} cannot be used, so nothing was stored. First problem: ${rejected[0].reason}.${advice}`, {
       rejected,

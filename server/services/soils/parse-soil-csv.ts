@@ -5,7 +5,8 @@ import { SOIL_CSV_COLUMNS, SoilSampleCreate } from '../../../shared/schemas/soil
 import { decodeText, looksBinary } from '../imports/decode-text';
 
 /** Columns read beside the documented ones. */
-export const SOIL_CSV_OPTIONAL_COLUMNS = ['described_to_cm'] as const;
+/** Columns read beyond SOIL_CSV_COLUMNS (none at present). */
+export const SOIL_CSV_OPTIONAL_COLUMNS = [] as const;
 /** Most data rows one file may hold. */
 export const MAX_CSV_ROWS = 5000;
 

@@ -1,13 +1,12 @@
 // PUT /api/farms/:farmId/climate (farmer, advisor) — with the version read; 409 carries the
 // record the server holds now, which the cache takes.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { isApiError } from '../../../lib/api-client';
+import { api, isApiError } from '../../../lib/api-client';
 import type { Climate, ClimateUpdate } from '../../../../shared/schemas/season';
 import { getClimateQueryOptions } from './get-climate';
-import { putJson } from './put-json';
 import { currentFromConflict, invalidateAssessments } from './query-keys';
 
-export const updateClimate = (farmId: number, input: ClimateUpdate) => putJson<Climate>(`/api/farms/${farmId}/climate`, input);
+export const updateClimate = (farmId: number, input: ClimateUpdate) => api.put<Climate>(`/api/farms/${farmId}/climate`, input);
 
 export function useUpdateClimate(farmId: number) {
   const queryClient = useQueryClient();

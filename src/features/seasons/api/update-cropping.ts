@@ -1,16 +1,15 @@
 // PUT /api/fields/:fieldId/cropping (farmer, advisor) — the season's crop, tillage, residue,
 // cover crop and support practice, with the version read; 409 carries the current record.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { isApiError } from '../../../lib/api-client';
+import { api, isApiError } from '../../../lib/api-client';
 import type { z } from 'zod';
 import type { Cropping, CroppingUpdate } from '../../../../shared/schemas/season';
 import { getCroppingQueryOptions } from './get-cropping';
-import { putJson } from './put-json';
 import { currentFromConflict, invalidateAssessments } from './query-keys';
 
 export type CroppingPayload = z.output<typeof CroppingUpdate>;
 
-export const updateCropping = (fieldId: number, input: CroppingPayload) => putJson<Cropping>(`/api/fields/${fieldId}/cropping`, input);
+export const updateCropping = (fieldId: number, input: CroppingPayload) => api.put<Cropping>(`/api/fields/${fieldId}/cropping`, input);
 
 export function useUpdateCropping(fieldId: number) {
   const queryClient = useQueryClient();

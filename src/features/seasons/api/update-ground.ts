@@ -1,16 +1,15 @@
 // PUT /api/fields/:fieldId/ground (farmer, advisor) — typed slope, with the version read; 409
 // carries the current record.
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { isApiError } from '../../../lib/api-client';
+import { api, isApiError } from '../../../lib/api-client';
 import type { z } from 'zod';
 import type { GroundUpdate } from '../../../../shared/schemas/season';
 import { getGroundQueryOptions, type GroundRecord } from './get-ground';
-import { putJson } from './put-json';
 import { currentFromConflict, invalidateAssessments } from './query-keys';
 
 export type GroundInput = z.input<typeof GroundUpdate>;
 
-export const updateGround = (fieldId: number, input: GroundInput) => putJson<GroundRecord>(`/api/fields/${fieldId}/ground`, input);
+export const updateGround = (fieldId: number, input: GroundInput) => api.put<GroundRecord>(`/api/fields/${fieldId}/ground`, input);
 
 export function useUpdateGround(fieldId: number) {
   const queryClient = useQueryClient();
