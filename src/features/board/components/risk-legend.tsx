@@ -17,14 +17,16 @@ export function RiskLegend({ counts }: { counts?: Map<string, number> }) {
           <RiskSwatchIcon colour={c.colour} />
           <span className="flex-1">{c.label}</span>
           <span className="num text-xs text-ink-soft">{rangeText(i)}</span>
-          {counts ? <span className="num w-14 text-right text-xs text-ink-soft">{counts.get(c.key) ?? 0} fields</span> : null}
+          {counts ? <span className="num w-14 text-right text-xs text-ink-soft">{fieldCount(counts.get(c.key) ?? 0)}</span> : null}
         </li>
       ))}
       <li className="flex items-center gap-2">
         <RiskSwatchIcon colour={null} />
         <span className="flex-1">{NOT_ASSESSED_LABEL}: inputs missing</span>
-        {counts ? <span className="num w-14 text-right text-xs text-ink-soft">{counts.get('not-assessed') ?? 0} fields</span> : null}
+        {counts ? <span className="num w-14 text-right text-xs text-ink-soft">{fieldCount(counts.get('not-assessed') ?? 0)}</span> : null}
       </li>
     </ul>
   );
 }
+
+const fieldCount = (n: number) => `${n} field${n === 1 ? '' : 's'}`;
