@@ -5,6 +5,7 @@ import { useQueries } from '@tanstack/react-query';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
 import { Notice } from '../components/ui/notice';
+import { CannotOpen } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
@@ -20,7 +21,6 @@ import { getSeasonsQueryOptions } from '../features/seasons/api/get-seasons';
 import { ClimatePanel } from '../features/seasons/components/climate-panel';
 import { SeasonPicker } from '../features/seasons/components/season-picker';
 import { useSeasonChoice } from '../features/seasons/components/use-season-choice';
-import { isApiError } from '../lib/api-client';
 import { paths } from '../lib/paths';
 
 const INTRO =
@@ -37,19 +37,7 @@ export function BoardPage() {
   const header = <AppHeader screen="Priority board" farmName={farm.data?.name} menu={<UserMenu />} />;
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <main className="mx-auto w-full max-w-2xl p-6">
-          <Notice tone="error" title="This board cannot be opened">
-            {farm.isError && !isApiError(farm.error, 404) ? farm.error.message : 'There is no such farm, or you are not a member of it.'}
-          </Notice>
-          <Link to={paths.farms.getHref()} className="mt-4 inline-block font-semibold text-clay-dark underline">
-            Back to your farms
-          </Link>
-        </main>
-      </div>
-    );
+    return <CannotOpen header={header} title="This board cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
   if (farm.isPending || !me.data)
     return (
       <div className="flex min-h-full flex-col">

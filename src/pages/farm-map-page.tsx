@@ -1,7 +1,8 @@
 // Farm map, the home of a farm. Loaded lazily: Leaflet and the drawing plugin are large.
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
 import { Notice } from '../components/ui/notice';
+import { CannotOpen } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
@@ -13,8 +14,6 @@ import { ElevationPanel } from '../features/terrain/components/elevation-panel';
 import { SoilMapPanel } from '../features/soils/components/soil-map-panel';
 import { FieldTerrainFigures } from '../features/terrain/components/field-terrain-figures';
 import { TerrainMapLayers } from '../features/terrain/components/terrain-map-layers';
-import { isApiError } from '../lib/api-client';
-import { paths } from '../lib/paths';
 import type { Role } from '../../shared/schemas/auth';
 
 function RoleBanner({ role }: { role: Role }) {
@@ -42,21 +41,7 @@ export function FarmMapPage() {
   );
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError) {
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <main className="mx-auto w-full max-w-2xl p-6">
-          <Notice tone="error" title="This farm cannot be opened">
-            {farm.isError && !isApiError(farm.error, 404)
-              ? farm.error.message
-              : 'There is no such farm, or you are not a member of it.'}
-          </Notice>
-          <Link to={paths.farms.getHref()} className="mt-4 inline-block font-semibold text-clay-dark underline">
-            Back to your farms
-          </Link>
-        </main>
-      </div>
-    );
+    return <CannotOpen header={header} title="This farm cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
   }
 
   const units = me.data?.units ?? 'ha';

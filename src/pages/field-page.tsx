@@ -1,15 +1,13 @@
 // Field: one field of a farm with its tabs (Outline, Ground, Soil, Cropping, Risk). Loaded
 // lazily (Leaflet and the charts are large).
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
-import { Notice } from '../components/ui/notice';
+import { CannotOpen } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
 import { useFarm } from '../features/farms/api/get-farm';
 import { FieldScreen } from '../features/field-screen/components/field-screen';
-import { isApiError } from '../lib/api-client';
-import { paths } from '../lib/paths';
 
 export function FieldPage() {
   const params = useParams();
@@ -21,19 +19,7 @@ export function FieldPage() {
   const bad = !Number.isInteger(farmId) || farmId <= 0 || !Number.isInteger(fieldId) || fieldId <= 0;
 
   if (bad || farm.isError)
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <main className="mx-auto w-full max-w-2xl p-6">
-          <Notice tone="error" title="This field cannot be opened">
-            {farm.isError && !isApiError(farm.error, 404) ? farm.error.message : 'There is no such farm or field, or you are not a member of the farm.'}
-          </Notice>
-          <Link to={paths.farms.getHref()} className="mt-4 inline-block font-semibold text-clay-dark underline">
-            Back to your farms
-          </Link>
-        </main>
-      </div>
-    );
+    return <CannotOpen header={header} title="This field cannot be opened" error={farm.error} notFoundText="There is no such farm or field, or you are not a member of the farm." />;
 
   return (
     <div className="flex h-full flex-col">

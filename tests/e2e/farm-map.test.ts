@@ -1,53 +1,20 @@
 // A farmer signs in, opens the farm map, draws a field and sees its area in the list.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { existsSync } from 'node:fs';
-import path from 'node:path';
-import type { Server } from 'node:http';
-import { inject } from 'vitest';
-import { createSequelize } from '../../server/db/sequelize';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { initModels } from '../../server/models';
 import { makeFarm, squareFeature, TEST_PASSWORD } from '../helpers/test-app';
 import { createField } from '../../server/services/fields.service';
-import { launchChromium, listen } from '../helpers/browser';
+import { signInPage, startBrowserApp } from '../helpers/browser';
 
-const dist = path.resolve('dist');
-let browser: Browser;
-let server: Server;
-let baseUrl = '';
-const sequelize = createSequelize(inject('databaseUrl'));
-
+let app: Awaited<ReturnType<typeof startBrowserApp>>;
 beforeAll(async () => {
-  if (!existsSync(path.join(dist, 'index.html'))) throw new Error('dist/ is missing: run `npx vite build` (npm test does it first)');
-  initModels(sequelize);
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'e2e-secret-e2e-secret' });
-  ({ url: baseUrl, server } = await listen(createApp({ sequelize, config, clientDir: dist })));
-  browser = await launchChromium();
+  app = await startBrowserApp();
 });
-afterAll(async () => {
-  await browser?.close();
-  server?.close();
-  await sequelize.close();
-});
+afterAll(() => app?.close());
 
 describe('farm map in Chromium', () => {
   it('signs in, draws a field and lists it with its area in hectares', async () => {
     const { farm, users } = await makeFarm(['farmer']);
-    await createField(sequelize, { userId: users.farmer.id }, farm.id, { geometry: squareFeature(-91.78, 42.31, 300).geometry, name: 'Home Paddock' });
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
-    const errors: string[] = [];
-    page.on('pageerror', (e) => errors.push(e.message));
-    // 4xx answers are part of the API (401 signed out, 404 "no terrain yet") and Chromium logs
-    // each as a console error; those are left out, but any 5xx or script error counts.
-    page.on('console', (m) => m.type() === 'error' && !/status of 4\d\d/.test(m.text()) && errors.push(m.text()));
-    page.on('response', (r) => r.status() >= 500 && errors.push(`${r.status()} ${r.url()}`));
-
-    await page.goto(`${baseUrl}/`);
-    await page.getByTestId('email').fill(users.farmer.email);
-    await page.getByTestId('password').fill(TEST_PASSWORD);
-    await page.getByTestId('sign-in').click();
+    await createField(app.sequelize, { userId: users.farmer.id }, farm.id, { geometry: squareFeature(-91.78, 42.31, 300).geometry, name: 'Home Paddock' });
+    const { page, errors } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
     await page.getByTestId('farm-row').filter({ hasText: farm.name }).click();
     await expect.poll(() => page.getByTestId('field-row').count(), { timeout: 15_000 }).toBe(1);
 

@@ -1,51 +1,20 @@
 // A farmer uploads an elevation model in the browser, watches the progress bar, then sees the
 // layers and the field's slope figures.
-import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
-import os from 'node:os';
+import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Server } from 'node:http';
 import proj4 from 'proj4';
-import { createSequelize } from '../../server/db/sequelize';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { initModels } from '../../server/models';
-import { JobQueue } from '../../server/services/jobs/job-queue';
-import { LocalFileStorage } from '../../server/services/storage/file-storage';
-import { terrainJobHandler } from '../../server/services/farm-terrain.service';
 import { createField } from '../../server/services/fields.service';
 import { writeGeoTiff } from '../../server/services/terrain';
 import { makeFarm, TEST_PASSWORD } from '../helpers/test-app';
-import { launchChromium, listen } from '../helpers/browser';
+import { signInPage, startBrowserApp } from '../helpers/browser';
 
 const UTM15N = '+proj=utm +zone=15 +datum=WGS84 +units=m +no_defs';
-const dist = path.resolve('dist');
-const sequelize = createSequelize(inject('databaseUrl'));
-const tmp = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-e2e-terrain-'));
-let browser: Browser;
-let server: Server;
-let jobs: JobQueue;
-let baseUrl = '';
-
+let app: Awaited<ReturnType<typeof startBrowserApp>>;
 beforeAll(async () => {
-  if (!existsSync(path.join(dist, 'index.html'))) throw new Error('dist/ is missing: run `npx vite build` (npm test does it first)');
-  initModels(sequelize);
-  const storage = new LocalFileStorage(path.join(tmp, 'uploads'));
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'e2e-terrain-secret-x' });
-  ({ url: baseUrl, server } = await listen(createApp({ sequelize, config, storage, jobs, clientDir: dist })));
-  browser = await launchChromium();
+  app = await startBrowserApp({ withJobs: true });
 });
-afterAll(async () => {
-  await browser?.close();
-  server?.close();
-  await jobs?.stop();
-  await sequelize.close();
-  rmSync(tmp, { recursive: true, force: true });
-});
+afterAll(() => app?.close());
 
 describe('elevation model in Chromium', () => {
   it('uploads a DEM, shows progress, then layers and the field’s slope', async () => {
@@ -54,19 +23,12 @@ describe('elevation model in Chromium', () => {
     const size = 1000, cell = 2, e0 = 600000, n1 = 4686000;
     const z = new Float32Array(size * size);
     for (let r = 0; r < size; r++) for (let c = 0; c < size; c++) z[r * size + c] = 100 + 0.05 * (c + 0.5) * cell;
-    const demPath = path.join(tmp, 'plane.tif');
+    const demPath = path.join(app.tmp, 'plane.tif');
     writeFileSync(demPath, writeGeoTiff({ width: size, height: size, samples: z, originX: e0, originY: n1, cellSizeX: cell, cellSizeY: cell, epsg: 32615, nodata: -9999 }));
     const ring = [[e0 + 500, n1 - 1500], [e0 + 1500, n1 - 1500], [e0 + 1500, n1 - 500], [e0 + 500, n1 - 500], [e0 + 500, n1 - 1500]].map((p) => proj4(UTM15N, 'WGS84', p) as [number, number]);
-    await createField(sequelize, { userId: users.farmer.id }, farm.id, { geometry: { type: 'Polygon', coordinates: [ring] }, name: 'Plane field' });
+    await createField(app.sequelize, { userId: users.farmer.id }, farm.id, { geometry: { type: 'Polygon', coordinates: [ring] }, name: 'Plane field' });
 
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    const errors: string[] = [];
-    page.on('pageerror', (e) => errors.push(e.message));
-    page.on('response', (r) => r.status() >= 500 && errors.push(`${r.status()} ${r.url()}`));
-    await page.goto(`${baseUrl}/`);
-    await page.getByTestId('email').fill(users.farmer.email);
-    await page.getByTestId('password').fill(TEST_PASSWORD);
-    await page.getByTestId('sign-in').click();
+    const { page, errors } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
     await page.getByTestId('farm-row').filter({ hasText: farm.name }).click();
     await page.getByTestId('field-row').first().waitFor();
 

@@ -25,3 +25,65 @@ export async function listen(app: Express): Promise<{ url: string; server: Serve
     });
   });
 }
+
+/** The real build served by the app on the shared test database, with Chromium, for one test file. */
+export async function startBrowserApp(options: { withJobs?: boolean } = {}) {
+  const { inject } = await import('vitest');
+  const { randomUUID } = await import('node:crypto');
+  const { mkdtempSync, rmSync } = await import('node:fs');
+  const os = await import('node:os');
+  const path = await import('node:path');
+  const { createSequelize } = await import('../../server/db/sequelize');
+  const { createApp } = await import('../../server/app');
+  const { loadConfig } = await import('../../server/config');
+  const { initModels } = await import('../../server/models');
+  const { JobQueue } = await import('../../server/services/jobs/job-queue');
+  const { LocalFileStorage } = await import('../../server/services/storage/file-storage');
+  const { terrainJobHandler } = await import('../../server/services/farm-terrain.service');
+
+  const dist = path.resolve('dist');
+  if (!existsSync(path.join(dist, 'index.html'))) throw new Error('dist/ is missing: run `npx vite build` (npm test does it first)');
+  const sequelize = createSequelize(inject('databaseUrl'));
+  initModels(sequelize);
+  const tmp = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-e2e-'));
+  const storage = new LocalFileStorage(path.join(tmp, 'uploads'));
+  // Each file works its own queue: its files live in its own storage folder.
+  const jobs = options.withJobs
+    ? await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`)
+    : undefined;
+  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}` });
+  const { url, server } = await listen(createApp({ sequelize, config, storage, jobs, clientDir: dist }));
+  const browser = await launchChromium();
+  return {
+    sequelize,
+    baseUrl: url,
+    browser,
+    tmp,
+    close: async () => {
+      await browser.close();
+      server.close();
+      await jobs?.stop();
+      await sequelize.close();
+      rmSync(tmp, { recursive: true, force: true });
+    },
+  };
+}
+
+/**
+ * A page signed in through the sign-in screen. `errors` collects script errors and 5xx answers;
+ * 4xx answers are part of the API (401 signed out, 404 "not set yet") and Chromium logs each as
+ * a console error, so those are left out.
+ */
+export async function signInPage(browser: Browser, baseUrl: string, email: string, password: string) {
+  const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  page.on('console', (m) => m.type() === 'error' && !/status of 4\d\d/.test(m.text()) && errors.push(m.text()));
+  page.on('response', (r) => r.status() >= 500 && errors.push(`${r.status()} ${r.url()}`));
+  await page.goto(`${baseUrl}/`);
+  await page.getByTestId('email').fill(email);
+  await page.getByTestId('password').fill(password);
+  await page.getByTestId('sign-in').click();
+  await page.getByTestId('farm-row').first().waitFor();
+  return { page, errors };
+}
