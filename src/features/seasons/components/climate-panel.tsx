@@ -1,4 +1,4 @@
-// The farm's climate: R (typed, or from the mean annual precipitation) and the design storm
+// The farm's climate: R (typed, from the mean annual precipitation, or from a rainfall record) and the design storm
 // depth for runoff. Farmers and advisors edit it (with the version read; a 409 shows the other
 // person's values); everyone else reads it.
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -16,6 +16,7 @@ import { useClimate } from '../api/get-climate';
 import { useUpdateClimate } from '../api/update-climate';
 import { plainMessage, toNumberOrNull } from './form-values';
 import { saveErrorMessage } from './save-error-message';
+import { RainfallRecordUpload } from './rainfall-record-upload';
 
 type Values = {
   rFrom: 'value' | 'precipitation';
@@ -31,9 +32,11 @@ function ClimateText({ climate, units }: { climate: Climate; units: Units }) {
     <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm" data-testid="climate-summary">
       <dt className="text-ink-soft">R, rainfall erosivity</dt>
       <dd className="num">
-        {climate.rFrom === 'value'
-          ? `${formatFigure(climate.rValue ?? 0)} ${R_UNIT}, typed`
-          : `from ${formatFigure(climate.annualPrecipitationMm ?? 0)} mm of rain a year`}
+        {climate.rFrom === 'record' && climate.record
+          ? `${formatFigure(climate.rValue ?? 0)} ${R_UNIT}, from ${climate.record.years} year${climate.record.years === 1 ? '' : 's'} of rainfall record (${climate.record.erosiveStorms} erosive storms)`
+          : climate.rFrom === 'value'
+            ? `${formatFigure(climate.rValue ?? 0)} ${R_UNIT}, typed`
+            : `from ${formatFigure(climate.annualPrecipitationMm ?? 0)} mm of rain a year`}
       </dd>
       <dt className="text-ink-soft">Design storm</dt>
       <dd className="num">
@@ -155,6 +158,7 @@ export function ClimatePanel({ farmId, canEdit, units }: { farmId: number; canEd
                 onSave={(input) => update.mutate(input)}
               />
             ) : null}
+            {canEdit ? <RainfallRecordUpload farmId={farmId} climate={climate.data} /> : null}
             {update.isError ? <Notice tone="error">{saveErrorMessage(update.error, 'climate')}</Notice> : null}
             {update.isSuccess && !update.isPending ? (
               <p role="status" className="text-sm text-ink-soft">
