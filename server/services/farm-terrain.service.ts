@@ -2,11 +2,12 @@
 // layers, and store every field's terrain figures. Re-run when a boundary changes (the
 // whole pipeline takes ~1.7 s for 4 M cells, see docs/benchmarks.md, so no partial update).
 // Field borders break overland flow for LS; where water gathers is drawn from unbroken flow.
+// Field labels are 2 bytes per cell (Uint16, up to 65 535 fields), kept as such for the soil-loss map.
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { FileStorage } from './storage/file-storage';
 import { newKey } from './storage/file-storage';
 import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats, converterBetween, rasterisePolygon, DEFAULT_SLOPE_CLASSES, parseSlopeClasses } from './terrain';
-import type { LayerKind, SlopeClass } from './terrain';
+import type { LayerKind, RenderValues, SlopeClass } from './terrain';
 import { queryFields } from './field-presenter';
 import type { JobHandler } from './jobs/job-queue';
 
@@ -20,6 +21,8 @@ export const LAYER_LABELS: Record<LayerKind, string> = {
 
 /** Keep at most this many concentrated-flow points per field for the map. */
 const MAX_FLOW_POINTS = 400;
+/** Labels are Uint16 with 0 for "no field". */
+const MAX_FIELDS = 65_535;
 
 export async function farmSlopeClasses(sequelize: Sequelize, farmId: number): Promise<ReadonlyArray<SlopeClass>> {
   const [row] = await sequelize.query<{ slope_breaks: unknown }>(`SELECT slope_breaks FROM farms WHERE id = :farmId`, { replacements: { farmId }, type: QueryTypes.SELECT });
@@ -45,7 +48,8 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
     const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
     // Each field's cells carry its label, so overland flow starts afresh at its border.
     const fields = await queryFields(sequelize, { farmId: job.farmId });
-    const labels = new Int32Array(dem.width * dem.height);
+    if (fields.length > MAX_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_FIELDS}.`);
+    const labels = new Uint16Array(dem.width * dem.height);
     const ringsByField = new Map<number, Array<Array<[number, number]>>>();
     fields.forEach((f, idx) => {
       const rings = reprojectBoundary(f.geometry, dem.epsg);
@@ -77,7 +81,7 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
     const slopeClasses = await farmSlopeClasses(sequelize, job.farmId);
 
     await report(0.7, 'Drawing map layers');
-    const layers: { kind: LayerKind; values: Float32Array | Uint8Array | null }[] = [
+    const layers: { kind: LayerKind; values: RenderValues | null }[] = [
       { kind: 'hillshade', values: grids.hillshade },
       { kind: 'slope-classes', values: grids.slopePct },
       { kind: 'ls', values: grids.ls },
@@ -95,7 +99,7 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
 
     // Keep LS and the field labels for pictures drawn on request (soil loss per cell).
     const lsKey = newKey('grids', '.f32');
-    const labelsKey = newKey('grids', '.i32');
+    const labelsKey = newKey('grids', '.u16');
     await storage.put(lsKey, Buffer.from(grids.ls.buffer, grids.ls.byteOffset, grids.ls.byteLength));
     await storage.put(labelsKey, Buffer.from(labels.buffer, labels.byteOffset, labels.byteLength));
     const fieldIdsByLabel = fields.map((f) => f.id);

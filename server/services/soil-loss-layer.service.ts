@@ -21,6 +21,14 @@ export async function keptGrids(sequelize: Sequelize, farmId: number): Promise<{
   return ls && labels ? { ls, labels } : null;
 }
 
+/** Field labels as stored: Uint16 (2 bytes per cell), or Int32 from runs before labels were Uint16. */
+function labelGrid(buf: Buffer, cells: number): Uint16Array | Int32Array {
+  const copy = buf.buffer.slice(buf.byteOffset, buf.byteOffset + buf.byteLength);
+  if (buf.byteLength === 2 * cells) return new Uint16Array(copy);
+  if (buf.byteLength === 4 * cells) return new Int32Array(copy);
+  throw new Error(`the field-label grid has ${buf.byteLength} bytes for ${cells} cells`);
+}
+
 export async function renderSoilLossLayer(
   deps: { sequelize: Sequelize; storage: FileStorage },
   farmId: number,
@@ -31,7 +39,7 @@ export async function renderSoilLossLayer(
   const lsBuf = await deps.storage.get(grids.ls.file_key);
   const labelBuf = await deps.storage.get(grids.labels.file_key);
   const ls = new Float32Array(lsBuf.buffer.slice(lsBuf.byteOffset, lsBuf.byteOffset + lsBuf.byteLength));
-  const labels = new Int32Array(labelBuf.buffer.slice(labelBuf.byteOffset, labelBuf.byteOffset + labelBuf.byteLength));
+  const labels = labelGrid(labelBuf, ls.length);
   const ids = grids.labels.detail.fieldIdsByLabel ?? [];
   const fields = new Map((await queryFields(deps.sequelize, { farmId })).map((f) => [f.id, f]));
   // Label k (1-based) → R·K·C·P of that field's assessment, NaN when it cannot be assessed.

@@ -2,19 +2,25 @@
 // in the DEM's CRS), their slope statistics and class shares, mean LS, and the cells of
 // concentrated flow (contributing area at or above a threshold, default 1 ha: common practice,
 // no single source), which are candidates for a grassed waterway.
+// Slope may come as a Float32 grid or as the pipeline's 2-byte codes (slope-pct-grid.ts): then
+// mean and 90th percentile are within 0.005 % of the Float32 figures and class shares are the
+// same (breaks on a 0.005 % grid). Concentrated flow may come as the area grid or as its mask.
+import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
 import { rasterisePolygon, type GridFrame, type Ring } from './rasterise-polygon';
 import { DEFAULT_SLOPE_CLASSES, type SlopeClass } from './slope-classes';
+import { decodeSlopePct, SLOPE_CODE_NODATA, slopeCodeAtLeast, SlopePctGrid } from './slope-pct-grid';
 
 export type FieldStatsArgs = {
   /** Polygon rings (outer first, then holes), or several polygons' rings, in the DEM's CRS. */
   rings: ReadonlyArray<Ring>;
   grid: GridFrame;
-  slopePct: Float32Array;
+  slopePct: Float32Array | SlopePctGrid;
   ls?: Float32Array;
-  contributingAreaM2?: Float32Array;
+  /** Contributing area (m²), or the pipeline's mask of where it reaches the threshold. */
+  contributingAreaM2?: Float32Array | ContributingAreaMask;
   soilLossTPerHaYr?: Float32Array;
   slopeClasses?: ReadonlyArray<SlopeClass>;
-  /** Concentrated flow starts at this contributing area (m²); default 10 000 m² = 1 ha. */
+  /** Concentrated flow starts at this contributing area (m²); default 10 000 m² = 1 ha, or the mask's. */
   concentratedFlowMinAreaM2?: number;
 };
 
@@ -47,29 +53,51 @@ export function fieldTerrainStats(args: FieldStatsArgs): FieldStatsResult {
   const n = grid.width * grid.height;
   if (slopePct.length !== n) throw new Error(`slopePct has ${slopePct.length} cells, expected ${n}`);
   const classes = args.slopeClasses ?? DEFAULT_SLOPE_CLASSES;
-  const minAreaM2 = args.concentratedFlowMinAreaM2 ?? 10_000;
+  const area = args.contributingAreaM2;
+  const mask = area instanceof ContributingAreaMask ? area : null;
+  if (mask && mask.length !== n) throw new Error(`contributingAreaM2 has ${mask.length} cells, expected ${n}`);
+  if (mask && args.concentratedFlowMinAreaM2 !== undefined && args.concentratedFlowMinAreaM2 !== mask.minAreaM2) {
+    throw new Error(`concentratedFlowMinAreaM2 is ${args.concentratedFlowMinAreaM2} m² but the mask was made at ${mask.minAreaM2} m²`);
+  }
+  const minAreaM2 = mask ? mask.minAreaM2 : (args.concentratedFlowMinAreaM2 ?? DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2);
+  const areaGrid = mask ? null : (area as Float32Array | undefined);
   const cells = rasterisePolygon(args.rings, grid);
   if (cells.length === 0) return { ok: false, reason: 'the field covers no cell of the elevation model' };
-  const values = new Float32Array(cells.length);
+  const coded = slopePct instanceof SlopePctGrid ? slopePct.codes : null;
+  const floats = coded ? null : (slopePct as Float32Array);
+  // Codes sort in the order of their slopes, so the percentile is taken on them and read back.
+  const values = coded ? new Uint16Array(cells.length) : new Float32Array(cells.length);
   const counts = new Float64Array(classes.length);
+  const pctBreaks = classes.map((c) => c.minPct);
+  const codeBreaks = pctBreaks.map(slopeCodeAtLeast);
   let count = 0, sum = 0, lsSum = 0, lsCount = 0, aSum = 0, aCount = 0;
   const flowCells: number[] = [];
   for (let k = 0; k < cells.length; k++) {
     const i = cells[k];
-    const s = slopePct[i];
-    if (s === s) {
-      values[count++] = s;
-      sum += s;
-      counts[classIndex(classes, s)]++;
+    if (coded) {
+      const code = coded[i];
+      if (code !== SLOPE_CODE_NODATA) {
+        values[count++] = code;
+        sum += decodeSlopePct(code);
+        counts[classIndex(codeBreaks, code)]++;
+      }
+    } else {
+      const s = floats![i];
+      if (s === s) {
+        values[count++] = s;
+        sum += s;
+        counts[classIndex(pctBreaks, s)]++;
+      }
     }
     if (args.ls) { const v = args.ls[i]; if (v === v) { lsSum += v; lsCount++; } }
     if (args.soilLossTPerHaYr) { const v = args.soilLossTPerHaYr[i]; if (v === v) { aSum += v; aCount++; } }
-    if (args.contributingAreaM2 && args.contributingAreaM2[i] >= minAreaM2) flowCells.push(i);
+    if (mask ? mask.has(i) : areaGrid && areaGrid[i] >= minAreaM2) flowCells.push(i);
   }
   if (count === 0) return { ok: false, reason: 'the field covers only nodata cells of the elevation model' };
   const sorted = values.subarray(0, count).sort();
   // nearest rank: the ⌈0.9·n⌉-th smallest value
-  const p90 = sorted[Math.max(0, Math.ceil(0.9 * count) - 1)];
+  const rank = sorted[Math.max(0, Math.ceil(0.9 * count) - 1)];
+  const p90 = coded ? decodeSlopePct(rank) : rank;
   const flowIdx = Int32Array.from(flowCells);
   return {
     ok: true,
@@ -91,8 +119,9 @@ export function fieldTerrainStats(args: FieldStatsArgs): FieldStatsResult {
   };
 }
 
-function classIndex(classes: ReadonlyArray<SlopeClass>, s: number): number {
-  for (let j = classes.length - 1; j > 0; j--) if (s >= classes[j].minPct) return j;
+/** Index of the class a value falls in, given each class's lower limit (in the value's units). */
+function classIndex(minima: ReadonlyArray<number>, v: number): number {
+  for (let j = minima.length - 1; j > 0; j--) if (v >= minima[j]) return j;
   return 0;
 }
 

@@ -11,6 +11,10 @@ import { float32NextUp } from './float32-next-up';
 export type FillOptions = {
   /** Write into the given array instead of a copy (saves 4 bytes per cell). */
   inPlace?: boolean;
+  /** A one-byte grid to use for the closed flags (overwritten; left all 1), instead of a new one. */
+  closedScratch?: Uint8Array;
+  /** Filled in on return: an upper bound on the bytes the priority queue and the pit FIFO held at once. */
+  stats?: { queueBytes: number };
 };
 
 /** Returns the filled elevations (NaN stays NaN). O(n log n) worst case. */
@@ -23,13 +27,15 @@ export function fillDepressions(
   const n = width * height;
   if (elevationM.length !== n) throw new Error(`elevationM has ${elevationM.length} cells, expected ${n}`);
   const z = options.inPlace ? elevationM : elevationM.slice();
-  const closed = new Uint8Array(n);
+  if (options.closedScratch && options.closedScratch.length !== n) throw new Error(`closedScratch has ${options.closedScratch.length} cells, expected ${n}`);
+  const closed = options.closedScratch ? options.closedScratch.fill(0) : new Uint8Array(n);
   const open = new CellMinHeap(4 * (width + height));
   let pit = new Int32Array(1024);
-  let pitHead = 0, pitTail = 0, pitCount = 0;
+  let pitHead = 0, pitTail = 0, pitCount = 0, pitPeakBytes = pit.byteLength;
   const pushPit = (cell: number): void => {
     if (pitCount === pit.length) {
       const bigger = new Int32Array(pit.length * 2);
+      pitPeakBytes = pit.byteLength + bigger.byteLength;
       for (let k = 0; k < pitCount; k++) bigger[k] = pit[(pitHead + k) % pit.length];
       pit = bigger;
       pitHead = 0;
@@ -92,5 +98,7 @@ export function fillDepressions(
       } else open.push(nb, z[nb]);
     }
   }
+  // Sum of each queue's own peak, so never below the two together at any moment.
+  if (options.stats) options.stats.queueBytes = open.peakBytes + pitPeakBytes;
   return z;
 }

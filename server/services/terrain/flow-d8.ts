@@ -17,10 +17,14 @@ export const D8_DIR_FACTOR = [1, 1, Math.SQRT2, 1, Math.SQRT2, 1, Math.SQRT2, 1,
 
 type GridShape = Pick<DemGrid, 'width' | 'height' | 'rowCellSizeXM' | 'rowCellSizeYM'>;
 
-/** D8 receiver code of every cell of a depression-filled DEM. */
-export function flowDirectionD8(filledM: Float32Array, grid: GridShape): Uint8Array {
+/**
+ * D8 receiver code of every cell of a depression-filled DEM. `out` may be a spent one-byte grid
+ * to reuse (e.g. the fill's closed flags); every cell of it is written.
+ */
+export function flowDirectionD8(filledM: Float32Array, grid: GridShape, out?: Uint8Array): Uint8Array {
   const { width: w, height: h } = grid;
-  const dir = new Uint8Array(w * h);
+  if (out && out.length !== w * h) throw new Error(`out has ${out.length} cells, expected ${w * h}`);
+  const dir = out ? out.fill(0) : new Uint8Array(w * h);
   const off = new Int32Array(9);
   for (let k = 1; k <= 8; k++) off[k] = D8_ROW[k] * w + D8_COL[k];
   const invDist = new Float64Array(9);
@@ -61,21 +65,24 @@ export function flowDirectionD8(filledM: Float32Array, grid: GridShape): Uint8Ar
  * Float32 grid to reuse, even `nodataMask` itself (each cell is read before it is written).
  * With `labels`, area passes from a cell to its receiver only when both carry the same label:
  * a flow break at label edges (e.g. field borders), while the walk order stays the same.
+ * `inDegreeScratch` (one byte per cell, overwritten) saves allocating the in-degree grid.
  */
 export function flowAccumulationM2(
   dir: Uint8Array,
   grid: GridShape,
   nodataMask: Float32Array,
   out?: Float32Array,
-  labels?: Int32Array,
+  labels?: Int32Array | Uint16Array,
+  inDegreeScratch?: Uint8Array,
 ): Float32Array {
   const { width: w, height: h } = grid;
   const n = w * h;
   const acc = out ?? new Float32Array(n);
   if (acc.length !== n) throw new Error(`out has ${acc.length} cells, expected ${n}`);
+  if (inDegreeScratch && inDegreeScratch.length !== n) throw new Error(`inDegreeScratch has ${inDegreeScratch.length} cells, expected ${n}`);
   const off = new Int32Array(9);
   for (let k = 1; k <= 8; k++) off[k] = D8_ROW[k] * w + D8_COL[k];
-  const indeg = new Uint8Array(n);
+  const indeg = inDegreeScratch ? inDegreeScratch.fill(0) : new Uint8Array(n);
   for (let r = 0; r < h; r++) {
     const areaM2 = grid.rowCellSizeXM[r] * grid.rowCellSizeYM[r];
     for (let i = r * w, end = i + w; i < end; i++) {

@@ -3,7 +3,9 @@ export type { DemGrid, ProgressFn } from './types';
 export { projectedDem } from './types';
 export { readDem, type ReadDemResult } from './read-dem';
 export { writeGeoTiff } from './write-geotiff';
-export { slopeHorn } from './slope-horn';
+export { slopeHorn, slopeHornRow } from './slope-horn';
+export { SlopePctGrid, encodeSlopePct, decodeSlopePct, slopeCodeAtLeast, SLOPE_CODE_NODATA } from './slope-pct-grid';
+export { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
 export { hillshade } from './hillshade';
 export { fillDepressions } from './fill-depressions';
 export { flowDirectionD8, flowAccumulationM2, inletAreaM2, D8_DIR_FACTOR } from './flow-d8';
@@ -15,5 +17,5 @@ export { DEFAULT_SLOPE_CLASSES, parseSlopeClasses, type SlopeClass } from './slo
 export { loadDefaultSlopeClasses } from './load-slope-classes';
 export { reprojectBoundary, converterBetween } from './reproject';
 export { proj4Definition } from './epsg-definitions';
-export { renderLayer, layerLegend, type LayerKind, type RenderResult, type BoundsWgs84 } from './render-layer';
+export { renderLayer, layerLegend, type LayerKind, type RenderResult, type RenderValues, type BoundsWgs84 } from './render-layer';
 export { runTerrain, type TerrainGrids, type TerrainOptions } from './pipeline';

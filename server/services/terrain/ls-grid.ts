@@ -10,11 +10,17 @@ import type { DemGrid } from './types';
 
 type GridShape = Pick<DemGrid, 'width' | 'height' | 'rowCellSizeXM' | 'rowCellSizeYM'>;
 
+/** Writes row r's slope % into out[0..width-1]; called once per row, rows in order. */
+export type SlopeRowFn = (r: number, out: Float32Array) => void;
+
 export type LsGridArgs = {
   grid: GridShape;
-  slopePct: Float32Array;
+  /** The slope grid, or a function giving it row by row (so no whole grid need be kept). */
+  slopePct: Float32Array | SlopeRowFn;
   /** Contributing area including the cell (flowAccumulationM2). */
   contributingAreaM2: Float32Array;
+  /** Write LS here; may be contributingAreaM2 itself (each cell is read before it is written). */
+  out?: Float32Array;
   flowDir: Uint8Array;
   rillRatio?: RillRatio;
   /**
@@ -28,7 +34,7 @@ export type LsGridArgs = {
    * terraces, diversions or field roads interrupt flow), used with `labels`; NaN = no own cap.
    */
   maxSlopeLengthMByLabel?: Float64Array;
-  labels?: Int32Array;
+  labels?: Int32Array | Uint16Array;
 };
 
 export const DEFAULT_MAX_SLOPE_LENGTH_M = 305;
@@ -42,7 +48,10 @@ export function lsGrid(args: LsGridArgs): Float32Array {
   const betaScale = BETA_SCALE[rill];
   if (betaScale === undefined) throw new Error(`rillRatio must be 'low', 'moderate' or 'high', got ${String(rill)}`);
   const { width: w, height: h } = grid;
-  const out = new Float32Array(w * h);
+  if (args.out && args.out.length !== w * h) throw new Error(`out has ${args.out.length} cells, expected ${w * h}`);
+  const out = args.out ?? new Float32Array(w * h);
+  const rowFn = typeof slopePct === 'function' ? slopePct : null;
+  const slopeRow = rowFn ? new Float32Array(w) : (slopePct as Float32Array);
   // ln(D / (x·22.13)) per direction code, per row: L = (D/(x·22.13))^m · [(u+1)^(m+1) − u^(m+1)]
   // with u = A_in/D², the Desmet–Govers formula divided through by D^(2m+2).
   const lnScale = new Float64Array(9);
@@ -56,8 +65,11 @@ export function lsGrid(args: LsGridArgs): Float32Array {
     const uMax = maxLen / d;
     const byLabel = args.maxSlopeLengthMByLabel && args.labels ? args.maxSlopeLengthMByLabel : null;
     const labels = args.labels;
+    // Index of cell i in slopeRow: i − sOff (the row buffer starts at the row's first cell).
+    const sOff = rowFn ? r * w : 0;
+    if (rowFn) rowFn(r, slopeRow);
     for (let i = r * w, end = i + w; i < end; i++) {
-      const s = slopePct[i];
+      const s = slopeRow[i - sOff];
       const a = acc[i] - cellAreaM2;
       if (!(s >= 0) || !(a >= -1e-3 * cellAreaM2)) { out[i] = NaN; continue; }
       let cap = uMax;

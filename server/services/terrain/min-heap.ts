@@ -9,6 +9,7 @@ export class CellMinHeap {
   constructor(initialCapacity = 1024) {
     this.keys = new Float32Array(Math.max(16, initialCapacity));
     this.cells = new Int32Array(Math.max(16, initialCapacity));
+    this.peakBytes = this.keys.byteLength + this.cells.byteLength;
   }
 
   push(cell: number, key: number): void {
@@ -26,6 +27,9 @@ export class CellMinHeap {
     keys[i] = key;
     cells[i] = cell;
   }
+
+  /** Most bytes the backing arrays have held at once (old and new arrays while doubling). */
+  peakBytes = 0;
 
   /** Key of the smallest entry (undefined behaviour when empty). */
   topKey(): number {
@@ -65,6 +69,7 @@ export class CellMinHeap {
     keys.set(this.keys);
     const cells = new Int32Array(this.cells.length * 2);
     cells.set(this.cells);
+    this.peakBytes = Math.max(this.peakBytes, 3 * (this.keys.byteLength + this.cells.byteLength));
     this.keys = keys;
     this.cells = cells;
   }

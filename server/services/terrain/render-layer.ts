@@ -4,10 +4,14 @@
 // each pixel is interpolated bilinearly from a coarse lattice of exact proj4 transforms.
 // Colours: ColorBrewer YlOrBr 5-class (Brewer, colorbrewer2.org), a colour-blind-safe sequential
 // scheme; concentrated flow in dark blue; nodata transparent.
+// Slope classes may be drawn from the pipeline's 2-byte slope codes and concentrated flow from
+// its 1-bit mask: the class tests on codes give the same pixels as on Float32 slope.
 import { PNG } from 'pngjs';
+import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
 import { converterBetween } from './reproject';
 import type { GridFrame } from './rasterise-polygon';
 import { DEFAULT_SLOPE_CLASSES, type SlopeClass } from './slope-classes';
+import { SLOPE_CODE_NODATA, slopeCodeAtLeast, SlopePctGrid } from './slope-pct-grid';
 
 export const YLORBR_5 = ['#ffffd4', '#fed98e', '#fe9929', '#d95f0e', '#993404'] as const;
 export const FLOW_BLUE = '#08306b';
@@ -18,12 +22,14 @@ export const SOIL_LOSS_BREAKS_T_PER_HA_YR = [2.2, 4.5, 11, 22];
 
 export type LayerKind = 'hillshade' | 'slope-classes' | 'ls' | 'soil-loss' | 'concentrated-flow';
 export type LegendEntry = { label: string; colour: string };
+export type RenderValues = Float32Array | Uint8Array | SlopePctGrid | ContributingAreaMask;
 export type BoundsWgs84 = { west: number; south: number; east: number; north: number };
 
 export type RenderArgs = {
   kind: LayerKind;
   grid: GridFrame & { epsg: number };
-  values: Float32Array | Uint8Array;
+  /** A SlopePctGrid only for 'slope-classes'; a ContributingAreaMask only for 'concentrated-flow'. */
+  values: RenderValues;
   slopeClasses?: ReadonlyArray<SlopeClass>;
   /** Contributing area that counts as concentrated flow (m²), default 1 ha. */
   concentratedFlowMinAreaM2?: number;
@@ -76,7 +82,7 @@ function colourerFor(args: RenderArgs): Colourer {
       return classColourer(b, labels, YLORBR_5);
     }
     case 'concentrated-flow': {
-      const min = args.concentratedFlowMinAreaM2 ?? 10_000;
+      const min = args.concentratedFlowMinAreaM2 ?? DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2;
       const blue = hex(FLOW_BLUE, 255);
       return { rgba: (v) => (v >= min ? blue : 0), legend: [{ label: `concentrated flow (over ${min / 10_000} ha draining to it)`, colour: FLOW_BLUE }] };
     }
@@ -90,6 +96,40 @@ export function layerLegend(args: Pick<RenderArgs, 'kind' | 'slopeClasses' | 'co
   return colourerFor(args as RenderArgs).legend;
 }
 
+/** The colour of cell i, packed 0xRRGGBBAA, for the kind of values given. */
+function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: number) => number } {
+  const { values } = args;
+  if (values instanceof ContributingAreaMask) {
+    if (args.kind !== 'concentrated-flow') throw new Error(`a ContributingAreaMask can only draw 'concentrated-flow', not '${args.kind}'`);
+    if (args.concentratedFlowMinAreaM2 !== undefined && args.concentratedFlowMinAreaM2 !== values.minAreaM2) {
+      throw new Error(`concentratedFlowMinAreaM2 is ${args.concentratedFlowMinAreaM2} m² but the mask was made at ${values.minAreaM2} m²`);
+    }
+    const colourer = colourerFor({ ...args, concentratedFlowMinAreaM2: values.minAreaM2 });
+    const on = colourer.rgba(Infinity);
+    return { colourer, pixel: (i) => (values.has(i) ? on : 0) };
+  }
+  const colourer = colourerFor(args);
+  if (values instanceof SlopePctGrid) {
+    if (args.kind !== 'slope-classes') throw new Error(`a SlopePctGrid can only draw 'slope-classes', not '${args.kind}'`);
+    // The same classes as colourer.rgba on Float32 slope, tested on the codes.
+    const classes = args.slopeClasses ?? DEFAULT_SLOPE_CLASSES;
+    const codeBreaks = classes.slice(1).map((c) => slopeCodeAtLeast(c.minPct));
+    const byClass = classes.map((c, j) => colourer.rgba(j === 0 ? -Infinity : c.minPct));
+    const codes = values.codes;
+    return {
+      colourer,
+      pixel: (i) => {
+        const code = codes[i];
+        if (code === SLOPE_CODE_NODATA) return 0;
+        let j = 0;
+        while (j < codeBreaks.length && code >= codeBreaks[j]) j++;
+        return byClass[j];
+      },
+    };
+  }
+  return { colourer, pixel: (i) => colourer.rgba(values[i]) };
+}
+
 /** Renders one layer. { ok: false } when the grid's CRS is unknown. */
 export function renderLayer(args: RenderArgs): RenderResult {
   const { grid, values } = args;
@@ -99,7 +139,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
   if (!toWgs.ok) return toWgs;
   const toMerc = converterBetween(grid.epsg, 3857);
   if (!toMerc.ok) return toMerc;
-  const colourer = colourerFor(args);
+  const { colourer, pixel } = pixelColourer(args);
   const x0 = grid.originX, y0 = grid.originY, x1 = x0 + w * grid.cellSizeX, y1 = y0 - h * grid.cellSizeY;
   // Envelope of the grid's edge in Web Mercator (sampled along the edges, not just corners).
   let mx0 = Infinity, my0 = Infinity, mx1 = -Infinity, my1 = -Infinity;
@@ -117,7 +157,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
     data[p] = rgba >>> 24; data[p + 1] = (rgba >>> 16) & 255; data[p + 2] = (rgba >>> 8) & 255; data[p + 3] = rgba & 255;
   };
   if (args.noWarp) {
-    for (let i = 0; i < w * h; i++) put(i * 4, colourer.rgba(values[i]));
+    for (let i = 0; i < w * h; i++) put(i * 4, pixel(i));
   } else {
     // Lattice of source (col, row) positions for output pixels, every `step` pixels.
     const step = 32;
@@ -142,7 +182,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
         const ci = Math.floor(c), ri = Math.floor(r);
         const p = (py * w + px) * 4;
         if (ci < 0 || ri < 0 || ci >= w || ri >= h) { put(p, 0); continue; }
-        put(p, colourer.rgba(values[ri * w + ci]));
+        put(p, pixel(ri * w + ci));
       }
     }
   }
