@@ -47,9 +47,12 @@ export function fillDepressions(
   };
 
   // Nodata cells are closed; valid cells on the border or touching nodata are seeds.
-  for (let i = 0; i < n; i++) if (z[i] !== z[i]) closed[i] = 1;
+  let nodataCells = 0;
+  for (let i = 0; i < n; i++) if (z[i] !== z[i]) { closed[i] = 1; nodataCells++; }
   for (let r = 0; r < height; r++) {
-    for (let c = 0; c < width; c++) {
+    // Without nodata only the border seeds: visit just those cells, in the same row-major order.
+    const inner = nodataCells === 0 && r > 0 && r < height - 1;
+    for (let c = 0; c < width; c = inner && c === 0 ? width - 1 : c + 1) {
       const i = r * width + c;
       if (closed[i]) continue;
       let seed = r === 0 || c === 0 || r === height - 1 || c === width - 1;
