@@ -196,7 +196,7 @@ try {
     '- Targets: < 2000 ms at 4 M cells; ≤ 1.5× gdaldem; < 10 B/cell. Before this layout the run kept 14 B/cell of',
     '  results (Float32 slope and area, D8 directions) plus scratch, and the farm job 8 more (Int32 labels, a second',
     '  Float32 accumulation): 22+ B/cell.',
-    '- Times on this shared machine vary by up to ~30 % from run to run, most stages alike (hence the median).',
+    '- Times on this shared machine vary by up to ~50 % from run to run (hence the median).',
     '- The memory target holds on terrain; it does not on white noise, where the fill\'s queues alone reach 12 B/cell',
     '  (table below). Layer drawing after the run (4 B/cell RGBA per layer) is outside runTerrain.',
     '',
