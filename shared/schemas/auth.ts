@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { plainText } from './plain-text';
 
 export const Email = z.string().trim().toLowerCase().email('email must be an e-mail address');
 export const Login = z.object({ email: Email, password: z.string().min(1, 'password is required') });
@@ -7,14 +8,14 @@ export type Login = z.infer<typeof Login>;
 export const Register = z.object({
   email: Email,
   password: z.string().min(10, 'password must be at least 10 characters').max(200),
-  name: z.string().trim().min(1, 'name is required').max(120),
-  farmName: z.string().trim().min(1, 'farm name is required').max(120),
+  name: plainText('name', 120, 'name is required'),
+  farmName: plainText('farmName', 120, 'farm name is required'),
 });
 export type Register = z.infer<typeof Register>;
 
 export const Units = z.enum(['ha', 'ac']);
 export type Units = z.infer<typeof Units>;
-export const UpdateMe = z.object({ units: Units.optional(), name: z.string().trim().min(1).max(120).optional() });
+export const UpdateMe = z.object({ units: Units.optional(), name: plainText('name', 120).optional() });
 
 export type Role = 'farmer' | 'advisor' | 'landowner';
 export type User = { id: number; email: string; name: string; units: Units; isAdmin: boolean };

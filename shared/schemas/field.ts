@@ -2,8 +2,9 @@
 // the server's validate() middleware.
 import { z } from 'zod';
 import { AreaGeometry } from './geojson';
+import { plainText } from './plain-text';
 
-export const FieldName = z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters');
+export const FieldName = plainText('name', 120);
 
 /** POST /api/farms/:farmId/fields: a GeoJSON Feature. */
 export const FieldCreate = z.object({

@@ -1,8 +1,9 @@
 // Seasons, cropping and practices per field per season, farm climate and typed ground.
 import { z } from 'zod';
 import { Crop, Tillage, Practice } from './estimate';
+import { plainText } from './plain-text';
 
-export const SeasonLabel = z.string().trim().min(1, 'season must not be empty').max(40, 'season must be at most 40 characters');
+export const SeasonLabel = plainText('season', 40);
 export const SeasonCreate = z.object({ label: SeasonLabel });
 export type Season = { id: number; label: string };
 

@@ -123,6 +123,15 @@ describe('bad boundaries get a clear 4xx and store nothing', () => {
     expect(confirmed.status).toBe(201);
   });
 
+  it('refuses a name with control characters', async () => {
+    const { farm, users } = await makeFarm(['farmer']);
+    const agent = await signedIn(ctx.app, users.farmer);
+    const res = await agent.post(`/api/farms/${farm.id}/fields`).send(squareFeature(-91.78, 42.31, 200, 'North\u0000field'));
+    expect(res.status).toBe(400);
+    expect(res.body.message).toMatch(/^properties.name: name must not contain control characters/);
+    expect(await Field.count({ where: { farmId: farm.id } })).toBe(0);
+  });
+
   it('answers 400 to a body that is not JSON', async () => {
     const { farm, users } = await makeFarm(['farmer']);
     const agent = await signedIn(ctx.app, users.farmer);
