@@ -1,7 +1,7 @@
 // Create, change and remove fields: one transaction each, with the version check and an
 // audit event. Routes call these; they never see req/res.
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
-import type { FieldFeature, FieldUpdate } from '../../shared/schemas/field';
+import { FieldName, type FieldFeature, type FieldUpdate } from '../../shared/schemas/field';
 import type { AreaGeometry } from '../../shared/schemas/geojson';
 import { Field, Membership } from '../models';
 import { conflict, invalid, notFound } from '../lib/http-error';
@@ -40,7 +40,9 @@ export async function insertField(
 ): Promise<number> {
   const g = await measured(sequelize, input.geometry, transaction);
   await checkOwner(farmId, input.ownerMembershipId, transaction);
-  const name = input.name?.trim() || (await nextDefaultName(farmId, transaction));
+  // Imported names come from files: one that is not a usable name gives way to the default.
+  const given = FieldName.safeParse(input.name ?? '');
+  const name = given.success ? given.data : await nextDefaultName(farmId, transaction);
   const [row] = await sequelize.query<{ id: number }>(
     `INSERT INTO fields (farm_id, name, geom, area_m2, perimeter_m, owner_membership_id)
      VALUES (:farmId, :name, ST_SetSRID(ST_GeomFromGeoJSON(:gj), 4326), :areaM2, :perimeterM, :owner)
