@@ -1,5 +1,11 @@
 // A binary min-heap of (cell index, elevation) pairs kept in two parallel typed arrays, so the
 // priority queue of Priority-Flood allocates no object per cell. Grows by doubling.
+//
+// The slot just past the last entry holds +Infinity, so pop() can pick the smaller child without
+// asking whether the right one exists, and without a branch (a mispredicted comparison per level
+// is most of a pop's time). The comparisons are the textbook ones (left child on equal keys, stop
+// at the first child ≥ the moved key), so the same operations leave the same entries in the same
+// places: the order of equal keys, which decides Priority-Flood+ε's steps on flats, is unchanged.
 
 export class CellMinHeap {
   private keys: Float32Array;
@@ -13,7 +19,7 @@ export class CellMinHeap {
   }
 
   push(cell: number, key: number): void {
-    if (this.size === this.keys.length) this.grow();
+    if (this.size + 1 >= this.keys.length) this.grow(); // room for the sentinel
     const keys = this.keys, cells = this.cells;
     let i = this.size++;
     while (i > 0) {
@@ -44,16 +50,13 @@ export class CellMinHeap {
     const n = --this.size;
     if (n === 0) return top;
     const key = keys[n], cell = cells[n];
+    keys[n] = Infinity; // the sentinel: a missing right child is never the smaller
     let i = 0;
     const half = n >> 1;
     while (i < half) {
       let child = 2 * i + 1;
-      let ck = keys[child];
-      const right = child + 1;
-      if (right < n && keys[right] < ck) {
-        child = right;
-        ck = keys[right];
-      }
+      child += +(keys[child + 1] < keys[child]); // the right child only when strictly smaller
+      const ck = keys[child];
       if (ck >= key) break;
       keys[i] = ck;
       cells[i] = cells[child];

@@ -1,0 +1,244 @@
+import { describe, expect, it } from 'vitest';
+import { fillDepressions } from '../../../server/services/terrain/fill-depressions';
+import { CellMinHeap } from '../../../server/services/terrain/min-heap';
+import { seededRandom } from './helpers';
+
+// The fill was made faster with the same visiting order; its reference is the plain
+// Priority-Flood+ε it replaced (Barnes, Lehman & Mulla 2014, Alg. 3, our own code before that
+// change), kept here verbatim with its binary heap. With ε the result depends on the order equal
+// elevations leave the heap, so every check is bit-for-bit equality of the Float32 grid.
+
+class ReferenceHeap {
+  private keys: Float32Array;
+  private cells: Int32Array;
+  size = 0;
+  constructor(initialCapacity = 1024) {
+    this.keys = new Float32Array(Math.max(16, initialCapacity));
+    this.cells = new Int32Array(Math.max(16, initialCapacity));
+  }
+  push(cell: number, key: number): void {
+    if (this.size === this.keys.length) {
+      const keys = new Float32Array(this.keys.length * 2);
+      keys.set(this.keys);
+      const cells = new Int32Array(this.cells.length * 2);
+      cells.set(this.cells);
+      this.keys = keys;
+      this.cells = cells;
+    }
+    const keys = this.keys, cells = this.cells;
+    let i = this.size++;
+    while (i > 0) {
+      const parent = (i - 1) >> 1;
+      const pk = keys[parent];
+      if (pk <= key) break;
+      keys[i] = pk;
+      cells[i] = cells[parent];
+      i = parent;
+    }
+    keys[i] = key;
+    cells[i] = cell;
+  }
+  pop(): number {
+    const keys = this.keys, cells = this.cells;
+    const top = cells[0];
+    const n = --this.size;
+    if (n === 0) return top;
+    const key = keys[n], cell = cells[n];
+    let i = 0;
+    const half = n >> 1;
+    while (i < half) {
+      let child = 2 * i + 1;
+      let ck = keys[child];
+      const right = child + 1;
+      if (right < n && keys[right] < ck) {
+        child = right;
+        ck = keys[right];
+      }
+      if (ck >= key) break;
+      keys[i] = ck;
+      cells[i] = cells[child];
+      i = child;
+    }
+    keys[i] = key;
+    cells[i] = cell;
+    return top;
+  }
+}
+
+const f32 = new Float32Array(1);
+const i32 = new Int32Array(f32.buffer);
+function referenceNextUp(x: number): number {
+  f32[0] = x;
+  const v = f32[0];
+  if (v === 0) return 1.401298464324817e-45;
+  if (v > 0) i32[0] += 1;
+  else i32[0] -= 1;
+  return f32[0];
+}
+
+function referenceFill(elevationM: Float32Array, width: number, height: number): Float32Array {
+  const n = width * height;
+  const z = elevationM.slice();
+  const closed = new Uint8Array(n);
+  const open = new ReferenceHeap(4 * (width + height));
+  let pit = new Int32Array(1024);
+  let pitHead = 0, pitTail = 0, pitCount = 0;
+  const pushPit = (cell: number): void => {
+    if (pitCount === pit.length) {
+      const bigger = new Int32Array(pit.length * 2);
+      for (let k = 0; k < pitCount; k++) bigger[k] = pit[(pitHead + k) % pit.length];
+      pit = bigger;
+      pitHead = 0;
+      pitTail = pitCount;
+    }
+    pit[pitTail] = cell;
+    pitTail = pitTail + 1 === pit.length ? 0 : pitTail + 1;
+    pitCount++;
+  };
+  let nodataCells = 0;
+  for (let i = 0; i < n; i++) if (z[i] !== z[i]) { closed[i] = 1; nodataCells++; }
+  for (let r = 0; r < height; r++) {
+    const inner = nodataCells === 0 && r > 0 && r < height - 1;
+    for (let c = 0; c < width; c = inner && c === 0 ? width - 1 : c + 1) {
+      const i = r * width + c;
+      if (closed[i]) continue;
+      let seed = r === 0 || c === 0 || r === height - 1 || c === width - 1;
+      if (!seed) {
+        for (let dr = -1; dr <= 1 && !seed; dr++) {
+          for (let dc = -1; dc <= 1; dc++) {
+            const v = z[i + dr * width + dc];
+            if (v !== v) { seed = true; break; }
+          }
+        }
+      }
+      if (seed) {
+        closed[i] = 1;
+        open.push(i, z[i]);
+      }
+    }
+  }
+  const offsets = [-width - 1, -width, -width + 1, -1, 1, width - 1, width, width + 1];
+  const dRow = [-1, -1, -1, 0, 0, 1, 1, 1];
+  const dCol = [-1, 0, 1, -1, 1, -1, 0, 1];
+  while (pitCount > 0 || open.size > 0) {
+    let c: number;
+    if (pitCount > 0) {
+      c = pit[pitHead];
+      pitHead = pitHead + 1 === pit.length ? 0 : pitHead + 1;
+      pitCount--;
+    } else c = open.pop();
+    const zc = z[c];
+    const floor = referenceNextUp(zc);
+    const row = (c / width) | 0;
+    const col = c - row * width;
+    const interior = row > 0 && col > 0 && row < height - 1 && col < width - 1;
+    for (let k = 0; k < 8; k++) {
+      if (!interior) {
+        const rr = row + dRow[k], cc = col + dCol[k];
+        if (rr < 0 || cc < 0 || rr >= height || cc >= width) continue;
+      }
+      const nb = c + offsets[k];
+      if (closed[nb]) continue;
+      closed[nb] = 1;
+      if (z[nb] <= floor) {
+        z[nb] = floor;
+        pushPit(nb);
+      } else open.push(nb, z[nb]);
+    }
+  }
+  return z;
+}
+
+/** Cells whose Float32 bits differ (NaN payloads included). */
+function differingCells(a: Float32Array, b: Float32Array): number {
+  const ai = new Int32Array(a.buffer, a.byteOffset, a.length), bi = new Int32Array(b.buffer, b.byteOffset, b.length);
+  let d = 0;
+  for (let i = 0; i < ai.length; i++) if (ai[i] !== bi[i]) d++;
+  return d;
+}
+
+function grid(w: number, h: number, f: (r: number, c: number) => number): Float32Array {
+  const z = new Float32Array(w * h);
+  for (let r = 0; r < h; r++) for (let c = 0; c < w; c++) z[r * w + c] = f(r, c);
+  return z;
+}
+
+const W = 230, H = 170;
+const rnd = seededRandom(7);
+const hills = (r: number, c: number): number => 300 + 20 * Math.sin(c / 23) * Math.cos(r / 29) + 5 * Math.sin((c + r) / 9) - 0.03 * r;
+const dems: Array<[string, Float32Array]> = [
+  ['white noise', grid(W, H, () => rnd() * 10)],
+  ['hills with noise pits', grid(W, H, (r, c) => hills(r, c) + rnd() * 0.5)],
+  ['hills with deep one-cell pits', grid(W, H, (r, c) => hills(r, c) - (rnd() < 0.02 ? 5 + rnd() * 20 : 0))],
+  // A plain and a lake bed at exactly one value, touching the border: many equal keys leave the
+  // heap together, so their order decides which flat cells get which ε steps.
+  ['large flats touching the border', grid(W, H, (r, c) => (c < 90 ? 120 : r > 60 && r < 130 && c > 130 && c < 210 ? 118 : 120 + 0.02 * (c - 90) + rnd() * 0.3))],
+  ['elevations quantised to 0.1 m (ties everywhere)', grid(W, H, (r, c) => Math.round((hills(r, c) + rnd() * 2) * 10) / 10)],
+  ['nodata holes and a nodata margin', grid(W, H, (r, c) => {
+    if (c < 3 || (r - 80) ** 2 + (c - 60) ** 2 < 300 || (r > 20 && r < 40 && c > 150 && c < 200) || rnd() < 0.01) return NaN;
+    return hills(r, c) + rnd() * 0.5;
+  })],
+  ['a cliff across the grid', grid(W, H, (r, c) => (r > 85 ? 60 : 0) + 250 + 0.01 * c + rnd() * 0.4)],
+  ['negative, zero and sub-zero flats (sea level)', grid(W, H, (r, c) => (c < 40 ? 0 : c < 70 ? -0 : -3 + 0.05 * c + 4 * Math.sin(r / 13) + (rnd() < 0.5 ? 0 : rnd())))],
+];
+
+describe('faster Priority-Flood+ε fill, same result as the plain one', () => {
+  for (const [name, dem] of dems) {
+    it(`gives bit-for-bit the Float32 grid of the plain implementation: ${name}`, () => {
+      const before = dem.slice();
+      const ref = referenceFill(dem, W, H);
+      const out = fillDepressions(dem, W, H);
+      expect(differingCells(out, ref)).toBe(0);
+      expect(differingCells(dem, before)).toBe(0); // the input is untouched
+      // in place, with a dirty closed-flag scratch grid, as runTerrain calls it
+      const work = dem.slice();
+      const scratch = new Uint8Array(W * H).fill(7);
+      fillDepressions(work, W, H, { inPlace: true, closedScratch: scratch });
+      expect(differingCells(work, ref)).toBe(0);
+      expect(scratch.every((v) => v === 1)).toBe(true);
+    });
+  }
+
+  it('gives the same result on one-row and tiny grids', () => {
+    for (const [w, h] of [[1, 1], [1, 2], [9, 1], [2, 2], [3, 3], [4, 7]]) {
+      const z = grid(w, h, () => Math.round(rnd() * 4));
+      expect(differingCells(fillDepressions(z, w, h), referenceFill(z, w, h))).toBe(0);
+    }
+  });
+});
+
+describe('Priority-Flood+ε on one-column grids', () => {
+  // The plain implementation never finished on these (its seed loop jumped from column 0 to
+  // column width − 1 = 0); every cell is on the border, so nothing is raised.
+  it('finishes on a one-column grid and leaves every cell as it was', () => {
+    const z = grid(1, 9, () => Math.round(rnd() * 4));
+    expect(differingCells(fillDepressions(z, 1, 9), z)).toBe(0);
+  });
+});
+
+describe('cell min-heap', () => {
+  it('pops the same cells in the same order as the textbook binary heap, ties included', () => {
+    const heap = new CellMinHeap(16), ref = new ReferenceHeap(16);
+    const popped: number[] = [], refPopped: number[] = [];
+    for (let step = 0; step < 200_000; step++) {
+      if (ref.size > 0 && rnd() < 0.48) {
+        popped.push(heap.pop());
+        refPopped.push(ref.pop());
+      } else {
+        const key = Math.floor(rnd() * 40); // few distinct keys: many ties
+        heap.push(step, key);
+        ref.push(step, key);
+      }
+    }
+    while (ref.size > 0) {
+      popped.push(heap.pop());
+      refPopped.push(ref.pop());
+    }
+    expect(heap.size).toBe(0);
+    expect(popped).toEqual(refPopped);
+  });
+
+  it('throws on pop() from an empty heap', () => {
+    expect(() => new CellMinHeap().pop()).toThrow('pop() on an empty heap');
+  });
+});
