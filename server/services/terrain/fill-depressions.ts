@@ -25,7 +25,7 @@ export type FillOptions = {
   stats?: { queueBytes: number };
 };
 
-// One Float32 and its bits, for the ε step (IEEE 754 nextafter toward +∞, as float32-next-up.ts).
+// One Float32 and its bits, for the ε step (IEEE 754 nextafter toward +∞).
 const f32 = new Float32Array(1);
 const i32 = new Int32Array(f32.buffer);
 
