@@ -1,7 +1,8 @@
 // Import field outlines from a file: drop it or pick it. Shows how many fields were created
 // and why each rejected item was refused; errors stay inside the dialog, next to the file.
-import { useEffect, useId, useRef, useState, type DragEvent } from 'react';
+import { useId, useState, type DragEvent } from 'react';
 import { Button } from '../../../components/ui/button';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { Notice } from '../../../components/ui/notice';
 import { isApiError } from '../../../lib/api-client';
 import type { ImportResult } from '../../../../shared/schemas/field';
@@ -52,14 +53,6 @@ export function ImportDialog({ farmId, onClose }: { farmId: number; onClose: () 
   const [fileError, setFileError] = useState<string | null>(null);
   const [dragging, setDragging] = useState(false);
   const [fileName, setFileName] = useState<string | null>(null);
-  const dialogRef = useRef<HTMLDivElement>(null);
-
-  useEffect(() => {
-    dialogRef.current?.focus();
-    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && onClose();
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [onClose]);
 
   const send = (file: File | undefined) => {
     if (!file) return;
@@ -80,17 +73,7 @@ export function ImportDialog({ farmId, onClose }: { farmId: number; onClose: () 
   const error = importFields.error;
 
   return (
-    <div className="fixed inset-0 z-[2000] flex items-center justify-center bg-ink/40 p-4" onClick={onClose}>
-      <div
-        ref={dialogRef}
-        role="dialog"
-        aria-modal="true"
-        aria-labelledby={titleId}
-        tabIndex={-1}
-        data-testid="import-dialog"
-        className="flex w-full max-w-lg flex-col gap-4 rounded-lg border border-paper-edge bg-paper p-5 shadow-xl"
-        onClick={(e) => e.stopPropagation()}
-      >
+    <ModalDialog titleId={titleId} onClose={onClose} testId="import-dialog" className="flex w-full max-w-lg flex-col gap-4 p-5">
         <h2 id={titleId} className="text-xl font-semibold">
           Import field outlines
         </h2>
@@ -154,7 +137,6 @@ export function ImportDialog({ farmId, onClose }: { farmId: number; onClose: () 
             {result ? 'Done' : 'Close'}
           </Button>
         </div>
-      </div>
-    </div>
+    </ModalDialog>
   );
 }

@@ -1,8 +1,9 @@
 // Profile photos of the field: upload (JPEG, PNG or WebP; the server checks the content and
 // the size and its answer is shown), a grid of thumbnails, and the full picture with its
 // caption on a click. Farmer and advisor add and delete.
-import { useEffect, useId, useRef, useState } from 'react';
+import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/button';
+import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { Notice } from '../../../components/ui/notice';
 import { isApiError } from '../../../lib/api-client';
 import type { SoilPhoto, SoilSample } from '../../../../shared/schemas/soils';
@@ -22,25 +23,14 @@ function PhotoViewer({ photo, canEdit, fieldId, onClose, sampleLabel }: { photo:
   const titleId = useId();
   const remove = useDeleteSoilPhoto(fieldId);
   const [confirm, setConfirm] = useState(false);
-  const ref = useRef<HTMLDivElement>(null);
-  useEffect(() => {
-    ref.current?.focus();
-    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && onClose();
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [onClose]);
   return (
-    <div className="fixed inset-0 z-[2000] flex items-center justify-center bg-ink/60 p-4" onClick={onClose}>
-      <div
-        ref={ref}
-        role="dialog"
-        aria-modal="true"
-        aria-labelledby={titleId}
-        tabIndex={-1}
-        data-testid="soil-photo-viewer"
-        className="flex max-h-full w-full max-w-4xl flex-col gap-3 overflow-auto rounded-lg border border-paper-edge bg-paper p-4 shadow-xl"
-        onClick={(e) => e.stopPropagation()}
-      >
+    <ModalDialog
+      titleId={titleId}
+      onClose={onClose}
+      testId="soil-photo-viewer"
+      backdrop="bg-ink/60"
+      className="flex max-h-full w-full max-w-4xl flex-col gap-3 overflow-auto p-4"
+    >
         <div className="flex items-start justify-between gap-2">
           <h2 id={titleId} className="text-lg font-semibold">
             {photo.caption || 'Soil profile photo'}
@@ -74,8 +64,7 @@ function PhotoViewer({ photo, canEdit, fieldId, onClose, sampleLabel }: { photo:
             {remove.isError ? <Notice tone="error">{remove.error.message}</Notice> : null}
           </div>
         ) : null}
-      </div>
-    </div>
+    </ModalDialog>
   );
 }
 
