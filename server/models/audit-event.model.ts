@@ -1,3 +1,5 @@
+import { Farm } from './farm.model';
+import { User } from './user.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 
 /** Who changed what, when. Written in the same transaction as the change. */
@@ -25,5 +27,10 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
       },
       { sequelize, tableName: 'audit_events', updatedAt: false },
     );
+  }
+
+  static associate(): void {
+    AuditEvent.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
+    AuditEvent.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   }
 }

@@ -1,3 +1,5 @@
+import { Membership } from './membership.model';
+import { Field } from './field.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 
 export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<Farm>> {
@@ -16,5 +18,10 @@ export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<F
       },
       { sequelize, tableName: 'farms' },
     );
+  }
+
+  static associate(): void {
+    Farm.hasMany(Membership, { foreignKey: 'farmId', as: 'memberships' });
+    Farm.hasMany(Field, { foreignKey: 'farmId', as: 'fields' });
   }
 }

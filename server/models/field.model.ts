@@ -1,3 +1,5 @@
+import { Farm } from './farm.model';
+import { Membership } from './membership.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { MultiPolygon } from 'geojson';
 
@@ -30,5 +32,10 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
       },
       { sequelize, tableName: 'fields' },
     );
+  }
+
+  static associate(): void {
+    Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
+    Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });
   }
 }

@@ -1,3 +1,6 @@
+// The model layer: one Sequelize model class per table, each in its own file with its typed
+// attributes, `initModel` and `associate`. PostGIS work Sequelize cannot express lives in a
+// `*.queries.ts` beside its model. Nothing outside server/models talks SQL.
 import type { Sequelize } from 'sequelize';
 import { User } from './user.model';
 import { Farm } from './farm.model';
@@ -7,14 +10,15 @@ import { AuditEvent } from './audit-event.model';
 
 export { User, Farm, Membership, Field, AuditEvent };
 
+/** Every model, in an order where a table comes after the tables it refers to. */
+const MODELS = [User, Farm, Membership, Field, AuditEvent];
+
 let initialised: Sequelize | null = null;
 
-/** Binds the models to one Sequelize instance (one per process). */
+/** Binds the models to one Sequelize instance (one per process), then declares associations. */
 export function initModels(sequelize: Sequelize): void {
   if (initialised === sequelize) return;
-  for (const m of [User, Farm, Membership, Field, AuditEvent]) m.initModel(sequelize);
-  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
-  Membership.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
-  Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
+  for (const m of MODELS) m.initModel(sequelize);
+  for (const m of MODELS) m.associate();
   initialised = sequelize;
 }

@@ -1,3 +1,5 @@
+import { User } from './user.model';
+import { Farm } from './farm.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { Role } from '../../shared/schemas/auth';
 
@@ -22,5 +24,10 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
       },
       { sequelize, tableName: 'memberships' },
     );
+  }
+
+  static associate(): void {
+    Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+    Membership.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
   }
 }

@@ -1,3 +1,4 @@
+import { Membership } from './membership.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -24,5 +25,9 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
       },
       { sequelize, tableName: 'users' },
     );
+  }
+
+  static associate(): void {
+    User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
   }
 }

@@ -7,7 +7,7 @@ import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { getFarm, listFarms } from '../services/farms.service';
 import { queryFields } from '../services/field-presenter';
 import { createField } from '../services/fields.service';
-import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import { afterInputsChange } from '../services/input-changes.service';
 import type { JobQueue } from '../services/jobs/job-queue';
 
 export function farmsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: JobQueue }): Router {
@@ -34,7 +34,7 @@ export function farmsRoutes({ sequelize, jobs }: { sequelize: Sequelize; jobs?: 
       name: typeof body.properties?.name === 'string' ? body.properties.name : null,
       ownerMembershipId: body.properties?.ownerMembershipId ?? null,
     });
-    await refreshTerrainIfAny({ sequelize, jobs }, req.membership!.farmId, req.user!.id);
+    await afterInputsChange({ sequelize, jobs }, { kind: 'boundary', farmId: feature.properties.farmId, fieldIds: [feature.id] }, { userId: req.user!.id });
     res.status(201).json(feature);
   });
   return r;

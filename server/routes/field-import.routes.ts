@@ -4,7 +4,7 @@ import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { singleUpload } from '../middleware/upload';
 import { badRequest } from '../lib/http-error';
 import { IMPORT_LIMIT_BYTES, importFields } from '../services/import-fields.service';
-import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import { afterInputsChange } from '../services/input-changes.service';
 import type { JobQueue } from '../services/jobs/job-queue';
 
 const upload = singleUpload(IMPORT_LIMIT_BYTES, 'boundary file');
@@ -18,7 +18,8 @@ export function fieldImportRoutes({ sequelize, jobs }: { sequelize: Sequelize; j
       originalName: req.file.originalname,
       mimeType: req.file.mimetype,
     });
-    await refreshTerrainIfAny({ sequelize, jobs }, req.membership!.farmId, req.user!.id);
+    const fieldIds = result.created.map((f) => f.id);
+    await afterInputsChange({ sequelize, jobs }, { kind: 'boundary', farmId: req.membership!.farmId, fieldIds }, { userId: req.user!.id });
     res.status(201).json(result);
   });
   return r;

@@ -6,7 +6,7 @@ import { requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
 import { queryFields } from '../services/field-presenter';
 import { deleteField, updateField } from '../services/fields.service';
-import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import { afterInputsChange } from '../services/input-changes.service';
 import type { JobQueue } from '../services/jobs/job-queue';
 import type { FileStorage } from '../services/storage/file-storage';
 
@@ -19,7 +19,8 @@ export function fieldsRoutes({ sequelize, jobs, storage }: { sequelize: Sequeliz
   });
   r.patch('/:fieldId', loadFieldMembership, requireRole('farmer'), validate(FieldUpdate), async (req, res) => {
     const updated = await updateField(sequelize, { userId: req.user!.id }, res.locals.fieldId as number, req.body);
-    if (req.body.geometry) await refreshTerrainIfAny({ sequelize, jobs }, updated.properties.farmId, req.user!.id);
+    const kind = req.body.geometry ? 'boundary' : 'field-details';
+    await afterInputsChange({ sequelize, jobs }, { kind, farmId: updated.properties.farmId, fieldIds: [updated.id] }, { userId: req.user!.id });
     res.json(updated);
   });
   r.delete('/:fieldId', loadFieldMembership, requireRole('farmer'), async (req, res) => {

@@ -14,7 +14,7 @@ import { queryFields } from '../services/field-presenter';
 import { ensureSeason, findSeason, getCropping, listSeasons, putCropping, resolveSeason } from '../services/seasons.service';
 import { getClimate, getGround, putClimate, putClimateFromRecord, putGround } from '../services/climate-ground.service';
 import { RAINFALL_CSV_LIMIT_BYTES, rFromRainfallCsv } from '../services/rainfall-record';
-import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import { afterInputsChange } from '../services/input-changes.service';
 import type { JobQueue } from '../services/jobs/job-queue';
 import { assessField } from '../services/assessment.service';
 import { farmBoard, rankRows } from '../services/board.service';
@@ -80,7 +80,8 @@ export function seasonsRoutes(sequelize: Sequelize, jobs?: JobQueue): { farms: R
     const before = await getGround(sequelize, f.id);
     const ground = await putGround(sequelize, { userId: req.user!.id }, { id: f.id, farmId: f.properties.farmId }, req.body);
     // The typed slope length caps the DEM's flow length for LS: re-run the terrain when it changes.
-    if (before?.slopeLengthM !== ground.slopeLengthM) await refreshTerrainIfAny({ sequelize, jobs }, f.properties.farmId, req.user!.id);
+    const change = { kind: 'ground' as const, farmId: f.properties.farmId, fieldIds: [f.id], slopeLengthChanged: before?.slopeLengthM !== ground.slopeLengthM };
+    await afterInputsChange({ sequelize, jobs }, change, { userId: req.user!.id });
     res.json(ground);
   });
   fields.get('/:fieldId/cropping', loadFieldMembership, async (req, res) => {

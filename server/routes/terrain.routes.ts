@@ -11,7 +11,7 @@ import { LAYER_LABELS, farmSlopeClasses } from '../services/farm-terrain.service
 import { parseSlopeClasses, layerLegend } from '../services/terrain';
 import { keptGrids, renderSoilLossLayer } from '../services/soil-loss-layer.service';
 import { listSeasons, resolveSeason } from '../services/seasons.service';
-import { refreshTerrainIfAny } from '../services/terrain-refresh';
+import { afterInputsChange } from '../services/input-changes.service';
 import type { LayerKind } from '../services/terrain';
 
 const upload = singleUpload(DEM_LIMIT_BYTES, 'elevation model');
@@ -114,7 +114,7 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
     await sequelize.query(`UPDATE farms SET slope_breaks = :breaks, updated_at = now() WHERE id = :farmId`, {
       replacements: { farmId, breaks: parsed?.ok ? JSON.stringify(parsed.classes) : null },
     });
-    const jobId = await refreshTerrainIfAny(deps, farmId, req.user!.id);
+    const { terrainJobId: jobId } = await afterInputsChange(deps, { kind: 'slope-classes', farmId }, { userId: req.user!.id });
     res.json({ classes: await farmSlopeClasses(sequelize, farmId), custom: !reset, jobId });
   });
 

@@ -1,0 +1,45 @@
+// The one place that decides what follows a change to an assessment's inputs: a new terrain
+// run when the change alters what the terrain run computes and the farm has an elevation
+// model, and fresh stored assessments for the fields it touches.
+import type { Sequelize, Transaction } from 'sequelize';
+import type { JobQueue } from './jobs/job-queue';
+import { refreshTerrainIfAny } from './terrain-refresh';
+import { refreshAssessments } from './assessments/refresh-assessments';
+
+export type InputChange =
+  /** Fields drawn, reshaped, imported or removed: flow paths and per-field figures change. */
+  | { kind: 'boundary'; farmId: number; fieldIds?: number[] }
+  /** The typed slope length also caps the elevation model's flow length on that field. */
+  /** A field renamed or given another owner: nothing the terrain run computes. */
+  | { kind: 'field-details'; farmId: number; fieldIds: number[] }
+  | { kind: 'ground'; farmId: number; fieldIds: number[]; slopeLengthChanged: boolean }
+  | { kind: 'slope-classes'; farmId: number }
+  /** A terrain run finished and wrote new per-field figures. */
+  | { kind: 'terrain'; farmId: number }
+  | { kind: 'soils'; farmId: number; fieldIds?: number[] }
+  | { kind: 'cropping'; farmId: number; fieldIds: number[] }
+  | { kind: 'climate'; farmId: number }
+  | { kind: 'season'; farmId: number };
+
+export type InputChangeDeps = { sequelize: Sequelize; jobs?: JobQueue };
+
+function rerunsTerrain(change: InputChange): boolean {
+  if (change.kind === 'boundary' || change.kind === 'slope-classes') return true;
+  return change.kind === 'ground' && change.slopeLengthChanged;
+}
+
+function fieldsTouched(change: InputChange): number[] | undefined {
+  return 'fieldIds' in change ? change.fieldIds : undefined;
+}
+
+/** Runs what follows an input change; returns the terrain job's id when one was queued. */
+export async function afterInputsChange(
+  deps: InputChangeDeps,
+  change: InputChange,
+  actor: { userId: number },
+  transaction?: Transaction,
+): Promise<{ terrainJobId: string | null }> {
+  await refreshAssessments(deps.sequelize, { farmId: change.farmId, fieldIds: fieldsTouched(change) }, transaction);
+  const terrainJobId = rerunsTerrain(change) ? await refreshTerrainIfAny(deps, change.farmId, actor.userId) : null;
+  return { terrainJobId };
+}
