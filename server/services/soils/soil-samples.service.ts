@@ -82,30 +82,14 @@ export async function createSample(sequelize: Sequelize, actor: Actor, fieldId: 
   return sample;
 }
 
-/** A stored sample back in the create payload's shape, so a change can be merged and re-checked. */
+/**
+ * A stored sample back in the create payload's shape (the API's sample uses the same names; the
+ * schema drops the rest), so a change can be merged and re-checked. Sand, silt and clay are the
+ * renormalised values: they add up to 100 %, so a stored sample always re-checks.
+ */
 function inputOf(s: SoilSample): Record<string, unknown> {
-  return {
-    kind: s.kind,
-    label: s.label,
-    sampledOn: s.sampledOn,
-    depthTopCm: s.depthTopCm,
-    depthBottomCm: s.depthBottomCm,
-    // The renormalised values: they add up to 100 %, so a stored sample always re-checks.
-    sandPct: s.sandPct,
-    siltPct: s.siltPct,
-    clayPct: s.clayPct,
-    organicMatterPct: s.organicMatterPct,
-    ph: s.ph,
-    bufferPh: s.bufferPh,
-    depthToGrayCm: s.depthToGrayCm,
-    describedToCm: s.describedToCm,
-    bulkDensity: s.bulkDensityMgM3,
-    cecCmolPerKg: s.cecCmolKg,
-    espPct: s.espPct,
-    balls: s.feelBalls ?? undefined,
-    ribbonCm: s.feelRibbonCm,
-    feel: s.feelGrit,
-  };
+  const { feelTest, ...stored } = presentSample(s);
+  return { ...stored, balls: feelTest?.balls, ribbonCm: feelTest?.ribbonCm ?? null, feel: feelTest?.feel ?? null };
 }
 
 export async function updateSample(sequelize: Sequelize, actor: Actor, sampleId: number, patch: SoilSampleUpdate): Promise<SoilSample> {
