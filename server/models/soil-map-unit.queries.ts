@@ -3,7 +3,7 @@
 // and summarising the units' attribute values.
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { MultiPolygon, Polygon } from 'geojson';
-import type { SoilMapMeaning } from '../../shared/schemas/soils';
+import { SOIL_MAP_MEANINGS, type SoilMapMeaning } from '../../shared/schemas/soils';
 import type { StoredMapping } from './soil-map.model';
 
 export type MapUnitOutline = { index: number; geometry: Polygon | MultiPolygon; properties: Record<string, unknown> };
@@ -88,9 +88,9 @@ export async function mappedAttributeValues(
   attributeOf: Partial<Record<SoilMapMeaning, string>>,
   transaction?: Transaction,
 ): Promise<Partial<Record<SoilMapMeaning, unknown>>[]> {
-  const meanings = Object.keys(attributeOf) as SoilMapMeaning[];
+  // Only the fixed meanings are written into the SQL; the attribute names are bound as values.
+  const meanings = SOIL_MAP_MEANINGS.filter((k) => attributeOf[k] !== undefined);
   if (meanings.length === 0) return [];
-  // The meanings are the fixed SOIL_MAP_MEANINGS; the attribute names are bound as values.
   const rows = await sequelize.query<{ v: Partial<Record<SoilMapMeaning, unknown>> }>(
     `SELECT jsonb_build_object(${meanings.map((k) => `'${k}', u.attributes -> :${k}`).join(', ')}) AS v FROM soil_map_units u WHERE u.soil_map_id = :soilMapId`,
     { replacements: { soilMapId, ...attributeOf }, type: QueryTypes.SELECT, transaction },
