@@ -1,5 +1,6 @@
 import { Membership } from './membership.model';
 import { Field } from './field.model';
+import { SoilMap } from './soil-map.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 
 export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<Farm>> {
@@ -23,5 +24,6 @@ export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<F
   static associate(): void {
     Farm.hasMany(Membership, { foreignKey: 'farmId', as: 'memberships' });
     Farm.hasMany(Field, { foreignKey: 'farmId', as: 'fields' });
+    Farm.hasOne(SoilMap, { foreignKey: 'farmId', as: 'soilMap' });
   }
 }

@@ -1,5 +1,7 @@
 import { Farm } from './farm.model';
 import { Membership } from './membership.model';
+import { SoilPhoto } from './soil-photo.model';
+import { SoilSample } from './soil-sample.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { MultiPolygon } from 'geojson';
 
@@ -37,5 +39,7 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
   static associate(): void {
     Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });
+    Field.hasMany(SoilSample, { foreignKey: 'fieldId', as: 'soilSamples' });
+    Field.hasMany(SoilPhoto, { foreignKey: 'fieldId', as: 'soilPhotos' });
   }
 }

@@ -7,11 +7,15 @@ import { Farm } from './farm.model';
 import { Membership } from './membership.model';
 import { Field } from './field.model';
 import { AuditEvent } from './audit-event.model';
+import { SoilSample } from './soil-sample.model';
+import { SoilPhoto } from './soil-photo.model';
+import { SoilMap } from './soil-map.model';
+import { SoilMapUnit } from './soil-map-unit.model';
 
-export { User, Farm, Membership, Field, AuditEvent };
+export { User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
-const MODELS = [User, Farm, Membership, Field, AuditEvent];
+const MODELS = [User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit];
 
 let initialised: Sequelize | null = null;
 
