@@ -1,5 +1,6 @@
 import { Farm } from './farm.model';
 import { Membership } from './membership.model';
+import { FieldTerrain } from './field-terrain.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { MultiPolygon } from 'geojson';
 
@@ -37,5 +38,6 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
   static associate(): void {
     Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });
+    Field.hasOne(FieldTerrain, { foreignKey: 'fieldId', as: 'terrain' });
   }
 }

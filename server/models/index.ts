@@ -7,11 +7,16 @@ import { Farm } from './farm.model';
 import { Membership } from './membership.model';
 import { Field } from './field.model';
 import { AuditEvent } from './audit-event.model';
+import { ElevationModel } from './elevation-model.model';
+import { ProcessingJob } from './processing-job.model';
+import { FieldTerrain } from './field-terrain.model';
+import { TerrainLayer } from './terrain-layer.model';
+import { TerrainGrid } from './terrain-grid.model';
 
-export { User, Farm, Membership, Field, AuditEvent };
+export { User, Farm, Membership, Field, AuditEvent, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
-const MODELS = [User, Farm, Membership, Field, AuditEvent];
+const MODELS = [User, Farm, Membership, Field, AuditEvent, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid];
 
 let initialised: Sequelize | null = null;
 

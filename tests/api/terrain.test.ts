@@ -27,7 +27,7 @@ let app: Express;
 
 beforeAll(async () => {
   initModels(sequelize);
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
+  jobs = await JobQueue.start(inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'terrain-secret-terrain' }), storage, jobs, clientDir: '/nonexistent' });
 });
 afterAll(async () => {
@@ -64,7 +64,7 @@ describe('terrain from an uploaded DEM', () => {
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
     expect(up.status).toBe(202);
     expect(up.body.jobId).toMatch(/^[0-9a-f-]{36}$/);
-    const done = await JobQueue.waitFor(sequelize, up.body.jobId);
+    const done = await JobQueue.waitFor(up.body.jobId);
     expect(done.state).toBe('done');
     const job = await agent.get(`/api/jobs/${up.body.jobId}`);
     expect(job.body).toMatchObject({ state: 'done', progress: 1 });
@@ -93,12 +93,12 @@ describe('terrain from an uploaded DEM', () => {
   it('recomputes a field’s figures when its boundary changes', async () => {
     const { farm, agent, fieldId } = await farmWithField();
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
-    await JobQueue.waitFor(sequelize, up.body.jobId);
+    await JobQueue.waitFor(up.body.jobId);
     const smaller = utmSquare(600100, 4684100, 100);
     const patch = await agent.patch(`/api/fields/${fieldId}`).send({ version: 0, geometry: smaller.geometry });
     expect(patch.status).toBe(200);
     const latest = await agent.get(`/api/farms/${farm.id}/elevation`);
-    await JobQueue.waitFor(sequelize, latest.body.latestJob.id);
+    await JobQueue.waitFor(latest.body.latestJob.id);
     const t = await agent.get(`/api/fields/${fieldId}/terrain`);
     expect(t.body.cellCount).toBe(20 * 20);
     expect(t.body.upToDate).toBe(true);
@@ -153,13 +153,13 @@ describe('terrain from an uploaded DEM', () => {
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
     const stranger = await signedIn(app, (await makeFarm(['farmer'])).users.farmer);
     expect((await stranger.get(`/api/jobs/${up.body.jobId}`)).status).toBe(404);
-    await JobQueue.waitFor(sequelize, up.body.jobId);
+    await JobQueue.waitFor(up.body.jobId);
   });
 
   it('uses the farm’s own slope-class breaks when set, and refuses broken ones', async () => {
     const { farm, agent, fieldId, users } = await farmWithField();
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
-    await JobQueue.waitFor(sequelize, up.body.jobId);
+    await JobQueue.waitFor(up.body.jobId);
     const def = (await agent.get(`/api/farms/${farm.id}/slope-classes`)).body;
     expect(def.custom).toBe(false);
     expect(def.classes[0]).toEqual({ name: 'nearly level', minPct: 0, maxPct: 2 });
@@ -168,7 +168,7 @@ describe('terrain from an uploaded DEM', () => {
     expect(gap.body.message).toMatch(/minPct/);
     const set = await agent.put(`/api/farms/${farm.id}/slope-classes`).send({ classes: [{ name: 'flat', minPct: 0, maxPct: 4 }, { name: 'sloping', minPct: 4, maxPct: null }] });
     expect(set.status).toBe(200);
-    await JobQueue.waitFor(sequelize, set.body.jobId);
+    await JobQueue.waitFor(set.body.jobId);
     const t = (await agent.get(`/api/fields/${fieldId}/terrain`)).body;
     // The 5 % plane lies wholly in "sloping" (4 % and over).
     expect(t.slopeClasses.map((c: { name: string; share: number }) => [c.name, c.share])).toEqual([['flat', 0], ['sloping', 1]]);
