@@ -1,52 +1,23 @@
 // DEM upload → background job with progress → per-field terrain figures and map layers.
-import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
-import proj4 from 'proj4';
-import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import { readdirSync } from 'node:fs';
 import request from 'supertest';
 import type { Express } from 'express';
-import { createSequelize } from '../../server/db/sequelize';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { initModels } from '../../server/models';
+import type { Sequelize } from 'sequelize';
 import { JobQueue } from '../../server/services/jobs/job-queue';
-import { LocalFileStorage } from '../../server/services/storage/file-storage';
-import { terrainJobHandler } from '../../server/services/farm-terrain.service';
-import { writeGeoTiff } from '../../server/services/terrain';
 import { makeFarm, signedIn } from '../helpers/test-app';
+import { planeDem, startTerrainApp, utmSquare } from '../helpers/terrain-fixtures';
 
-const UTM15N = '+proj=utm +zone=15 +datum=WGS84 +units=m +no_defs';
-const sequelize = createSequelize(inject('databaseUrl'));
-const uploads = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-uploads-'));
-const storage = new LocalFileStorage(uploads);
-let jobs: JobQueue;
+let ctx: Awaited<ReturnType<typeof startTerrainApp>>;
 let app: Express;
+let sequelize: Sequelize;
+let uploads: string;
 
 beforeAll(async () => {
-  initModels(sequelize);
-  jobs = await JobQueue.start(inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
-  app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'terrain-secret-terrain' }), storage, jobs, clientDir: '/nonexistent' });
+  ctx = await startTerrainApp({ worker: true });
+  ({ app, sequelize, uploads } = ctx);
 });
-afterAll(async () => {
-  await jobs.stop();
-  await sequelize.close();
-  rmSync(uploads, { recursive: true, force: true });
-});
-
-/** A plane rising 5 m per 100 m to the east: slope exactly 5 % everywhere (analytic). */
-function planeDem(originX = 600000, originY = 4684400, size = 80, cell = 5): Buffer {
-  const z = new Float32Array(size * size);
-  for (let r = 0; r < size; r++) for (let c = 0; c < size; c++) z[r * size + c] = 100 + 0.05 * (c + 0.5) * cell;
-  return Buffer.from(writeGeoTiff({ width: size, height: size, samples: z, originX, originY, cellSizeX: cell, cellSizeY: cell, epsg: 32615, nodata: -9999 }));
-}
-
-function utmSquare(e0: number, n0: number, side: number) {
-  const ring = [[e0, n0], [e0 + side, n0], [e0 + side, n0 + side], [e0, n0 + side], [e0, n0]].map((p) => proj4(UTM15N, 'WGS84', p));
-  return { type: 'Feature', properties: { name: 'Plane field' }, geometry: { type: 'Polygon', coordinates: [ring] } };
-}
+afterAll(() => ctx.close());
 
 async function farmWithField() {
   const made = await makeFarm(['farmer', 'advisor', 'landowner']);
