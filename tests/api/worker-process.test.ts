@@ -49,7 +49,7 @@ describe('a worker process on its own', () => {
     expect((await JobQueue.status(up.body.jobId))?.state).toBe('queued');
 
     const run = startWorker();
-    const done = await JobQueue.waitFor(up.body.jobId, 20_000);
+    const done = await JobQueue.waitFor(up.body.jobId, 25_000);
     expect(done.state, run.output()).toBe('done');
     const terrain = await farmer.get(`/api/fields/${fieldId}/terrain`);
     expect(terrain.status).toBe(200);
@@ -59,5 +59,5 @@ describe('a worker process on its own', () => {
     expect(await run.exited).toBe(0);
     worker = null;
     expect(run.output()).toMatch(/SIGTERM: stopping/);
-  }, 30_000);
+  }, 40_000);
 });
