@@ -2,6 +2,7 @@ import { Farm } from './farm.model';
 import { Membership } from './membership.model';
 import { SoilPhoto } from './soil-photo.model';
 import { SoilSample } from './soil-sample.model';
+import { FieldTerrain } from './field-terrain.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { MultiPolygon } from 'geojson';
 
@@ -41,5 +42,6 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });
     Field.hasMany(SoilSample, { foreignKey: 'fieldId', as: 'soilSamples' });
     Field.hasMany(SoilPhoto, { foreignKey: 'fieldId', as: 'soilPhotos' });
+    Field.hasOne(FieldTerrain, { foreignKey: 'fieldId', as: 'terrain' });
   }
 }

@@ -11,11 +11,16 @@ import { SoilSample } from './soil-sample.model';
 import { SoilPhoto } from './soil-photo.model';
 import { SoilMap } from './soil-map.model';
 import { SoilMapUnit } from './soil-map-unit.model';
+import { ElevationModel } from './elevation-model.model';
+import { ProcessingJob } from './processing-job.model';
+import { FieldTerrain } from './field-terrain.model';
+import { TerrainLayer } from './terrain-layer.model';
+import { TerrainGrid } from './terrain-grid.model';
 
-export { User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit };
+export { User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
-const MODELS = [User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit];
+const MODELS = [User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid];
 
 let initialised: Sequelize | null = null;
 
