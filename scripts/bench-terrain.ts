@@ -190,7 +190,7 @@ try {
     'labels" is the farm job\'s shape: Uint16 labels for 1 km² fields with lanes between them (81 fields at 4 M cells,',
     '361 at 16 M), every third with a typed 60 m slope length, so LS uses a second, field-broken accumulation.',
     '',
-    '## Targets (issue 4, item 8)',
+    '## Targets',
     '',
     ...results.map((r) => `- ${r.n}×${r.n}: whole runTerrain ${fmt(r.wholeMs)} ms (${fmt(r.wholeFarmMs)} ms with field labels); slope stage ${(r.slopeMs / r.gdalMs).toFixed(2)}× gdaldem's whole process; peak ${fmt(Math.max(...r.mem.map((x) => x.accounted)), 2)} B/cell beyond the DEM (${fmt(Math.max(...r.memFarm.map((x) => x.accounted)), 2)} with Uint16 field labels).`),
     '- Targets: < 2000 ms at 4 M cells; ≤ 1.5× gdaldem; < 10 B/cell. Before this layout the run kept 14 B/cell of',

@@ -1,5 +1,6 @@
 // Opens the database the app uses: DATABASE_URL when set, else the project-local cluster.
-// Migrations run on their own Sequelize instance, after PostGIS exists (RECIPES.md).
+// Migrations run on their own Sequelize instance, after PostGIS exists: a pool that connected
+// before the extension existed reads geometry as hex strings.
 import path from 'node:path';
 import type { Sequelize } from 'sequelize';
 import type { Config } from '../config';

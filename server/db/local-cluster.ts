@@ -1,5 +1,5 @@
 // A project-local PostgreSQL cluster on loopback, run as the `postgres` system user because
-// initdb and postgres refuse to run as root (RECIPES.md). Used by `npm start` and the tests.
+// initdb and postgres refuse to run as root, so they run as the postgres system user. Used by `npm start` and the tests.
 import { spawn, execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, chownSync, chmodSync, readFileSync, accessSync, constants, statSync } from 'node:fs';
 import path from 'node:path';
@@ -115,7 +115,7 @@ export async function startLocalCluster(opts: ClusterOptions): Promise<{ url: st
     const c = await psql('postgres', `CREATE DATABASE "${opts.database.replace(/"/g, '')}"`);
     if (c.code !== 0) throw new Error(`Could not create database ${opts.database}:\n${c.out}`);
   }
-  // PostGIS before the app's pool connects, or geometry comes back as hex (RECIPES.md).
+  // PostGIS before the app's pool connects, or geometry comes back as hex strings.
   const ext = await psql(opts.database, 'CREATE EXTENSION IF NOT EXISTS postgis');
   if (ext.code !== 0) throw new Error(`Could not enable PostGIS in ${opts.database}:\n${ext.out}`);
   return { url: connectionUrl(opts.port, opts.database), pg };

@@ -1,5 +1,5 @@
 // Runs the migrations in server/db/migrations with umzug. Its default loader cannot import
-// .ts files under vitest, so `resolve` does the import() itself (RECIPES.md).
+// .ts files under vitest, so `resolve` does the import() itself.
 import { Umzug, SequelizeStorage } from 'umzug';
 import type { QueryInterface, Sequelize } from 'sequelize';
 import { readdirSync } from 'node:fs';

@@ -1,5 +1,5 @@
 // Finds Debian's PostgreSQL server binaries and PostGIS, installing them with apt-get when
-// missing and running as root (RECIPES.md "A project-local PostgreSQL cluster").
+// missing and running as root.
 import { existsSync, readdirSync } from 'node:fs';
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';

@@ -10,7 +10,7 @@ export function rFromValue(value: number, units: 'si' | 'us' = 'si'): number {
 }
 
 /**
- * Entry point (DESIGN.md): R from mean annual precipitation P in mm (Renard & Freimund 1994,
+ * Entry point: R from mean annual precipitation P in mm (Renard & Freimund 1994,
  * J. Hydrol. 157:287) [memory].
  */
 export function rFromAnnualPrecipitation(annualPrecipitationMm: number): number {

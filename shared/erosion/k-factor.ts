@@ -50,7 +50,7 @@ export function tryKFactorNomograph(input: NomographInput): Result<KValue & { cl
   return succeed({ us, si: kUsToSi(us), clayPct, omUsedPct, warnings });
 }
 
-/** Entry point (DESIGN.md): nomograph K in US and SI units. Throws on misuse. */
+/** Entry point: nomograph K in US and SI units. Throws on misuse. */
 export function kFactorNomograph(input: NomographInput): KValue {
   assertFinite('siltVfsPct', input.siltVfsPct);
   assertFinite('sandPct', input.sandPct);

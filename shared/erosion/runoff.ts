@@ -97,7 +97,7 @@ export function retentionMm(cn: number): number {
   return 25400 / cn - 254;
 }
 
-/** Entry point (DESIGN.md): runoff depth in mm, Ia = 0.2 S (TR-55 eq. 2-3). */
+/** Entry point: runoff depth in mm, Ia = 0.2 S (TR-55 eq. 2-3). */
 export function curveNumberRunoff(args: { rainfallMm: number; cn: number }): number {
   assertNonNegative('rainfallMm', args.rainfallMm);
   const s = retentionMm(args.cn);

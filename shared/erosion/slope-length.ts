@@ -64,7 +64,7 @@ export type LsResult = { l: number; s: number; ls: number; m: number };
 
 /**
  * RUSLE LS for a uniform slope. Moderate rill/interrill ratio unless told otherwise.
- * Entry point (DESIGN.md): rusleLS({ slopePct, lengthM }) -> { l, s, ls }.
+ * Entry point: rusleLS({ slopePct, lengthM }) -> { l, s, ls }.
  */
 export function rusleLS(args: { slopePct: number; lengthM: number; rillRatio?: RillRatio }): LsResult {
   const { slopePct, lengthM, rillRatio = 'moderate' } = args;

@@ -12,7 +12,7 @@ export type Factors = {
   p: number;
 };
 
-/** Entry point (DESIGN.md): A in t/ha/yr from SI R and K. Throws on misuse (NaN, negative). */
+/** Entry point: A in t/ha/yr from SI R and K. Throws on misuse (NaN, negative). */
 export function soilLoss(f: Factors): number {
   for (const key of ['r', 'k', 'ls', 'c', 'p'] as const) assertNonNegative(key, f[key]);
   // AH-703 eq. 1-1: A = R · K · L · S · C · P

@@ -34,7 +34,7 @@ export function renormalise(sample: Separates): Separates {
 
 /** The SSM ch. 3 inequalities for each class; on 100 % data exactly one holds. */
 export const TEXTURE_RULES: Record<TextureClass, (s: Separates) => boolean> = {
-  // SSM ch. 3 texture triangle, as stated in REFERENCES.md "Soil texture"
+  // SSM ch. 3 texture triangle
   sand: ({ silt, clay }) => silt + 1.5 * clay < 15,
   'loamy sand': ({ silt, clay }) => silt + 1.5 * clay >= 15 && silt + 2 * clay < 30,
   'sandy loam': ({ sand, silt, clay }) =>
@@ -52,7 +52,7 @@ export const TEXTURE_RULES: Record<TextureClass, (s: Separates) => boolean> = {
 
 /**
  * USDA texture class (lower case) of a sample. The fractions are renormalised to 100 %.
- * Entry point (DESIGN.md). Throws only on misuse (NaN, negative, all zero).
+ * Entry point. Throws only on misuse (NaN, negative, all zero).
  */
 export function classifyTexture(sample: Separates): TextureClass {
   const s = renormalise(sample);

@@ -1,4 +1,4 @@
-// Payloads of the fields API (DESIGN.md "API contract"). Shared by the client forms and
+// Payloads of the fields API (the public API contract in DEVELOPERS.md). Shared by the client forms and
 // the server's validate() middleware.
 import { z } from 'zod';
 import { AreaGeometry } from './geojson';

@@ -28,7 +28,7 @@ describe('POST /api/estimate', () => {
     for (const key of ['r', 'k', 'l', 's', 'ls', 'c', 'p', 't']) expect(f[key].source.length).toBeGreaterThan(3);
     const a = f.r.value * f.k.value * f.ls.value * f.c.value * f.p.value;
     expect(res.body.soilLoss.tPerHaYr).toBeCloseTo(a, 6);
-    // 1 short ton/acre = 2.2417 t/ha (REFERENCES.md "Units").
+    // 1 short ton/acre = 2.2417 t/ha (AH-703 app. A units).
     expect(res.body.soilLoss.tonPerAcYr).toBeCloseTo(a / 2.2417, 2);
     expect(res.body.runoff.runoffIn).toBeCloseTo(2.89, 2);
     expect(res.body.cautions.join(' ')).toMatch(/sheet and rill/);

@@ -1,4 +1,4 @@
-// Each role against each field route (DESIGN.md "Users and roles").
+// Each role against each field route: rights are per farm and per role.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { makeFarm, makeTestApp, makeUser, signedIn, squareFeature } from '../helpers/test-app';

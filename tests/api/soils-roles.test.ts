@@ -1,5 +1,5 @@
-// Each role against each soils route (DESIGN.md "Users and roles"; issue 5 item 6: the advisor
-// edits soils): farmer and advisor change samples, photos and the soil map; a landowner reads
+// Each role against each soils route (the advisor
+// edits soils too): farmer and advisor change samples, photos and the soil map; a landowner reads
 // the samples, photos, map units and summary of fields they own; others get 404; nobody 401.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';

@@ -18,9 +18,9 @@ async function fieldWithAgent(role: 'farmer' | 'advisor' = 'farmer') {
 const lab = (sand: number, silt: number, clay: number, extra: Record<string, unknown> = {}) => ({ kind: 'lab', sandPct: sand, siltPct: silt, clayPct: clay, ...extra });
 
 describe('typed lab samples', () => {
-  // Each point checked against the SSM ch. 3 class inequalities (as in REFERENCES.md "Soil texture").
+  // Each point checked against the SSM ch. 3 class inequalities.
   const triangle: [number, number, number, string][] = [
-    [40, 40, 20, 'loam'], // SSM ch. 3; REFERENCES.md check value 40/40/20 → loam
+    [40, 40, 20, 'loam'], // SSM ch. 3 texture triangle: 40/40/20 → loam
     [92, 4, 4, 'sand'], // SSM ch. 3: silt + 1.5 clay = 10 < 15
     [82, 12, 6, 'loamy sand'], // SSM ch. 3: silt + 1.5 clay = 21 ≥ 15, silt + 2 clay = 24 < 30
     [65, 25, 10, 'sandy loam'], // SSM ch. 3: 7 ≤ clay < 20, sand > 52, silt + 2 clay ≥ 30
@@ -142,7 +142,7 @@ describe('feel tests', () => {
 });
 
 describe('drainage from depth to gray', () => {
-  // The field key in data/reference/drainage-key.json (REFERENCES.md "Drainage"): none within
+  // The field key in data/reference/drainage-key.json (one state's published field key): none within
   // 100 cm well; 50–100 moderately well; 25–50 somewhat poorly; < 25 cm poorly.
   const cases: [Record<string, unknown>, string, boolean][] = [
     [{ depthToGrayCm: 20 }, 'poorly drained', true],

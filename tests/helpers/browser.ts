@@ -1,4 +1,4 @@
-// Debian's Chromium driven by playwright-core (RECIPES.md "Browser tests"): never a
+// Debian's Chromium driven by playwright-core: never a
 // downloaded browser. The app under test is the real build in dist/ on an ephemeral port.
 import { chromium, type Browser } from 'playwright-core';
 import { existsSync } from 'node:fs';

@@ -1,5 +1,5 @@
 // One app per test file on the shared throwaway database, and small factories that make the
-// rows each test needs (STYLE.md: factories per test, not one global seed).
+// rows each test needs (factories per test, not one global seed).
 import { inject } from 'vitest';
 import request from 'supertest';
 import type { Express } from 'express';

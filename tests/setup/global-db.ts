@@ -1,6 +1,6 @@
 // Starts a throwaway PostgreSQL/PostGIS cluster for the whole test run in the system temp
 // folder (traversable by the postgres user wherever the checkout lives), migrates it, and
-// removes it afterwards (RECIPES.md "Tests").
+// removes it afterwards.
 import { mkdtempSync, rmSync, chmodSync } from 'node:fs';
 import { createServer } from 'node:net';
 import os from 'node:os';

@@ -71,7 +71,7 @@ describe('Desmet & Govers (1996) grid-cell L', () => {
   it('gives LS 0.414 for a ridge cell: D 10 m, no upslope area, 5 %', () => {
     const m = rusleLengthExponent(5);
     const l = desmetGoversL({ upslopeAreaM2: 0, cellSizeM: 10, flowDirFactor: 1, m });
-    expect(l * rusleSlopeFactor(5)).toBeCloseTo(0.414, 3); // REFERENCES.md check (Desmet & Govers 1996)
+    expect(l * rusleSlopeFactor(5)).toBeCloseTo(0.414, 3); // Desmet & Govers 1996: D 10 m, A_in 0, 5 % → 0.414
   });
   it('equals the 1-D segment formula exactly on a uniform plane (AH-703 eq. 4-6)', () => {
     const d = 10;

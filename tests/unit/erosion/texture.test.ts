@@ -13,7 +13,7 @@ import {
 
 describe('texture class from sand, silt and clay (SSM ch. 3)', () => {
   it('classes 40 % sand, 40 % silt, 20 % clay as loam', () => {
-    expect(classifyTexture({ sand: 40, silt: 40, clay: 20 })).toBe('loam'); // REFERENCES.md check, SSM ch. 3
+    expect(classifyTexture({ sand: 40, silt: 40, clay: 20 })).toBe('loam'); // SSM ch. 3 texture triangle
   });
 
   it.each([

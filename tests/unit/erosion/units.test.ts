@@ -3,7 +3,7 @@ import * as u from '../../../shared/erosion/units';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
-describe('SI ↔ US units (REFERENCES.md "Units"; AH-703 app. A)', () => {
+describe('SI ↔ US units (AH-703 app. A)', () => {
   it('uses 2.2417, 17.02 and 0.1317 for A, R and K, and 72.6 ft = 22.13 m', () => {
     expect(u.tonPerAcToTPerHa(1)).toBe(2.2417);
     expect(u.rUsToSi(1)).toBe(17.02);

@@ -11,7 +11,7 @@ describe('LS grid', () => {
   it('gives LS 0.414 for a 10 m ridge cell on a 5 % slope', () => {
     const grid = projectedDem({ width: 1, height: 1, elevationM: new Float32Array(1), cellSizeM: 10 });
     const ls = lsGrid({ grid, slopePct: Float32Array.of(5), contributingAreaM2: Float32Array.of(100), flowDir: Uint8Array.of(3) });
-    // REFERENCES.md "Grid LS for a DEM": D 10 m, A_in 0, 5 % → LS 0.414 (Desmet & Govers 1996) [pub]
+    // Desmet & Govers 1996 grid LS: D 10 m, A_in 0, 5 % → LS 0.414
     expect(ls[0]).toBeCloseTo(0.414, 3);
   });
 

@@ -9,7 +9,7 @@ describe('Horn slope', () => {
     const s = slopeHorn(dem);
     for (let r = 1; r < 8; r++) {
       for (let c = 1; c < 11; c++) {
-        // REFERENCES.md "Terrain algorithms": 100·√(0.05² + 0.02²) = 5.3852 % (Horn 1981) [pub]
+        // Horn 1981 on a plane: 100·√(0.05² + 0.02²) = 5.3852 %
         expect(s[r * 12 + c]).toBeCloseTo(5.3852, 3);
       }
     }

@@ -1,5 +1,5 @@
 // The 12 USDA texture classes as polygons on the texture triangle, cut from the whole triangle
-// by the SSM ch. 3 inequalities (REFERENCES.md "Soil texture", the same rules as
+// by the SSM ch. 3 inequalities (the same rules as
 // shared/erosion TEXTURE_RULES). Each class is one or two convex pieces; each piece is the
 // triangle clipped by half-planes, so the outlines are exact straight lines.
 import { TEXTURE_CLASSES, type Separates, type TextureClass } from '../../../../shared/erosion/texture';
@@ -13,7 +13,7 @@ const at = (h: HalfPlane, p: Separates) => (h.sand ?? 0) * p.sand + (h.silt ?? 0
 const atLeast = (key: keyof Separates, v: number): HalfPlane => ({ [key]: 1, k: -v });
 const below = (key: keyof Separates, v: number): HalfPlane => ({ [key]: -1, k: v });
 
-// SSM ch. 3 texture triangle, class by class as in REFERENCES.md "Soil texture".
+// SSM ch. 3 texture triangle, class by class.
 export const TEXTURE_PIECES: Record<TextureClass, HalfPlane[][]> = {
   sand: [[{ silt: -1, clay: -1.5, k: 15 }]],
   'loamy sand': [[{ silt: 1, clay: 1.5, k: -15 }, { silt: -1, clay: -2, k: 30 }]],
