@@ -77,10 +77,13 @@ export type FieldFeatureFilter = {
  */
 export async function selectFieldFeatureRows(sequelize: Sequelize, where: FieldFeatureFilter, transaction?: Transaction): Promise<FieldFeatureRow[]> {
   if (where.fieldIds !== undefined && where.fieldIds.length === 0) return [];
+  // Bind parameters, not replacements: this runs on every field list, and Sequelize's
+  // replacement escaping costs more CPU than PostgreSQL spends on the query.
   const conds: string[] = [];
-  if (where.farmId !== undefined) conds.push('f.farm_id = :farmId');
-  if (where.fieldIds !== undefined) conds.push('f.id IN (:fieldIds)');
-  if (where.ownerMembershipId !== undefined) conds.push('f.owner_membership_id = :ownerMembershipId');
+  const bind = { ...where, visibleToOwner: where.visibleToOwner ?? null };
+  if (where.farmId !== undefined) conds.push('f.farm_id = $farmId');
+  if (where.fieldIds !== undefined) conds.push('f.id = ANY($fieldIds::integer[])');
+  if (where.ownerMembershipId !== undefined) conds.push('f.owner_membership_id = $ownerMembershipId');
   const rows = await sequelize.query<{
     id: number; farm_id: number; name: string; geometry: string; centroid: string; area_m2: number; perimeter_m: number;
     owner_membership_id: number | null; version: number; updated_at: Date; overlaps: FieldOverlapRow[] | null;
@@ -94,11 +97,11 @@ export async function selectFieldFeatureRows(sequelize: Sequelize, where: FieldF
               CROSS JOIN LATERAL (SELECT ST_Area(ST_Intersection(o.geom, f.geom)::geography) AS area_m2) a
               WHERE o.farm_id = f.farm_id AND o.id <> f.id AND o.geom && f.geom
                 AND ST_Relate(o.geom, f.geom, 'T********')
-                AND (CAST(:visibleToOwner AS integer) IS NULL OR o.owner_membership_id = :visibleToOwner)
+                AND ($visibleToOwner::integer IS NULL OR o.owner_membership_id = $visibleToOwner::integer)
                 AND a.area_m2 > 1) ov ON true
       WHERE ${conds.join(' AND ') || 'true'}
       ORDER BY f.name, f.id`,
-    { replacements: { visibleToOwner: null, ...where }, type: QueryTypes.SELECT, transaction },
+    { bind, type: QueryTypes.SELECT, transaction },
   );
   return rows.map((r) => ({
     id: r.id,
