@@ -12,18 +12,18 @@ import { validate } from '../middleware/validate';
 import type { FileStorage } from '../services/storage/file-storage';
 import { fieldSoilSummary } from '../services/soils/field-soil-summary';
 import { fieldSoilMapUnits } from '../services/soils/field-soil-map';
-import { importSoilCsv, SOIL_CSV_LIMIT_BYTES } from '../services/soils/import-soil-csv.service';
+import { importSoilCsv } from '../services/soils/import-soil-csv.service';
 import { loadPhotoMembership, loadSampleMembership } from '../services/soils/soil-access';
 import { deleteSoilMap, setSoilMapMapping, soilMapInfo, uploadSoilMap } from '../services/soils/soil-map.service';
-import { deletePhoto, listPhotos, PHOTO_LIMIT_BYTES, photoFile, uploadPhoto } from '../services/soils/soil-photos.service';
+import { deletePhoto, listPhotos, photoFile, uploadPhoto } from '../services/soils/soil-photos.service';
 import { createSample, deleteSample, updateSample } from '../services/soils/soil-samples.service';
 import { querySamples } from '../services/soils/soil-sample-presenter';
-import { SOIL_MAP_LIMIT_BYTES } from '../services/soils/read-soil-map-file';
+import { PHOTO_MAX_BYTES, SOIL_CSV_MAX_BYTES, SOIL_MAP_MAX_BYTES } from '../../shared/limits';
 
 // Memory storage: uploads are checked in memory and stored only under server-made keys.
-const csvUpload = singleUpload(SOIL_CSV_LIMIT_BYTES, 'soil sample CSV');
-const photoUpload = singleUpload(PHOTO_LIMIT_BYTES, 'photo');
-const mapUpload = singleUpload(SOIL_MAP_LIMIT_BYTES, 'soil map');
+const csvUpload = singleUpload(SOIL_CSV_MAX_BYTES, 'soil sample CSV');
+const photoUpload = singleUpload(PHOTO_MAX_BYTES, 'photo');
+const mapUpload = singleUpload(SOIL_MAP_MAX_BYTES, 'soil map');
 
 /** Who may change soils on a farm (issue 5 item 6: the advisor edits soils too). */
 const editsSoils = requireRole('farmer', 'advisor');

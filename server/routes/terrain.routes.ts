@@ -6,7 +6,8 @@ import { loadFieldMembership } from '../middleware/field-access';
 import { badRequest, HttpError, notFound } from '../lib/http-error';
 import type { FileStorage } from '../services/storage/file-storage';
 import { JobQueue } from '../services/jobs/job-queue';
-import { acceptDem, DEM_LIMIT_BYTES } from '../services/elevation-models.service';
+import { acceptDem } from '../services/elevation-models.service';
+import { DEM_MAX_BYTES } from '../../shared/limits';
 import { LAYER_LABELS, farmSlopeClasses } from '../services/farm-terrain.service';
 import { parseSlopeClasses, layerLegend } from '../services/terrain';
 import { keptGrids, renderSoilLossLayer } from '../services/soil-loss-layer.service';
@@ -14,7 +15,7 @@ import { listSeasons, resolveSeason } from '../services/seasons.service';
 import { afterInputsChange } from '../services/input-changes.service';
 import type { LayerKind } from '../services/terrain';
 
-const upload = singleUpload(DEM_LIMIT_BYTES, 'elevation model');
+const upload = singleUpload(DEM_MAX_BYTES, 'elevation model');
 
 type Deps = { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue };
 

@@ -7,8 +7,6 @@ import { parseSoilCsv } from './parse-soil-csv';
 import { insertSample } from './soil-samples.service';
 import { querySamples } from './soil-sample-presenter';
 
-export const SOIL_CSV_LIMIT_BYTES = 1024 * 1024;
-
 export async function importSoilCsv(
   sequelize: Sequelize,
   actor: { userId: number },

@@ -8,8 +8,6 @@ import { newKey, type FileStorage } from '../storage/file-storage';
 import { detectImageType } from './detect-image-type';
 import { makeThumbnail } from './make-thumbnail';
 
-export const PHOTO_LIMIT_BYTES = 10 * 1024 * 1024;
-
 type Deps = { sequelize: Sequelize; storage: FileStorage };
 type Row = {
   id: number;
