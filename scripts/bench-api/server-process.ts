@@ -44,7 +44,10 @@ export async function startServer(log: (line: string) => void): Promise<ServerPr
     child.stderr!.on('data', onData);
     child.once('exit', (code) => reject(new Error(`the server exited (code ${code}) before it was ready:\n${output.slice(-2000)}`)));
   });
+  let stopping = false;
   const stop = async () => {
+    // Requests still running when the server stops fail noisily; that is not news.
+    stopping = true;
     if (child.exitCode === null) {
       child.kill('SIGTERM');
       await exited(child);
@@ -61,6 +64,8 @@ export async function startServer(log: (line: string) => void): Promise<ServerPr
   child.stderr!.removeAllListeners('data');
   // Keep draining the pipes so a chatty server never blocks on a full pipe.
   child.stdout!.resume();
-  child.stderr!.on('data', (d: Buffer) => process.stderr.write(`  server: ${d.toString()}`));
+  child.stderr!.on('data', (d: Buffer) => {
+    if (!stopping) process.stderr.write(`  server: ${d.toString()}`);
+  });
   return { baseUrl: `http://127.0.0.1:${port}`, databaseUrl: connectionUrl(pgPort, 'fieldshed'), stop };
 }
