@@ -9,16 +9,16 @@ export async function membershipOf(userId: number, farmId: number): Promise<Memb
   return Membership.findOne({ where: { userId, farmId } });
 }
 
-/** The caller's membership on the farm: from those requireUser read with the user, else from the database. */
-export async function callerMembership(req: Request, farmId: number): Promise<Membership | null> {
-  if (req.memberships) return req.memberships.find((m) => m.farmId === farmId) ?? null;
-  return membershipOf(req.user!.id, farmId);
+/** The caller's membership on the farm, from those requireUser read with the user. */
+export function callerMembership(req: Request, farmId: number): Membership | null {
+  const row = req.memberships?.find((m) => m.farmId === farmId);
+  return row ? Membership.fromJson(row) : null;
 }
 
 /** Sets req.membership for :farmId; non-members get 404, so farms' existence does not leak. */
 export const loadFarmMembership: RequestHandler = async (req, _res, next) => {
   const farmId = parseId(req.params.farmId as string | undefined, 'farmId');
-  const m = await callerMembership(req, farmId);
+  const m = callerMembership(req, farmId);
   if (!m) throw notFound('That farm');
   req.membership = m;
   next();

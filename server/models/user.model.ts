@@ -28,11 +28,12 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   }
 
   /**
-   * The signed-in user and their memberships, read on every request in one round trip: the farm
-   * and field access checks then need no query of their own. A plain SELECT mapped onto the
+   * The signed-in user and their memberships (as rows: an advisor may have hundreds, and a route
+   * needs one), read on every request in one round trip: the farm and field access checks then
+   * need no query of their own. A plain SELECT mapped onto the
    * model, because findByPk's generic query path costs the API more than the query itself.
    */
-  static async findSignedIn(id: number): Promise<{ user: User; memberships: Membership[] } | null> {
+  static async findSignedIn(id: number): Promise<{ user: User; memberships: MembershipJson[] } | null> {
     const [row] = await User.sequelize!.query<InferAttributes<User> & { memberships: MembershipJson[] }>(
       `SELECT u.id, u.email, u.name, u.password_hash AS "passwordHash", u.units, u.is_admin AS "isAdmin",
               u.created_at AS "createdAt", u.updated_at AS "updatedAt",
@@ -44,7 +45,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
     );
     if (!row) return null;
     const { memberships, ...attributes } = row;
-    return { user: User.build(attributes, { isNewRecord: false, raw: true }), memberships: memberships.map(Membership.fromJson) };
+    return { user: User.build(attributes, { isNewRecord: false, raw: true }), memberships };
   }
 
   static associate(): void {
