@@ -19,6 +19,7 @@ import { soilsRoutes } from './routes/soils.routes';
 import { seasonsRoutes } from './routes/seasons.routes';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
+import { JSON_BODY_MAX_BYTES } from '../shared/limits';
 
 export type AppOptions = {
   sequelize: Sequelize;
@@ -48,12 +49,12 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
       },
     }),
   );
-  app.use(express.json({ limit: '2mb' }));
+  app.use(express.json({ limit: JSON_BODY_MAX_BYTES }));
   app.use(cookieParser());
 
   const api = express.Router();
   api.get('/health', async (_req, res) => {
-    const db = await sequelize.query('SELECT 1').then(() => true, () => false);
+    const db = await sequelize.authenticate().then(() => true, () => false);
     res.status(db ? 200 : 503).json({ ok: db, db });
   });
   api.get('/config', (_req, res) => {

@@ -4,13 +4,14 @@ import { User } from '../models';
 import { unauthorized } from '../lib/http-error';
 import { readSession, SESSION_COOKIE } from '../services/sessions';
 
-/** Loads req.user from the session cookie; 401 when nobody is signed in. */
+/** Loads req.user (and req.memberships) from the session cookie; 401 when nobody is signed in. */
 export function requireUser(config: Config): RequestHandler {
   return async (req, _res, next) => {
     const id = readSession(req.cookies?.[SESSION_COOKIE], config);
-    const user = id ? await User.findByPk(id) : null;
-    if (!user) throw unauthorized();
-    req.user = user;
+    const signedIn = id ? await User.findSignedIn(id) : null;
+    if (!signedIn) throw unauthorized();
+    req.user = signedIn.user;
+    req.memberships = signedIn.memberships;
     next();
   };
 }

@@ -1,5 +1,5 @@
 // Every farm route checks the caller's role on that farm (DESIGN.md "Users and roles").
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { Membership } from '../models';
 import type { Role } from '../../shared/schemas/auth';
 import { forbidden, notFound } from '../lib/http-error';
@@ -9,10 +9,16 @@ export async function membershipOf(userId: number, farmId: number): Promise<Memb
   return Membership.findOne({ where: { userId, farmId } });
 }
 
+/** The caller's membership on the farm, from those requireUser read with the user. */
+export function callerMembership(req: Request, farmId: number): Membership | null {
+  const row = req.memberships?.find((m) => m.farmId === farmId);
+  return row ? Membership.fromJson(row) : null;
+}
+
 /** Sets req.membership for :farmId; non-members get 404, so farms' existence does not leak. */
 export const loadFarmMembership: RequestHandler = async (req, _res, next) => {
   const farmId = parseId(req.params.farmId as string | undefined, 'farmId');
-  const m = await membershipOf(req.user!.id, farmId);
+  const m = callerMembership(req, farmId);
   if (!m) throw notFound('That farm');
   req.membership = m;
   next();

@@ -3,14 +3,15 @@
 import type { RequestHandler } from 'express';
 import multer from 'multer';
 import { badRequest, tooLarge } from '../lib/http-error';
+import { BYTES_PER_KIB, BYTES_PER_MIB } from '../../shared/limits';
 
 export function singleUpload(limitBytes: number, what: string): RequestHandler {
   const handler = multer({ storage: multer.memoryStorage(), limits: { fileSize: limitBytes, files: 1 } }).single('file');
-  const mb = limitBytes / (1024 * 1024);
+  const limitMib = limitBytes / BYTES_PER_MIB;
   return (req, res, next) =>
     handler(req, res, (err?: unknown) => {
       if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
-        next(tooLarge(`The ${what} is larger than the ${mb >= 1 ? `${mb} MB` : `${limitBytes / 1024} kB`} limit.`));
+        next(tooLarge(`The ${what} is larger than the ${limitMib >= 1 ? `${limitMib} MB` : `${limitBytes / BYTES_PER_KIB} kB`} limit.`));
         return;
       }
       next(err);

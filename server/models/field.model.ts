@@ -37,6 +37,14 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
     );
   }
 
+  /**
+   * A boundary as Sequelize writes it (ST_GeomFromGeoJSON), its CRS named so PostGIS stores
+   * SRID 4326 whatever its default for GeoJSON without one.
+   */
+  static storedGeometry(geometry: MultiPolygon): MultiPolygon {
+    return { ...geometry, crs: { type: 'name', properties: { name: 'EPSG:4326' } } } as MultiPolygon;
+  }
+
   static associate(): void {
     Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });

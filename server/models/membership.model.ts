@@ -3,6 +3,8 @@ import { Farm } from './farm.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { Role } from '../../shared/schemas/auth';
 
+export type MembershipJson = { id: number; userId: number; farmId: number; role: Role; createdAt: string; updatedAt: string };
+
 /** A person's role on one farm: rights are per farm (DESIGN.md "Users and roles"). */
 export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {
   declare id: CreationOptional<number>;
@@ -24,6 +26,11 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
       },
       { sequelize, tableName: 'memberships' },
     );
+  }
+
+  /** A membership row as json_build_object gives it (dates as ISO text), as a model instance. */
+  static fromJson(row: MembershipJson): Membership {
+    return Membership.build({ ...row, createdAt: new Date(row.createdAt), updatedAt: new Date(row.updatedAt) }, { isNewRecord: false, raw: true });
   }
 
   static associate(): void {

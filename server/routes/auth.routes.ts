@@ -5,8 +5,8 @@ import type { Config } from '../config';
 import { Login, Register, UpdateMe } from '../../shared/schemas/auth';
 import { validate } from '../middleware/validate';
 import { requireUser } from '../middleware/auth';
-import { HttpError } from '../lib/http-error';
-import { checkCredentials, presentUser, register } from '../services/auth.service';
+import { register, signIn, updateProfile } from '../services/auth.service';
+import { presentUser } from '../presenters/user.presenter';
 import { clearSession, issueSession } from '../services/sessions';
 
 export function authRoutes(sequelize: Sequelize, config: Config): Router {
@@ -30,8 +30,7 @@ export function authRoutes(sequelize: Sequelize, config: Config): Router {
   });
 
   r.post('/login', loginLimit, validate(Login), async (req, res) => {
-    const user = await checkCredentials(req.body.email, req.body.password);
-    if (!user) throw new HttpError(401, 'bad_credentials', 'That e-mail and password do not match an account.');
+    const user = await signIn(req.body.email, req.body.password);
     issueSession(res, config, user.id);
     res.json({ user: presentUser(user) });
   });
@@ -46,8 +45,7 @@ export function authRoutes(sequelize: Sequelize, config: Config): Router {
   });
 
   r.patch('/me', requireUser(config), validate(UpdateMe), async (req, res) => {
-    await req.user!.update(req.body);
-    res.json({ user: presentUser(req.user!) });
+    res.json({ user: presentUser(await updateProfile(req.user!, req.body)) });
   });
   return r;
 }

@@ -1,16 +1,13 @@
 import { Router } from 'express';
 import { EstimateInput } from '../../shared/schemas/estimate';
-import { estimate } from '../../shared/erosion';
 import { validate } from '../middleware/validate';
-import { invalid } from '../lib/http-error';
+import { runEstimate } from '../services/estimate.service';
 
-/** POST /api/estimate: the engine on typed inputs, without a field (DESIGN.md API contract). */
+/** POST /api/estimate: the engine on typed inputs, without a field. */
 export function estimateRoutes(): Router {
   const r = Router();
   r.post('/', validate(EstimateInput), (req, res) => {
-    const result = estimate(req.body);
-    if (!result.ok) throw invalid('cannot_estimate', result.field ? `${result.field}: ${result.reason}` : result.reason, { field: result.field ?? null });
-    res.json(result);
+    res.json(runEstimate(req.body));
   });
   return r;
 }

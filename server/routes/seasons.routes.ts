@@ -8,12 +8,13 @@ import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
 import { badRequest, HttpError, notFound } from '../lib/http-error';
 
-const recordUpload = singleUpload(RAINFALL_CSV_LIMIT_BYTES, 'rainfall record');
+const recordUpload = singleUpload(RAINFALL_RECORD_MAX_BYTES, 'rainfall record');
 import { Farm, Membership } from '../models';
-import { queryFields } from '../services/field-presenter';
+import { listFieldFeatures } from '../services/fields.service';
 import { ensureSeason, findSeason, getCropping, listSeasons, putCropping, resolveSeason } from '../services/seasons.service';
 import { getClimate, getGround, putClimate, putClimateFromRecord, putGround } from '../services/climate-ground.service';
-import { RAINFALL_CSV_LIMIT_BYTES, rFromRainfallCsv } from '../services/rainfall-record';
+import { rFromRainfallCsv } from '../services/rainfall-record';
+import { RAINFALL_RECORD_MAX_BYTES } from '../../shared/limits';
 import { afterInputsChange } from '../services/input-changes.service';
 import type { JobQueue } from '../services/jobs/job-queue';
 import { assessField } from '../services/assessment.service';
@@ -29,7 +30,7 @@ function seasonParam(req: Request): string | undefined {
 
 async function fieldOf(sequelize: Sequelize, req: Request, fieldId: number) {
   const m = req.membership!;
-  const [f] = await queryFields(sequelize, { fieldIds: [fieldId], ...(m.role === 'landowner' ? { visibleToOwner: m.id } : {}) });
+  const [f] = await listFieldFeatures(sequelize, { fieldIds: [fieldId], ...(m.role === 'landowner' ? { visibleToOwner: m.id } : {}) });
   if (!f) throw notFound('That field');
   return f;
 }

@@ -8,11 +8,11 @@ import { requireFile, singleUpload } from '../middleware/upload';
 import { validate } from '../middleware/validate';
 import { presentSoilMap, presentSoilMapUpload } from '../presenters/soil-map.presenter';
 import { fieldSoilMapUnits } from '../services/soils/field-soil-map';
-import { SOIL_MAP_LIMIT_BYTES } from '../services/soils/read-soil-map-file';
+import { SOIL_MAP_MAX_BYTES } from '../../shared/limits';
 import { deleteSoilMap, setSoilMapMapping, soilMapInfo, uploadSoilMap } from '../services/soils/soil-map.service';
 import { actorOf, editsSoils, fieldIdOf } from './soils-route-helpers';
 
-const mapUpload = singleUpload(SOIL_MAP_LIMIT_BYTES, 'soil map');
+const mapUpload = singleUpload(SOIL_MAP_MAX_BYTES, 'soil map');
 
 export function soilMapRoutes(sequelize: Sequelize): Router {
   const r = Router();

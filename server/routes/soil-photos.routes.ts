@@ -6,10 +6,11 @@ import { loadPhotoMembership } from '../middleware/soil-access';
 import { requireFile, singleUpload } from '../middleware/upload';
 import { presentPhoto, presentPhotos } from '../presenters/soil-photo.presenter';
 import type { FileStorage } from '../services/storage/file-storage';
-import { deletePhoto, listPhotos, PHOTO_LIMIT_BYTES, photoFile, uploadPhoto } from '../services/soils/soil-photos.service';
+import { deletePhoto, listPhotos, photoFile, uploadPhoto } from '../services/soils/soil-photos.service';
+import { PHOTO_MAX_BYTES } from '../../shared/limits';
 import { actorOf, editsSoils, fieldIdOf } from './soils-route-helpers';
 
-const photoUpload = singleUpload(PHOTO_LIMIT_BYTES, 'photo');
+const photoUpload = singleUpload(PHOTO_MAX_BYTES, 'photo');
 
 export function soilPhotosRoutes(deps: { sequelize: Sequelize; storage: FileStorage }): Router {
   const r = Router();

@@ -7,12 +7,13 @@ import { loadSampleMembership } from '../middleware/soil-access';
 import { requireFile, singleUpload } from '../middleware/upload';
 import { validate } from '../middleware/validate';
 import { presentSample, presentSamples } from '../presenters/soil-sample.presenter';
-import { importSoilCsv, SOIL_CSV_LIMIT_BYTES } from '../services/soils/import-soil-csv.service';
+import { importSoilCsv } from '../services/soils/import-soil-csv.service';
+import { SOIL_CSV_MAX_BYTES } from '../../shared/limits';
 import { createSample, deleteSample, listSamples, updateSample } from '../services/soils/soil-samples.service';
 import { actorOf, editsSoils, fieldIdOf } from './soils-route-helpers';
 
 // Memory storage: uploads are checked in memory and stored only under server-made keys.
-const csvUpload = singleUpload(SOIL_CSV_LIMIT_BYTES, 'soil sample CSV');
+const csvUpload = singleUpload(SOIL_CSV_MAX_BYTES, 'soil sample CSV');
 
 export function soilSamplesRoutes(sequelize: Sequelize): Router {
   const r = Router();

@@ -9,14 +9,15 @@ import { loadJobForMember } from '../middleware/job-access';
 import { badRequest } from '../lib/http-error';
 import type { FileStorage } from '../services/storage/file-storage';
 import type { JobQueue } from '../services/jobs/job-queue';
-import { acceptDem, DEM_LIMIT_BYTES, farmElevation } from '../services/elevation-models.service';
+import { acceptDem, farmElevation } from '../services/elevation-models.service';
 import { farmLayers, layerImage } from '../services/terrain-layers.service';
 import { setSlopeClasses, slopeClassesOfFarm } from '../services/slope-classes.service';
 import { fieldTerrain } from '../services/field-terrain.service';
 import { presentFarmElevation, presentFarmLayers, presentFieldTerrain } from '../presenters/terrain.presenter';
 import { presentJob } from '../presenters/job.presenter';
+import { DEM_MAX_BYTES } from '../../shared/limits';
 
-const upload = singleUpload(DEM_LIMIT_BYTES, 'elevation model');
+const upload = singleUpload(DEM_MAX_BYTES, 'elevation model');
 
 type Deps = { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue };
 

@@ -1,22 +1,26 @@
 import bcrypt from 'bcryptjs';
 import type { Sequelize } from 'sequelize';
 import { User, Farm, Membership } from '../models';
-import type { Register, User as UserDto } from '../../shared/schemas/auth';
-import { conflict } from '../lib/http-error';
+import type { Register } from '../../shared/schemas/auth';
+import { conflict, HttpError } from '../lib/http-error';
 import { recordEvent } from './audit';
-
-export const presentUser = (u: User): UserDto => ({ id: u.id, email: u.email, name: u.name, units: u.units, isAdmin: u.isAdmin });
 
 export async function hashPassword(password: string): Promise<string> {
   return bcrypt.hash(password, 10);
 }
 
-/** The user when email and password match, else null (same answer for either mistake). */
-export async function checkCredentials(email: string, password: string): Promise<User | null> {
+/** The user when email and password match; 401 otherwise, the same answer for either mistake. */
+export async function signIn(email: string, password: string): Promise<User> {
   const user = await User.findOne({ where: { email: email.toLowerCase() } });
   // Compare against a dummy hash when there is no user so timing does not tell them apart.
   const ok = await bcrypt.compare(password, user?.passwordHash ?? '$2a$10$abcdefghijklmnopqrstuuWQ4pnn6D6kkXbo.b4CiZ0m0r0Em1uyS');
-  return user && ok ? user : null;
+  if (!user || !ok) throw new HttpError(401, 'bad_credentials', 'That e-mail and password do not match an account.');
+  return user;
+}
+
+/** The signed-in user's own settings (display units, name). */
+export async function updateProfile(user: User, input: { units?: User['units']; name?: string }): Promise<User> {
+  return user.update(input);
 }
 
 /** A new user with a new farm on which they are the farmer. */

@@ -4,7 +4,7 @@
 import type { Sequelize } from 'sequelize';
 import type { Board, BoardRow, FieldAssessment } from '../../shared/schemas/assessment';
 import type { FieldFeature } from '../../shared/schemas/field';
-import { queryFields } from './field-presenter';
+import { listFieldFeatures } from './fields.service';
 import { assessField } from './assessment.service';
 
 function reasonsFor(a: FieldAssessment): string[] {
@@ -56,7 +56,7 @@ export async function farmBoard(
   season: { id: number; label: string },
   only?: { ownerMembershipId: number },
 ): Promise<Board> {
-  const fields: FieldFeature[] = await queryFields(sequelize, { farmId: farm.id, ...(only ? { ownerMembershipId: only.ownerMembershipId } : {}) });
+  const fields: FieldFeature[] = await listFieldFeatures(sequelize, { farmId: farm.id, ...(only ? { ownerMembershipId: only.ownerMembershipId } : {}) });
   const rows: BoardRow[] = [];
   for (const f of fields) rows.push(toRow(await assessField(sequelize, f, season), farm.name));
   return { season: season.label, rows: rankRows(rows) };

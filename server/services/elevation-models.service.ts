@@ -11,8 +11,6 @@ import { newKey, type FileStorage } from './storage/file-storage';
 import type { JobQueue } from './jobs/job-queue';
 import { recordEvent } from './audit';
 
-export const DEM_LIMIT_BYTES = 200 * 1024 * 1024;
-
 /** The grid's outline in WGS84, sampled along its edges (a projected square is curved in lon/lat). */
 export function demBoundsWgs84(dem: DemGrid): { ok: true; ring: [number, number][] } | { ok: false; reason: string } {
   const conv = converterBetween(dem.epsg, 4326);

@@ -11,7 +11,7 @@ import type { FileStorage } from './storage/file-storage';
 import { newKey } from './storage/file-storage';
 import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats, converterBetween, rasterisePolygon, LAYER_LABELS } from './terrain';
 import type { BoundsWgs84, LayerKind, LegendEntry, RenderValues } from './terrain';
-import { queryFields } from './field-presenter';
+import { listFieldFeatures } from './fields.service';
 import type { JobHandler } from './jobs/job-queue';
 import { farmSlopeClasses } from './slope-classes.service';
 import { afterInputsChange } from './input-changes.service';
@@ -35,7 +35,7 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
     const dem = read.dem;
     const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
     // Each field's cells carry its label, so overland flow starts afresh at its border.
-    const fields = await queryFields(sequelize, { farmId: job.farmId });
+    const fields = await listFieldFeatures(sequelize, { farmId: job.farmId });
     if (fields.length > MAX_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_FIELDS}.`);
     const labels = new Uint16Array(dem.width * dem.height);
     const ringsByField = new Map<number, Array<Array<[number, number]>>>();

@@ -1,15 +1,38 @@
-// Create, change and remove fields: one transaction each, with the version check and an
-// audit event. Routes call these; they never see req/res.
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+// Fields: list, create, change and remove, each write in one transaction with the version check
+// and an audit event, followed by what an input change calls for (terrain run, assessments).
+// Routes call these; they never see req/res.
+import type { Sequelize, Transaction } from 'sequelize';
 import { FieldName, type FieldFeature, type FieldUpdate } from '../../shared/schemas/field';
 import type { AreaGeometry } from '../../shared/schemas/geojson';
-import { Field, Membership } from '../models';
+import { Field, Membership, SoilPhoto } from '../models';
+import { selectFieldFeatureRows, type FieldFeatureFilter } from '../models/field.queries';
+import { presentField } from '../presenters/field.presenter';
 import { conflict, invalid, notFound } from '../lib/http-error';
 import { checkGeometry } from './field-geometry';
-import { queryFields } from './field-presenter';
 import { recordEvent } from './audit';
+import { afterInputsChange, type InputChangeDeps } from './input-changes.service';
+import type { FileStorage } from './storage/file-storage';
 
 type Actor = { userId: number };
+type FieldInput = { geometry: AreaGeometry; name?: string | null; ownerMembershipId?: number | null };
+
+/** Fields as API Features: of a farm, some ids, or one landowner's (see FieldFeatureFilter). */
+export async function listFieldFeatures(sequelize: Sequelize, where: FieldFeatureFilter, transaction?: Transaction): Promise<FieldFeature[]> {
+  return (await selectFieldFeatureRows(sequelize, where, transaction)).map(presentField);
+}
+
+/** A farm's fields as the member sees them: a landowner only their own, with overlaps among those. */
+export async function listFarmFieldsFor(sequelize: Sequelize, member: Membership): Promise<FieldFeature[]> {
+  const own = member.role === 'landowner' ? { ownerMembershipId: member.id, visibleToOwner: member.id } : {};
+  return listFieldFeatures(sequelize, { farmId: member.farmId, ...own });
+}
+
+/** One field as the member sees it (field-access has already checked they may). */
+export async function getFieldFor(sequelize: Sequelize, fieldId: number, member: Membership): Promise<FieldFeature> {
+  const [f] = await listFieldFeatures(sequelize, { fieldIds: [fieldId], ...(member.role === 'landowner' ? { visibleToOwner: member.id } : {}) });
+  if (!f) throw notFound('That field');
+  return f;
+}
 
 async function nextDefaultName(farmId: number, transaction: Transaction): Promise<string> {
   const n = await Field.count({ where: { farmId }, transaction });
@@ -31,95 +54,84 @@ async function measured(sequelize: Sequelize, geometry: AreaGeometry, transactio
 }
 
 /** Inserts one field inside the caller's transaction; throws HttpError on bad geometry. */
-export async function insertField(
-  sequelize: Sequelize,
-  actor: Actor,
-  farmId: number,
-  input: { geometry: AreaGeometry; name?: string | null; ownerMembershipId?: number | null },
-  transaction: Transaction,
-): Promise<number> {
+export async function insertField(sequelize: Sequelize, actor: Actor, farmId: number, input: FieldInput, transaction: Transaction): Promise<number> {
   const g = await measured(sequelize, input.geometry, transaction);
   await checkOwner(farmId, input.ownerMembershipId, transaction);
   // Imported names come from files: one that is not a usable name gives way to the default.
   const given = FieldName.safeParse(input.name ?? '');
   const name = given.success ? given.data : await nextDefaultName(farmId, transaction);
-  const [row] = await sequelize.query<{ id: number }>(
-    `INSERT INTO fields (farm_id, name, geom, area_m2, perimeter_m, owner_membership_id)
-     VALUES (:farmId, :name, ST_SetSRID(ST_GeomFromGeoJSON(:gj), 4326), :areaM2, :perimeterM, :owner)
-     RETURNING id`,
-    {
-      replacements: { farmId, name, gj: JSON.stringify(g.geometry), areaM2: g.areaM2, perimeterM: g.perimeterM, owner: input.ownerMembershipId ?? null },
-      type: QueryTypes.SELECT,
-      transaction,
-    },
+  const field = await Field.create(
+    { farmId, name, geom: Field.storedGeometry(g.geometry), areaM2: g.areaM2, perimeterM: g.perimeterM, ownerMembershipId: input.ownerMembershipId ?? null },
+    { transaction },
   );
-  await recordEvent({ userId: actor.userId, farmId, entity: 'field', entityId: row.id, action: 'created', detail: { name, areaM2: g.areaM2 } }, transaction);
-  return row.id;
+  await recordEvent({ userId: actor.userId, farmId, entity: 'field', entityId: field.id, action: 'created', detail: { name, areaM2: g.areaM2 } }, transaction);
+  return field.id;
 }
 
-export async function createField(
-  sequelize: Sequelize,
-  actor: Actor,
-  farmId: number,
-  input: { geometry: AreaGeometry; name?: string | null; ownerMembershipId?: number | null },
-): Promise<FieldFeature> {
-  return sequelize.transaction(async (t) => {
+/** A new field; its farm's terrain and assessments follow the new boundary. */
+export async function createField(deps: InputChangeDeps, actor: Actor, farmId: number, input: FieldInput): Promise<FieldFeature> {
+  const { sequelize } = deps;
+  const feature = await sequelize.transaction(async (t) => {
     const id = await insertField(sequelize, actor, farmId, input, t);
-    const [f] = await queryFields(sequelize, { fieldIds: [id] }, t);
+    const [f] = await listFieldFeatures(sequelize, { fieldIds: [id] }, t);
     return f;
   });
+  await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: [feature.id] }, actor);
+  return feature;
 }
 
-export async function updateField(sequelize: Sequelize, actor: Actor, fieldId: number, patch: FieldUpdate): Promise<FieldFeature> {
-  return sequelize.transaction(async (t) => {
+/** Changes name, boundary or owner at the version the caller read (409 when stale). */
+export async function updateField(deps: InputChangeDeps, actor: Actor, fieldId: number, patch: FieldUpdate): Promise<FieldFeature> {
+  const { sequelize } = deps;
+  const updated = await sequelize.transaction(async (t) => {
     const field = await Field.findByPk(fieldId, { transaction: t, lock: t.LOCK.UPDATE });
     if (!field) throw notFound('That field');
     if (field.version !== patch.version) {
-      const [current] = await queryFields(sequelize, { fieldIds: [fieldId] }, t);
+      const [current] = await listFieldFeatures(sequelize, { fieldIds: [fieldId] }, t);
       throw conflict(
         'stale_version',
         `Someone changed this field since you opened it (you had version ${patch.version}, it is now ${field.version}). Reload it and make your change again.`,
         { current },
       );
     }
-    const sets: string[] = ['version = version + 1', 'updated_at = now()'];
-    const rep: Record<string, unknown> = { id: fieldId };
+    const changes: Partial<Pick<Field, 'name' | 'geom' | 'areaM2' | 'perimeterM' | 'ownerMembershipId'>> = {};
     const changed: string[] = [];
     if (patch.name !== undefined) {
-      sets.push('name = :name');
-      rep.name = patch.name;
+      changes.name = patch.name;
       changed.push('name');
     }
     if (patch.geometry !== undefined) {
       const g = await measured(sequelize, patch.geometry, t);
-      sets.push('geom = ST_SetSRID(ST_GeomFromGeoJSON(:gj), 4326)', 'area_m2 = :areaM2', 'perimeter_m = :perimeterM');
-      Object.assign(rep, { gj: JSON.stringify(g.geometry), areaM2: g.areaM2, perimeterM: g.perimeterM });
+      Object.assign(changes, { geom: Field.storedGeometry(g.geometry), areaM2: g.areaM2, perimeterM: g.perimeterM });
       changed.push('geometry');
     }
     if (patch.ownerMembershipId !== undefined) {
       await checkOwner(field.farmId, patch.ownerMembershipId, t);
-      sets.push('owner_membership_id = :owner');
-      rep.owner = patch.ownerMembershipId;
+      changes.ownerMembershipId = patch.ownerMembershipId;
       changed.push('owner');
     }
-    await sequelize.query(`UPDATE fields SET ${sets.join(', ')} WHERE id = :id`, { replacements: rep, transaction: t });
+    await field.update({ ...changes, version: field.version + 1 }, { transaction: t });
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'field', entityId: fieldId, action: 'updated', detail: { changed } }, t);
-    const [f] = await queryFields(sequelize, { fieldIds: [fieldId] }, t);
+    const [f] = await listFieldFeatures(sequelize, { fieldIds: [fieldId] }, t);
     return f;
   });
+  // A new boundary changes flow paths and per-field figures; a name or owner changes neither.
+  const kind = patch.geometry !== undefined ? 'boundary' : 'field-details';
+  await afterInputsChange(deps, { kind, farmId: updated.properties.farmId, fieldIds: [updated.id] }, actor);
+  return updated;
 }
 
-/** Removes the field and its rows; returns the storage keys of its files for the caller to delete after commit. */
-export async function deleteField(sequelize: Sequelize, actor: Actor, fieldId: number): Promise<string[]> {
-  return sequelize.transaction(async (t) => {
-    const field = await Field.findByPk(fieldId, { transaction: t });
+/** Removes the field and its rows, then its files in storage (after the commit, so a rollback keeps them). */
+export async function deleteField(deps: { sequelize: Sequelize; storage: FileStorage }, actor: Actor, fieldId: number): Promise<void> {
+  const { sequelize, storage } = deps;
+  const fileKeys = await sequelize.transaction(async (t) => {
+    const field = await Field.findByPk(fieldId, { transaction: t, attributes: ['id', 'farmId', 'name'] });
     if (!field) throw notFound('That field');
-    const photos = await sequelize.query<{ image_key: string; thumbnail_key: string }>(
-      `SELECT image_key, thumbnail_key FROM soil_photos WHERE field_id = :fieldId`,
-      { replacements: { fieldId }, type: QueryTypes.SELECT, transaction: t },
-    );
+    const photos = await SoilPhoto.findAll({ where: { fieldId }, attributes: ['imageKey', 'thumbnailKey'], transaction: t });
+    const keys = photos.flatMap((p) => [p.imageKey, p.thumbnailKey]);
     await field.destroy({ transaction: t });
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'field', entityId: fieldId, action: 'deleted', detail: { name: field.name } }, t);
-    return photos.flatMap((p) => [p.image_key, p.thumbnail_key]);
+    return keys;
   });
+  await Promise.all(fileKeys.map((k) => storage.remove(k).catch((e: unknown) => console.error(`could not remove ${k}:`, e))));
 }

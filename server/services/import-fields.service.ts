@@ -1,25 +1,24 @@
 // Stores the boundaries parsed from an uploaded file: each feature created or rejected with
-// a reason, all in one transaction; a file with nothing valid stores nothing (422).
-import type { Sequelize } from 'sequelize';
+// a reason, all in one transaction; a file with nothing valid stores nothing (422). The farm's
+// terrain and assessments then follow the new boundaries.
 import type { AreaGeometry } from '../../shared/schemas/geojson';
 import type { ImportResult } from '../../shared/schemas/field';
 import { HttpError, invalid } from '../lib/http-error';
 import { parseBoundaryFile } from './imports/parse-boundaries';
-import { insertField } from './fields.service';
-import { queryFields } from './field-presenter';
-
-export const IMPORT_LIMIT_BYTES = 8 * 1024 * 1024;
+import { insertField, listFieldFeatures } from './fields.service';
+import { afterInputsChange, type InputChangeDeps } from './input-changes.service';
 
 export async function importFields(
-  sequelize: Sequelize,
+  deps: InputChangeDeps,
   actor: { userId: number },
   farmId: number,
   file: { buffer: Buffer; originalName: string; mimeType?: string },
 ): Promise<ImportResult> {
+  const { sequelize } = deps;
   const parsed = await parseBoundaryFile(file);
   if (!parsed.ok) throw new HttpError(parsed.status, parsed.error, parsed.message);
   const rejected: ImportResult['rejected'] = [];
-  const result = await sequelize.transaction(async (t) => {
+  const created = await sequelize.transaction(async (t) => {
     const ids: number[] = [];
     for (const item of parsed.items) {
       if ('rejected' in item) {
@@ -39,7 +38,8 @@ export async function importFields(
         rejected,
       });
     }
-    return queryFields(sequelize, { fieldIds: ids }, t);
+    return listFieldFeatures(sequelize, { fieldIds: ids }, t);
   });
-  return { created: result, rejected };
+  await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: created.map((f) => f.id) }, actor);
+  return { created, rejected };
 }

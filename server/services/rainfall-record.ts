@@ -5,8 +5,6 @@
 import { parse } from 'csv-parse/sync';
 import { rFromBreakpointRecord, type Breakpoint } from '../../shared/erosion';
 
-export const RAINFALL_CSV_LIMIT_BYTES = 8 * 1024 * 1024;
-
 export type RecordSummary = { r: number; years: number; from: string; to: string; breakpoints: number; storms: number; erosiveStorms: number };
 export type RecordResult = { ok: true; summary: RecordSummary } | { ok: false; status: 400 | 415 | 422; error: string; message: string };
 

@@ -6,7 +6,7 @@ import type { Sequelize } from 'sequelize';
 import { TerrainGrid } from '../models';
 import type { FileStorage } from './storage/file-storage';
 import { renderLayer, type RenderResult } from './terrain';
-import { queryFields } from './field-presenter';
+import { listFieldFeatures } from './fields.service';
 import { assessField } from './assessment.service';
 
 /** The kept grids of the farm's newest terrain run, or null before any run. */
@@ -37,7 +37,7 @@ export async function renderSoilLossLayer(
   const ls = new Float32Array(lsBuf.buffer.slice(lsBuf.byteOffset, lsBuf.byteOffset + lsBuf.byteLength));
   const labels = labelGrid(labelBuf, ls.length);
   const ids = grids.labels.detail.fieldIdsByLabel ?? [];
-  const fields = new Map((await queryFields(deps.sequelize, { farmId })).map((f) => [f.id, f]));
+  const fields = new Map((await listFieldFeatures(deps.sequelize, { farmId })).map((f) => [f.id, f]));
   // Label k (1-based) → R·K·C·P of that field's assessment, NaN when it cannot be assessed.
   const factor = new Float64Array(ids.length + 1).fill(NaN);
   for (const [i, id] of ids.entries()) {

@@ -15,6 +15,14 @@ export const MM_PER_IN = 25.4;
 export const UM_PER_S_PER_IN_PER_H = 25400 / 3600;
 /** International acre = 0.40468564224 ha. */
 export const HA_PER_AC = 0.40468564224;
+/** Square metres in a hectare. */
+export const M2_PER_HA = 10_000;
+/** International acre = 4046.8564224 m². */
+export const M2_PER_AC = 4046.8564224;
+/** Acre-foot = 43,560 ft³ = 1233.48183754752 m³. */
+export const M3_PER_ACRE_FT = 1233.48183754752;
+/** Feet in a statute mile. */
+export const FT_PER_MI = 5280;
 
 export const tPerHaToTonPerAc = (tPerHa: number): number => tPerHa / T_PER_HA_PER_TON_PER_AC;
 export const tonPerAcToTPerHa = (tonPerAc: number): number => tonPerAc * T_PER_HA_PER_TON_PER_AC;

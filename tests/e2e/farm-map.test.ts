@@ -13,7 +13,7 @@ afterAll(() => app?.close());
 describe('farm map in Chromium', () => {
   it('signs in, draws a field and lists it with its area in hectares', async () => {
     const { farm, users } = await makeFarm(['farmer']);
-    await createField(app.sequelize, { userId: users.farmer.id }, farm.id, { geometry: squareFeature(-91.78, 42.31, 300).geometry, name: 'Home Paddock' });
+    await createField({ sequelize: app.sequelize }, { userId: users.farmer.id }, farm.id, { geometry: squareFeature(-91.78, 42.31, 300).geometry, name: 'Home Paddock' });
     const { page, errors } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
     await page.getByTestId('farm-row').filter({ hasText: farm.name }).click();
     await expect.poll(() => page.getByTestId('field-row').count(), { timeout: 15_000 }).toBe(1);

@@ -25,7 +25,7 @@ describe('priority board in Chromium', () => {
     await putClimate(app.sequelize, actor, farm.id, { rFrom: 'value', rValue: 2500, designStormMm: 100 });
     const ids: Record<string, number> = {};
     for (const [name, lng, slopePct] of [['Steep corn', -91.78, 12], ['Gentle corn', -91.77, 3]] as const) {
-      const f = await createField(app.sequelize, actor, farm.id, { geometry: squareFeature(lng, 42.31, 300).geometry, name });
+      const f = await createField({ sequelize: app.sequelize }, actor, farm.id, { geometry: squareFeature(lng, 42.31, 300).geometry, name });
       ids[name] = f.id;
       await putGround(app.sequelize, actor, { id: f.id, farmId: farm.id }, { slopePct, slopeLengthM: 60 });
       await putCropping(app.sequelize, actor, { id: f.id, farmId: farm.id }, { season: '2027', crop: 'corn', tillage: 'moldboard plough', residuePct: 5, practice: 'none' });

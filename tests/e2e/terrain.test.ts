@@ -26,7 +26,7 @@ describe('elevation model in Chromium', () => {
     const demPath = path.join(app.tmp, 'plane.tif');
     writeFileSync(demPath, writeGeoTiff({ width: size, height: size, samples: z, originX: e0, originY: n1, cellSizeX: cell, cellSizeY: cell, epsg: 32615, nodata: -9999 }));
     const ring = [[e0 + 500, n1 - 1500], [e0 + 1500, n1 - 1500], [e0 + 1500, n1 - 500], [e0 + 500, n1 - 500], [e0 + 500, n1 - 1500]].map((p) => proj4(UTM15N, 'WGS84', p) as [number, number]);
-    await createField(app.sequelize, { userId: users.farmer.id }, farm.id, { geometry: { type: 'Polygon', coordinates: [ring] }, name: 'Plane field' });
+    await createField({ sequelize: app.sequelize }, { userId: users.farmer.id }, farm.id, { geometry: { type: 'Polygon', coordinates: [ring] }, name: 'Plane field' });
 
     const { page, errors } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
     await page.getByTestId('farm-row').filter({ hasText: farm.name }).click();

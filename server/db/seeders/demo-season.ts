@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import type { Sequelize } from 'sequelize';
 import { Farm, User } from '../../models';
-import { queryFields } from '../../services/field-presenter';
+import { listFieldFeatures } from '../../services/fields.service';
 import { putClimate, putGround } from '../../services/climate-ground.service';
 import { putCropping } from '../../services/seasons.service';
 import { demoFields, DEMO_ACCOUNTS, DEMO_FARM_NAME } from './demo-farm';
@@ -25,7 +25,7 @@ export async function seedDemoSeason(sequelize: Sequelize): Promise<void> {
   const actor = { userId: farmer.id };
   await putClimate(sequelize, actor, farm.id, data.climate);
   const keyByName = new Map(demoFields().map((f) => [f.properties.name, (f.properties as { key?: string }).key ?? '']));
-  for (const f of await queryFields(sequelize, { farmId: farm.id })) {
+  for (const f of await listFieldFeatures(sequelize, { farmId: farm.id })) {
     const spec = data.fields[keyByName.get(f.properties.name) ?? ''];
     if (!spec) continue;
     const field = { id: f.id, farmId: farm.id };

@@ -1,7 +1,7 @@
 // Keeps stored assessments current: called whenever an input of some fields' assessments has
 // changed (boundary, terrain, soils, cropping, ground, climate), so the board reads stored rows.
 import type { Sequelize, Transaction } from 'sequelize';
-import { queryFields } from '../field-presenter';
+import { listFieldFeatures } from '../fields.service';
 import { listSeasons } from '../seasons.service';
 import { assessField } from '../assessment.service';
 
@@ -11,6 +11,6 @@ export type AssessmentScope = { farmId: number; /** Only these fields; every fie
 export async function refreshAssessments(sequelize: Sequelize, scope: AssessmentScope, _transaction?: Transaction): Promise<void> {
   const seasons = await listSeasons(sequelize, scope.farmId);
   if (!seasons.length) return;
-  const fields = await queryFields(sequelize, { farmId: scope.farmId, ...(scope.fieldIds ? { fieldIds: scope.fieldIds } : {}) });
+  const fields = await listFieldFeatures(sequelize, { farmId: scope.farmId, ...(scope.fieldIds ? { fieldIds: scope.fieldIds } : {}) });
   for (const season of seasons) for (const f of fields) await assessField(sequelize, f, season);
 }

@@ -9,12 +9,10 @@ import { readKml } from './read-kml';
 import { readShapefileZip } from './read-shapefile-zip';
 import { openZip, type OpenedZip } from './read-zip';
 import { toParsedItem } from './to-parsed-item';
+import { BOUNDARY_IMPORT_MAX_BYTES, BYTES_PER_MIB } from '../../../shared/limits';
 
 export type { ImportFailure, ImportFormat, ParseResult, ParsedBoundary, ParsedItem, RejectedFeature } from './import-types';
-export { MAX_UNZIPPED_BYTES } from './read-zip';
 
-/** Largest upload accepted (bytes); the route's multer limit should use the same number. */
-export const MAX_IMPORT_BYTES = 8 * 1024 * 1024;
 /** Most features one file may hold. */
 export const MAX_IMPORT_FEATURES = 5000;
 
@@ -41,8 +39,8 @@ export async function parseBoundaryFile(input: BoundaryFileInput): Promise<Parse
   if (!input || !(input.buffer instanceof Uint8Array)) throw new Error('parseBoundaryFile: input.buffer must be a Buffer');
   if (typeof input.originalName !== 'string') throw new Error('parseBoundaryFile: input.originalName must be a string');
   const bytes = input.buffer;
-  if (bytes.length > MAX_IMPORT_BYTES) {
-    return failure(413, 'file_too_large', `The file is larger than ${MAX_IMPORT_BYTES / 1024 / 1024} MB; upload only the field boundaries.`);
+  if (bytes.length > BOUNDARY_IMPORT_MAX_BYTES) {
+    return failure(413, 'file_too_large', `The file is larger than ${BOUNDARY_IMPORT_MAX_BYTES / BYTES_PER_MIB} MB; upload only the field boundaries.`);
   }
   const detected = detectFormat(bytes, input.originalName);
   if (isFailure(detected)) return detected;

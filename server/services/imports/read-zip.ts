@@ -2,9 +2,9 @@
 // paths; the total unzipped size is capped so a small zip cannot unpack into gigabytes.
 import JSZip from 'jszip';
 import { failure, type ImportFailure } from './import-types';
+import { BOUNDARY_IMPORT_MAX_UNZIPPED_BYTES, BYTES_PER_MIB } from '../../../shared/limits';
 
 /** Most bytes all entries read from one upload may unpack to. */
-export const MAX_UNZIPPED_BYTES = 64 * 1024 * 1024;
 
 export type ZipEntry = { name: string; file: JSZip.JSZipObject };
 export type OpenedZip = { ok: true; entries: ZipEntry[]; read: (entry: ZipEntry) => Promise<Uint8Array | ImportFailure> };
@@ -22,7 +22,7 @@ export async function openZip(bytes: Uint8Array): Promise<OpenedZip | ImportFail
   const entries = Object.values(zip.files)
     .filter((f) => !f.dir && !isJunk(f.name))
     .map((file) => ({ name: file.name, file }));
-  let budget = MAX_UNZIPPED_BYTES;
+  let budget = BOUNDARY_IMPORT_MAX_UNZIPPED_BYTES;
   const read = (entry: ZipEntry) =>
     new Promise<Uint8Array | ImportFailure>((resolve) => {
       const chunks: Buffer[] = [];
@@ -32,7 +32,7 @@ export async function openZip(bytes: Uint8Array): Promise<OpenedZip | ImportFail
         if (budget < 0) {
           (stream as unknown as { destroy?: () => void; pause: () => void }).pause();
           resolve(failure(413, 'unzipped_too_large',
-            `The zip unpacks to more than ${MAX_UNZIPPED_BYTES / 1024 / 1024} MB; upload only the layers with field boundaries.`));
+            `The zip unpacks to more than ${BOUNDARY_IMPORT_MAX_UNZIPPED_BYTES / BYTES_PER_MIB} MB; upload only the layers with field boundaries.`));
           return;
         }
         chunks.push(chunk);

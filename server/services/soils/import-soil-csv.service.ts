@@ -8,8 +8,6 @@ import { afterInputsChange } from '../input-changes.service';
 import { parseSoilCsv } from './parse-soil-csv';
 import { insertSample, sampleFieldOf } from './soil-samples.service';
 
-export const SOIL_CSV_LIMIT_BYTES = 1024 * 1024;
-
 export async function importSoilCsv(
   sequelize: Sequelize,
   actor: { userId: number },

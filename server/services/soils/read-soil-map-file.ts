@@ -8,7 +8,6 @@ import { openZip } from '../imports/read-zip';
 import { toParsedItem } from '../imports/to-parsed-item';
 import type { MapUnitOutline } from '../../models/soil-map-unit.queries';
 
-export const SOIL_MAP_LIMIT_BYTES = 8 * 1024 * 1024;
 /** Most map units one file may hold. */
 export const MAX_MAP_UNITS = 20_000;
 

@@ -9,7 +9,6 @@ import { newKey, type FileStorage } from '../storage/file-storage';
 import { detectImageType } from './detect-image-type';
 import { makeThumbnail } from './make-thumbnail';
 
-export const PHOTO_LIMIT_BYTES = 10 * 1024 * 1024;
 const MAX_ID = 2_147_483_647;
 
 type Deps = { sequelize: Sequelize; storage: FileStorage };

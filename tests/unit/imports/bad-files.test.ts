@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_IMPORT_BYTES, parseBoundaryFile } from '../../../server/services/imports/parse-boundaries';
+import { parseBoundaryFile } from '../../../server/services/imports/parse-boundaries';
+import { BOUNDARY_IMPORT_MAX_BYTES } from '../../../shared/limits';
 import { parseFixture, parseText } from './fixtures';
 
 const ACCEPTED = 'Fieldshed reads field boundaries from GeoJSON (.geojson or .json), a zipped shapefile';
@@ -56,7 +57,7 @@ describe('bad boundary files', () => {
   });
 
   it('answers 413 for a file over 8 MB', async () => {
-    const buffer = Buffer.alloc(MAX_IMPORT_BYTES + 1, 0x20);
+    const buffer = Buffer.alloc(BOUNDARY_IMPORT_MAX_BYTES + 1, 0x20);
     expect(await parseBoundaryFile({ buffer, originalName: 'big.geojson' })).toMatchObject({ ok: false, status: 413, error: 'file_too_large' });
   });
 

@@ -4,7 +4,7 @@
 import { mmToIn, tPerHaToTonPerAc, tToShortTon } from '../../../../shared/erosion/units';
 import type { Units } from '../../../../shared/schemas/auth';
 import { formatFigure } from '../../estimate/components/format-figure';
-import { M3_PER_ACRE_FT } from '../../../lib/units';
+import { M3_PER_ACRE_FT } from '../../../../shared/erosion/units';
 
 export type Figure = { main: string; alt: string };
 

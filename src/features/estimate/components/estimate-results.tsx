@@ -1,7 +1,7 @@
 // The estimate's answer beside the form: A in t/ha/yr and t/ac/yr, A/T with its risk class,
 // tonnes a year, storm runoff, every factor with its source, and the cautions.
 import { Notice } from '../../../components/ui/notice';
-import { M3_PER_ACRE_FT } from '../../../lib/units';
+import { M3_PER_ACRE_FT } from '../../../../shared/erosion/units';
 import { mmToIn, riskClassOf, tToShortTon } from '../../../../shared/erosion';
 import type { EstimateSuccess } from '../../../../shared/schemas/estimate';
 import { FactorTable } from './factor-table';

@@ -7,8 +7,6 @@ import { getFieldsQueryOptions } from './get-fields';
 
 /** File endings the server reads. */
 export const IMPORT_EXTENSIONS = ['.geojson', '.json', '.zip', '.kml', '.kmz'] as const;
-/** The server's upload limit. */
-export const IMPORT_MAX_BYTES = 8 * 1024 * 1024;
 
 export function importFields(farmId: number, file: File): Promise<ImportResult> {
   const form = new FormData();

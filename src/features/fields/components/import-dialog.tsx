@@ -6,19 +6,18 @@ import { ModalDialog } from '../../../components/ui/modal-dialog';
 import { Notice } from '../../../components/ui/notice';
 import { isApiError } from '../../../lib/api-client';
 import type { ImportResult } from '../../../../shared/schemas/field';
-import { IMPORT_EXTENSIONS, IMPORT_MAX_BYTES, useImportFields } from '../api/import-fields';
+import { IMPORT_EXTENSIONS, useImportFields } from '../api/import-fields';
+import { BOUNDARY_IMPORT_MAX_BYTES, BYTES_PER_MIB } from '../../../../shared/limits';
 
 type Rejected = ImportResult['rejected'];
-
-const MB = 1024 * 1024;
 
 function checkFile(file: File): string | null {
   const lower = file.name.toLowerCase();
   if (!IMPORT_EXTENSIONS.some((ext) => lower.endsWith(ext)))
     return `${file.name} is not a file Fieldshed can read. Use ${IMPORT_EXTENSIONS.join(', ')}.`;
   if (file.size === 0) return `${file.name} is empty.`;
-  if (file.size > IMPORT_MAX_BYTES)
-    return `${file.name} is ${(file.size / MB).toFixed(1)} MB; the limit is ${(IMPORT_MAX_BYTES / MB).toFixed(0)} MB.`;
+  if (file.size > BOUNDARY_IMPORT_MAX_BYTES)
+    return `${file.name} is ${(file.size / BYTES_PER_MIB).toFixed(1)} MB; the limit is ${(BOUNDARY_IMPORT_MAX_BYTES / BYTES_PER_MIB).toFixed(0)} MB.`;
   return null;
 }
 
@@ -79,7 +78,7 @@ export function ImportDialog({ farmId, onClose }: { farmId: number; onClose: () 
         </h2>
         <p className="text-sm text-ink-soft">
           GeoJSON (.geojson, .json), a zipped shapefile with its .prj (.zip), or KML (.kml, .kmz). Up to{' '}
-          <span className="num">{IMPORT_MAX_BYTES / MB} MB</span>.
+          <span className="num">{BOUNDARY_IMPORT_MAX_BYTES / BYTES_PER_MIB} MB</span>.
         </p>
         <div
           data-testid="import-dropzone"

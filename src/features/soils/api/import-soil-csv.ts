@@ -7,9 +7,6 @@ import { api, isApiError } from '../../../lib/api-client';
 import type { SoilCsvImportResult } from '../../../../shared/schemas/soils';
 import { invalidateFieldSoils } from './soil-query-keys';
 
-/** The server's upload limit for a soil CSV. */
-export const SOIL_CSV_MAX_BYTES = 1024 * 1024;
-
 export type CsvRejectedRow = SoilCsvImportResult['rejected'][number];
 
 export function importSoilCsv(fieldId: number, file: File, acceptGoodRows: boolean): Promise<SoilCsvImportResult> {

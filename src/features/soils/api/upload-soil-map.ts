@@ -8,8 +8,6 @@ import { soilMapChanged } from './soil-map-changed';
 
 /** File endings the server reads. */
 export const SOIL_MAP_EXTENSIONS = ['.geojson', '.json', '.zip'] as const;
-/** The server's upload limit. */
-export const SOIL_MAP_MAX_BYTES = 8 * 1024 * 1024;
 
 export type SoilMapUploadResult = SoilMapInfo & { rejected: { index: number; reason: string }[] };
 

@@ -5,8 +5,6 @@ import { api } from '../../../lib/api-client';
 import type { SoilPhoto } from '../../../../shared/schemas/soils';
 import { getSoilPhotosQueryOptions } from './get-soil-photos';
 
-/** The server's upload limit for one photo. */
-export const PHOTO_MAX_BYTES = 10 * 1024 * 1024;
 /** Image types the server keeps. */
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
 

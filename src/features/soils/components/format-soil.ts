@@ -2,6 +2,7 @@
 // the user's first (hectare users SI, acre users US customary).
 import type { Units } from '../../../../shared/schemas/auth';
 import { kUsToSi, tonPerAcToTPerHa } from '../../../../shared/erosion/units';
+import { M2_PER_AC, M2_PER_HA } from '../../../../shared/erosion/units';
 
 export const fmt = (x: number, digits: number) =>
   x.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
@@ -34,8 +35,6 @@ export function formatT(tTonPerAcYr: number, units: Units): { main: string; othe
   return units === 'ha' ? { main: si, other: us } : { main: us, other: si };
 }
 
-const M2_PER_HA = 10_000;
-const M2_PER_AC = 4046.8564224;
 
 /** "1.23 ha" or "3.04 ac" from square metres. */
 export function formatAreaM2(areaM2: number, units: Units): string {

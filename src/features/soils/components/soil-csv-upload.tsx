@@ -5,7 +5,8 @@ import { useId, useState, type DragEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { SOIL_CSV_COLUMNS } from '../../../../shared/schemas/soils';
-import { rejectedRowsFromError, SOIL_CSV_MAX_BYTES, useImportSoilCsv, type CsvRejectedRow } from '../api/import-soil-csv';
+import { rejectedRowsFromError, useImportSoilCsv, type CsvRejectedRow } from '../api/import-soil-csv';
+import { SOIL_CSV_MAX_BYTES } from '../../../../shared/limits';
 
 const KB = 1024;
 const COLUMNS = [...SOIL_CSV_COLUMNS, 'described_to_cm'];

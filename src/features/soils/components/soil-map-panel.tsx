@@ -8,7 +8,8 @@ import { Notice } from '../../../components/ui/notice';
 import { isApiError } from '../../../lib/api-client';
 import { useDeleteSoilMap } from '../api/delete-soil-map';
 import { useSoilMap } from '../api/get-soil-map';
-import { SOIL_MAP_EXTENSIONS, SOIL_MAP_MAX_BYTES, useUploadSoilMap } from '../api/upload-soil-map';
+import { SOIL_MAP_EXTENSIONS, useUploadSoilMap } from '../api/upload-soil-map';
+import { SOIL_MAP_MAX_BYTES } from '../../../../shared/limits';
 import { formatDay } from './format-soil';
 import { SoilMapMappingForm } from './soil-map-mapping-form';
 

@@ -9,7 +9,8 @@ import { isApiError } from '../../../lib/api-client';
 import type { SoilPhoto, SoilSample } from '../../../../shared/schemas/soils';
 import { useDeleteSoilPhoto } from '../api/delete-soil-photo';
 import { useSoilPhotos } from '../api/get-soil-photos';
-import { PHOTO_MAX_BYTES, PHOTO_TYPES, useUploadSoilPhoto } from '../api/upload-soil-photo';
+import { PHOTO_TYPES, useUploadSoilPhoto } from '../api/upload-soil-photo';
+import { PHOTO_MAX_BYTES } from '../../../../shared/limits';
 import { fmt, formatDay } from './format-soil';
 
 const MB = 1024 * 1024;

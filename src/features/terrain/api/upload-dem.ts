@@ -9,8 +9,6 @@ export type DemAccepted = { jobId: string; elevationModelId: number };
 
 /** File endings of a GeoTIFF. */
 export const DEM_EXTENSIONS = ['.tif', '.tiff'] as const;
-/** The server's upload limit. */
-export const DEM_MAX_BYTES = 200 * 1024 * 1024;
 
 export function uploadDem(farmId: number, file: File): Promise<DemAccepted> {
   const form = new FormData();

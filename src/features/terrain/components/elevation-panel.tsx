@@ -8,7 +8,8 @@ import { Notice } from '../../../components/ui/notice';
 import { useElevation, type ElevationModel } from '../api/get-elevation';
 import { isJobActive, useJob } from '../api/get-job';
 import { refreshTerrain } from '../api/refresh-terrain';
-import { DEM_EXTENSIONS, DEM_MAX_BYTES, useUploadDem } from '../api/upload-dem';
+import { DEM_EXTENSIONS, useUploadDem } from '../api/upload-dem';
+import { DEM_MAX_BYTES } from '../../../../shared/limits';
 import { JobProgress } from './job-progress';
 
 const MB = 1024 * 1024;

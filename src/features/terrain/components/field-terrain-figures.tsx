@@ -9,10 +9,10 @@ import { useLayers } from '../api/get-layers';
 import { FLOW_COLOUR, FLOW_LABEL } from './flow-points-layer';
 import { LegendSwatch } from './legend-swatch';
 import { SlopeClassChart } from './slope-class-chart';
+import { M2_PER_HA } from '../../../../shared/erosion/units';
 
 const fmt = (x: number, digits: number) =>
   x.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
-const M2_PER_HA = 10_000;
 
 type Props = { fieldId: number; fieldVersion: number; farmId: number; units: Units };
 

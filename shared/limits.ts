@@ -1,0 +1,22 @@
+// Every upload and request size limit, shared by the client (checks before sending, with the
+// limit in its messages) and the server (multer and body-parser limits, 413 answers).
+
+export const BYTES_PER_KIB = 1024;
+export const BYTES_PER_MIB = 1024 * 1024;
+
+/** A field boundary file: GeoJSON, zipped shapefile, KML or KMZ. */
+export const BOUNDARY_IMPORT_MAX_BYTES = 8 * BYTES_PER_MIB;
+/** All entries of a zipped boundary file together, once unzipped. */
+export const BOUNDARY_IMPORT_MAX_UNZIPPED_BYTES = 64 * BYTES_PER_MIB;
+/** An elevation model (GeoTIFF). */
+export const DEM_MAX_BYTES = 200 * BYTES_PER_MIB;
+/** A soil profile photo (JPEG, PNG or WebP). */
+export const PHOTO_MAX_BYTES = 10 * BYTES_PER_MIB;
+/** A CSV of soil samples. */
+export const SOIL_CSV_MAX_BYTES = 1 * BYTES_PER_MIB;
+/** A soil map (GeoJSON or zipped shapefile of map units). */
+export const SOIL_MAP_MAX_BYTES = 8 * BYTES_PER_MIB;
+/** A rainfall record (CSV) for R. */
+export const RAINFALL_RECORD_MAX_BYTES = 8 * BYTES_PER_MIB;
+/** Any JSON request body. */
+export const JSON_BODY_MAX_BYTES = 2 * BYTES_PER_MIB;
