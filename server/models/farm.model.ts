@@ -1,5 +1,7 @@
 import { Membership } from './membership.model';
 import { Field } from './field.model';
+import { Season } from './season.model';
+import { FarmClimate } from './farm-climate.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 
 export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<Farm>> {
@@ -23,5 +25,7 @@ export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<F
   static associate(): void {
     Farm.hasMany(Membership, { foreignKey: 'farmId', as: 'memberships' });
     Farm.hasMany(Field, { foreignKey: 'farmId', as: 'fields' });
+    Farm.hasMany(Season, { foreignKey: 'farmId', as: 'seasons' });
+    Farm.hasOne(FarmClimate, { foreignKey: 'farmId', as: 'climate' });
   }
 }

@@ -1,5 +1,8 @@
 import { Farm } from './farm.model';
 import { Membership } from './membership.model';
+import { FieldCropping } from './field-cropping.model';
+import { FieldGround } from './field-ground.model';
+import { Assessment } from './assessment.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { MultiPolygon } from 'geojson';
 
@@ -37,5 +40,8 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
   static associate(): void {
     Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });
+    Field.hasMany(FieldCropping, { foreignKey: 'fieldId', as: 'croppings' });
+    Field.hasOne(FieldGround, { foreignKey: 'fieldId', as: 'ground' });
+    Field.hasMany(Assessment, { foreignKey: 'fieldId', as: 'assessments' });
   }
 }

@@ -7,11 +7,16 @@ import { Farm } from './farm.model';
 import { Membership } from './membership.model';
 import { Field } from './field.model';
 import { AuditEvent } from './audit-event.model';
+import { Season } from './season.model';
+import { FieldCropping } from './field-cropping.model';
+import { FarmClimate } from './farm-climate.model';
+import { FieldGround } from './field-ground.model';
+import { Assessment } from './assessment.model';
 
-export { User, Farm, Membership, Field, AuditEvent };
+export { User, Farm, Membership, Field, AuditEvent, Season, FieldCropping, FarmClimate, FieldGround, Assessment };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
-const MODELS = [User, Farm, Membership, Field, AuditEvent];
+const MODELS = [User, Farm, Membership, Field, AuditEvent, Season, FieldCropping, FarmClimate, FieldGround, Assessment];
 
 let initialised: Sequelize | null = null;
 

@@ -69,7 +69,7 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
     const entries = rows.map(toEntry);
     // Soil loss per cell is drawn on request from the kept LS grid and each field's assessment.
     const grids = await keptGrids(sequelize, farmId);
-    const [season] = await listSeasons(sequelize, farmId);
+    const [season] = await listSeasons(farmId);
     if (grids && season && rows[0]) {
       entries.push({
         ...toEntry(rows[0]),
@@ -85,7 +85,7 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
   farms.get('/:farmId/layers/:file', loadFarmMembership, requireRole('farmer', 'advisor'), async (req, res) => {
     const kind = String(req.params.file).replace(/\.png$/, '');
     if (kind === 'soil-loss') {
-      const season = await resolveSeason(sequelize, req.membership!.farmId, typeof req.query.season === 'string' ? req.query.season : undefined);
+      const season = await resolveSeason(req.membership!.farmId, typeof req.query.season === 'string' ? req.query.season : undefined);
       const r = await renderSoilLossLayer(deps, req.membership!.farmId, season);
       if (!r) throw notFound('That map layer');
       if (!r.ok) throw new HttpError(422, 'cannot_draw', r.reason);

@@ -10,6 +10,7 @@ import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats,
 import type { LayerKind, RenderValues, SlopeClass } from './terrain';
 import { queryFields } from './field-presenter';
 import type { JobHandler } from './jobs/job-queue';
+import { refreshAssessments } from './assessments/refresh-assessments';
 
 export const LAYER_LABELS: Record<LayerKind, string> = {
   hillshade: 'Shaded relief',
@@ -149,6 +150,8 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
           { replacements: { fieldId: f.id, mid: model.id, version: f.properties.version, stats: JSON.stringify(stats) }, transaction: t },
         );
       }
+      // New per-field figures are an input of every stored assessment of the farm.
+      await refreshAssessments(sequelize, { farmId: job.farmId }, t);
     });
     for (const o of old) await storage.remove(o.file_key);
     return `Terrain ready: ${covered} of ${fields.length} fields covered by the elevation model.`;

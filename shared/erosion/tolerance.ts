@@ -2,9 +2,12 @@
 import { assertNonNegative, assertPositive } from './assert';
 import type { Flag } from './cover';
 import { tonPerAcToTPerHa } from './units';
+import type { SourceRef } from '../schemas/provenance';
 
-/** T for deep soils when the survey gives none, t/ac/yr [practice]. */
+/** T for deep soils when the survey gives none, t/ac/yr: common practice, the top of NSSH part 618's 1–5 range. */
 export const DEFAULT_T_TON_PER_AC_YR = 5;
+/** Where the default T comes from, for people: common practice, no single published source. */
+export const DEFAULT_T_SOURCE: SourceRef = { title: 'deep-soil T, common practice (the top of the 1–5 t/ac/yr range of NSSH part 618)' };
 
 export type ToleranceResult = { tonPerAcYr: number; tPerHaYr: number; source: string; method: string; flag?: Flag };
 

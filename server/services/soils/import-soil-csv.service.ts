@@ -4,7 +4,8 @@ import type { Sequelize } from 'sequelize';
 import type { SoilCsvImportResult } from '../../../shared/schemas/soils';
 import { HttpError, invalid } from '../../lib/http-error';
 import { parseSoilCsv } from './parse-soil-csv';
-import { insertSample } from './soil-samples.service';
+import { farmOfField, insertSample } from './soil-samples.service';
+import { afterInputsChange } from '../input-changes.service';
 import { querySamples } from './soil-sample-presenter';
 
 export const SOIL_CSV_LIMIT_BYTES = 1024 * 1024;
@@ -28,10 +29,12 @@ export async function importSoilCsv(
       rejected,
     });
   }
-  const created = await sequelize.transaction(async (t) => {
+  const { created, farmId } = await sequelize.transaction(async (t) => {
     const ids: number[] = [];
     for (const r of rows) ids.push(await insertSample(sequelize, actor, fieldId, r.input, t));
-    return querySamples(sequelize, { sampleIds: ids }, t);
+    return { created: await querySamples(sequelize, { sampleIds: ids }, t), farmId: await farmOfField(sequelize, fieldId, t) };
   });
+  // After the commit: the soil summary reads committed samples.
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId, fieldIds: [fieldId] }, actor);
   return { created, rejected };
 }

@@ -4,6 +4,7 @@ import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { SOIL_MAP_MEANINGS, type MappingCheck, type SoilMapInfo, type SoilMapMapping, type SoilMapMeaning } from '../../../shared/schemas/soils';
 import { HttpError, invalid, notFound } from '../../lib/http-error';
 import { recordEvent } from '../audit';
+import { afterInputsChange } from '../input-changes.service';
 import { EMPTY_MAPPING, guessMapping, readMeaning, type StoredMapping } from './map-unit-values';
 import { readSoilMapFile } from './read-soil-map-file';
 
@@ -81,7 +82,7 @@ export async function uploadSoilMap(
   if (!read.ok) throw new HttpError(read.status, read.error, read.message);
   const names: string[] = [];
   for (const u of read.units) for (const k of Object.keys(u.properties)) if (!names.includes(k)) names.push(k);
-  return sequelize.transaction(async (t) => {
+  const info = await sequelize.transaction(async (t) => {
     // One upload per farm at a time: the farm row is the lock, so two uploads cannot both replace the map.
     await sequelize.query('SELECT id FROM farms WHERE id = :farmId FOR UPDATE', { replacements: { farmId }, transaction: t });
     const previous = await mapRow(sequelize, farmId, t);
@@ -124,10 +125,12 @@ export async function uploadSoilMap(
     await recordEvent({ userId: actor.userId, farmId, entity: 'soil_map', entityId: map.id, action: 'uploaded', detail: { units: stored, rejected: rejected.length, attributes: names.length } }, t);
     return { ...(await soilMapInfo(sequelize, farmId, t)), rejected };
   });
+  await soilMapChanged(sequelize, actor, farmId);
+  return info;
 }
 
 export async function setSoilMapMapping(sequelize: Sequelize, actor: { userId: number }, farmId: number, body: SoilMapMapping): Promise<SoilMapInfo> {
-  return sequelize.transaction(async (t) => {
+  const info = await sequelize.transaction(async (t) => {
     const row = await mapRow(sequelize, farmId, t);
     if (!row) throw notFound('A soil map for this farm');
     const mapping = mappingOf(row);
@@ -144,6 +147,8 @@ export async function setSoilMapMapping(sequelize: Sequelize, actor: { userId: n
     await recordEvent({ userId: actor.userId, farmId, entity: 'soil_map', entityId: row.id, action: 'mapped', detail: { mapping } }, t);
     return soilMapInfo(sequelize, farmId, t);
   });
+  await soilMapChanged(sequelize, actor, farmId);
+  return info;
 }
 
 export async function deleteSoilMap(sequelize: Sequelize, actor: { userId: number }, farmId: number): Promise<void> {
@@ -152,4 +157,10 @@ export async function deleteSoilMap(sequelize: Sequelize, actor: { userId: numbe
     if (!row) throw notFound('A soil map for this farm');
     await recordEvent({ userId: actor.userId, farmId, entity: 'soil_map', entityId: row.id, action: 'deleted' }, t);
   });
+  await soilMapChanged(sequelize, actor, farmId);
+}
+
+/** After the commit: the soil summaries read the committed map. */
+async function soilMapChanged(sequelize: Sequelize, actor: { userId: number }, farmId: number): Promise<void> {
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId }, actor);
 }

@@ -5,12 +5,13 @@ import { SoilSampleCreate, type SoilSample, type SoilSampleUpdate } from '../../
 import { badRequest, conflict, notFound } from '../../lib/http-error';
 import { describeIssues } from '../../middleware/validate';
 import { recordEvent } from '../audit';
+import { afterInputsChange } from '../input-changes.service';
 import { deriveSample } from './derive-sample';
 import { presentSample, querySamples, sampleRows, type SampleRow } from './soil-sample-presenter';
 
 type Actor = { userId: number };
 
-async function farmOfField(sequelize: Sequelize, fieldId: number, transaction: Transaction): Promise<number> {
+export async function farmOfField(sequelize: Sequelize, fieldId: number, transaction: Transaction): Promise<number> {
   const [f] = await sequelize.query<{ farm_id: number }>('SELECT farm_id FROM fields WHERE id = :fieldId', {
     replacements: { fieldId },
     type: QueryTypes.SELECT,
@@ -92,12 +93,19 @@ export async function insertSample(
   return row.id;
 }
 
+/** After the commit: the soil summary reads committed samples. */
+async function soilsChanged(sequelize: Sequelize, actor: Actor, farmId: number, fieldId: number): Promise<void> {
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId, fieldIds: [fieldId] }, actor);
+}
+
 export async function createSample(sequelize: Sequelize, actor: Actor, fieldId: number, input: SoilSampleCreate): Promise<SoilSample> {
-  return sequelize.transaction(async (t) => {
+  const { s, farmId } = await sequelize.transaction(async (t) => {
     const id = await insertSample(sequelize, actor, fieldId, input, t);
     const [s] = await querySamples(sequelize, { sampleIds: [id] }, t);
-    return s;
+    return { s, farmId: await farmOfField(sequelize, fieldId, t) };
   });
+  await soilsChanged(sequelize, actor, farmId, fieldId);
+  return s;
 }
 
 /** A stored row back in the create payload's shape, so a change can be merged and re-checked. */
@@ -127,7 +135,7 @@ function inputOf(r: SampleRow): Record<string, unknown> {
 }
 
 export async function updateSample(sequelize: Sequelize, actor: Actor, sampleId: number, patch: SoilSampleUpdate): Promise<SoilSample> {
-  return sequelize.transaction(async (t) => {
+  const { s, farmId } = await sequelize.transaction(async (t) => {
     const [row] = await sampleRows(sequelize, { sampleIds: [sampleId] }, t, true);
     if (!row) throw notFound('That soil sample');
     if (row.version !== patch.version) {
@@ -152,16 +160,20 @@ export async function updateSample(sequelize: Sequelize, actor: Actor, sampleId:
     const farmId = await farmOfField(sequelize, row.field_id, t);
     await recordEvent({ userId: actor.userId, farmId, entity: 'soil_sample', entityId: sampleId, action: 'updated', detail: { changed: Object.keys(changes) } }, t);
     const [s] = await querySamples(sequelize, { sampleIds: [sampleId] }, t);
-    return s;
+    return { s, farmId };
   });
+  await soilsChanged(sequelize, actor, farmId, s.fieldId);
+  return s;
 }
 
 export async function deleteSample(sequelize: Sequelize, actor: Actor, sampleId: number): Promise<void> {
-  await sequelize.transaction(async (t) => {
+  const { farmId, fieldId } = await sequelize.transaction(async (t) => {
     const [row] = await sampleRows(sequelize, { sampleIds: [sampleId] }, t, true);
     if (!row) throw notFound('That soil sample');
     const farmId = await farmOfField(sequelize, row.field_id, t);
     await sequelize.query('DELETE FROM soil_samples WHERE id = :id', { replacements: { id: sampleId }, transaction: t });
     await recordEvent({ userId: actor.userId, farmId, entity: 'soil_sample', entityId: sampleId, action: 'deleted', detail: { fieldId: row.field_id, label: row.label } }, t);
+    return { farmId, fieldId: row.field_id };
   });
+  await soilsChanged(sequelize, actor, farmId, fieldId);
 }
