@@ -43,7 +43,8 @@ async function saveClimate(sequelize: Sequelize, actor: { userId: number }, farm
     const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("farm's climate", () => FarmClimate.create({ farmId, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: audit.action ?? (cur ? 'updated' : 'created'), ...(audit.detail ? { detail: audit.detail } : {}) }, t);
     await afterInputsChange({ sequelize }, { kind: 'climate', farmId }, actor, t);
-    return presentClimate(row);
+    // Read back: REAL columns round what was sent, and the answer should match a later GET.
+    return presentClimate(await row.reload({ transaction: t }));
   });
 }
 
@@ -81,10 +82,12 @@ export async function putGround(
   const { ground, slopeLengthChanged } = await sequelize.transaction(async (t) => {
     const cur = await FieldGround.findByPk(field.id, { transaction: t, lock: t.LOCK.UPDATE });
     staleCheck("field's slope", cur ? presentGround(cur) : null, input.version);
+    const lengthBefore = cur?.slopeLengthM ?? null;
     const next = { slopePct: input.slopePct, slopeLengthM: input.slopeLengthM, updatedBy: actor.userId };
     const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("field's slope", () => FieldGround.create({ fieldId: field.id, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'ground', entityId: field.id, action: cur ? 'updated' : 'created' }, t);
-    return { ground: presentGround(row), slopeLengthChanged: (cur?.slopeLengthM ?? null) !== row.slopeLengthM };
+    await row.reload({ transaction: t });
+    return { ground: presentGround(row), slopeLengthChanged: lengthBefore !== row.slopeLengthM };
   });
   // After the commit: the typed slope length caps the elevation model's flow length for LS, so a
   // change of it queues a terrain run, and that run must read the committed length.

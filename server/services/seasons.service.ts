@@ -89,6 +89,7 @@ export async function putCropping(sequelize: Sequelize, actor: { userId: number 
     // A season created by this record needs rows for every field of the farm.
     const change: InputChange = created ? { kind: 'season', farmId: field.farmId } : { kind: 'cropping', farmId: field.farmId, fieldIds: [field.id] };
     await afterInputsChange({ sequelize }, change, actor, t);
-    return presentCropping(row, season.label);
+    // Read back: REAL columns round what was sent, and the answer should match a later GET.
+    return presentCropping(await row.reload({ transaction: t }), season.label);
   });
 }

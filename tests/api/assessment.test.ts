@@ -52,7 +52,7 @@ describe('assessment of a field for a season', () => {
     const S = 1000 / 69 - 10;
     expect(a.runoffMm).toBeCloseTo(((5 - 0.2 * S) ** 2 / (5 + 0.8 * S)) * 25.4, 1);
     expect(a.lsSource).toBe('typed slope');
-    expect(a.inputs.find((i: { key: string }) => i.key === 'slope').origin).toBe('typed');
+    expect(a.inputs.find((i: { key: string }) => i.key === 'slope').origin).toEqual({ kind: 'typed', typedBy: 'Test farmer' });
   });
 
   it('lists what is missing instead of guessing', async () => {

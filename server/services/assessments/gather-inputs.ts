@@ -16,24 +16,21 @@ const withEditor = { model: User, as: 'editor', attributes: ['name'] };
 
 /** The inputs of each field in scope × each season of its farm. */
 export async function gatherInputs(sequelize: Sequelize, scope: AssessmentScope, transaction?: Transaction): Promise<GatheredInputs[]> {
-  const [seasons, fields] = await Promise.all([
-    Season.findAll({ where: { farmId: scope.farmId }, transaction }),
-    Field.findAll({
-      where: { farmId: scope.farmId, ...(scope.fieldIds ? { id: { [Op.in]: scope.fieldIds } } : {}) },
-      attributes: ['id', 'farmId', 'name', 'areaM2', 'version'],
-      transaction,
-    }),
-  ]);
+  // One after another: queries in one transaction share its connection.
+  const seasons = await Season.findAll({ where: { farmId: scope.farmId }, transaction });
+  const fields = await Field.findAll({
+    where: { farmId: scope.farmId, ...(scope.fieldIds ? { id: { [Op.in]: scope.fieldIds } } : {}) },
+    attributes: ['id', 'farmId', 'name', 'areaM2', 'version'],
+    transaction,
+  });
   if (seasons.length === 0 || fields.length === 0) return [];
   const fieldIds = fields.map((f) => f.id);
-  const [climate, grounds, croppings, terrain, soils] = await Promise.all([
-    FarmClimate.findByPk(scope.farmId, { include: [withEditor], transaction }),
-    FieldGround.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, include: [withEditor], transaction }),
-    FieldCropping.findAll({ where: { fieldId: { [Op.in]: fieldIds }, seasonId: { [Op.in]: seasons.map((s) => s.id) } }, include: [withEditor], transaction }),
-    terrainRecordsOf(sequelize, fieldIds, transaction),
-    // One field at a time until the soils layer reads every field of a scope at once.
-    Promise.all(fieldIds.map(async (id) => [id, await fieldSoilSummary(sequelize, id)] as const)),
-  ]);
+  const climate = await FarmClimate.findByPk(scope.farmId, { include: [withEditor], transaction });
+  const grounds = await FieldGround.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, include: [withEditor], transaction });
+  const croppings = await FieldCropping.findAll({ where: { fieldId: { [Op.in]: fieldIds }, seasonId: { [Op.in]: seasons.map((s) => s.id) } }, include: [withEditor], transaction });
+  const terrain = await terrainRecordsOf(sequelize, fieldIds, transaction);
+  // One field at a time until the soils layer reads every field of a scope at once.
+  const soils = await Promise.all(fieldIds.map(async (id) => [id, await fieldSoilSummary(sequelize, id)] as const));
   const groundBy = new Map(grounds.map((g) => [g.fieldId, g]));
   const croppingBy = new Map(croppings.map((c) => [`${c.fieldId}:${c.seasonId}`, c]));
   const terrainBy = new Map(terrain.map((t) => [t.fieldId, t]));
