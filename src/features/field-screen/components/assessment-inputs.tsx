@@ -29,7 +29,7 @@ export function AssessmentInputs({ inputs }: { inputs: FieldAssessment['inputs']
           const words = whence(i.origin, i.note);
           return (
             <li key={i.key} className="flex flex-wrap items-baseline gap-x-3 gap-y-0.5 px-3 py-1.5" data-testid={`input-${i.key}`}>
-              <span className="w-48 shrink-0 text-ink-soft">{i.label}</span>
+              <span className="w-full shrink-0 text-ink-soft sm:w-48">{i.label}</span>
               <span className="num min-w-0 flex-1 font-medium">{i.value}</span>
               <span className={`whitespace-nowrap rounded border px-1.5 text-xs font-semibold ${KIND[i.origin.kind].className}`} data-testid="input-origin">
                 {KIND[i.origin.kind].text}
