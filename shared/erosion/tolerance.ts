@@ -26,7 +26,7 @@ export function soilLossTolerance(args: { surveyTTonPerAcYr?: number; rootingDep
     assertNonNegative('rootingDepthCm', rootingDepthCm);
     // NSSH part 618 T by rooting depth, favourable subsoil [memory]
     const t = rootingDepthCm < 25 ? 1 : rootingDepthCm < 50 ? 2 : rootingDepthCm < 100 ? 3 : rootingDepthCm < 150 ? 4 : 5;
-    return { tonPerAcYr: t, tPerHaYr: tonPerAcToTPerHa(t), source: 'NSSH part 618, T by rooting depth [memory]', method: `rooting depth ${rootingDepthCm} cm`, flag: 'memory' };
+    return { tonPerAcYr: t, tPerHaYr: tonPerAcToTPerHa(t), source: 'NSSH part 618, T by rooting depth', method: `rooting depth ${rootingDepthCm} cm`, flag: 'memory' };
   }
   return {
     tonPerAcYr: DEFAULT_T_TON_PER_AC_YR,
