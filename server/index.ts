@@ -2,15 +2,11 @@
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 import type { Server } from 'node:http';
-import { loadConfig } from './config';
-import { openDatabase } from './db/database';
 import { stopLocalCluster } from './db/local-cluster';
-import { initModels } from './models';
 import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seeders/demo-farm';
 import { createApp } from './app';
+import { openBackend, jobHandlers, stopOnSignals } from './backend';
 import { JobQueue } from './services/jobs/job-queue';
-import { LocalFileStorage } from './services/storage/file-storage';
-import { terrainJobHandler } from './services/farm-terrain.service';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
 import { seedDemoSeason } from './db/seeders/demo-season';
 import { seedDemoSecondFarm } from './db/seeders/demo-second-farm';
@@ -38,12 +34,11 @@ async function buildClientIfStale(): Promise<void> {
 let startedClusterDir: string | null = null;
 
 async function main(): Promise<void> {
-  const config = loadConfig();
-  const db = await openDatabase(config);
+  const backend = await openBackend();
+  const { config, db, storage } = backend;
   startedClusterDir = db.localClusterDir;
-  initModels(db.sequelize);
-  const storage = new LocalFileStorage(path.join(config.dataDir, 'uploads'));
-  const jobs = await JobQueue.start(db.sequelize, db.url, { terrain: terrainJobHandler({ sequelize: db.sequelize, storage }) });
+  // One worker in this process; `npm run worker` adds more, here or on other machines.
+  const jobs = await JobQueue.start(db.url, jobHandlers(backend));
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
     await seedDemoSeason(db.sequelize);
     await seedDemoSecondFarm(db.sequelize);
@@ -67,19 +62,12 @@ async function main(): Promise<void> {
     console.log(`Demo sign-ins (password ${DEMO_PASSWORD}):`);
     for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(9)} ${a.email}`);
   }
-  let stopping = false;
-  const stop = async (signal: string) => {
-    if (stopping) return;
-    stopping = true;
-    console.log(`\n${signal}: stopping …`);
+  stopOnSignals(async () => {
     server.close();
     await jobs.stop();
     await db.sequelize.close().catch(() => undefined);
     if (db.localClusterDir) await stopLocalCluster(db.localClusterDir).catch(() => undefined);
-    process.exit(0);
-  };
-  process.on('SIGINT', () => void stop('SIGINT'));
-  process.on('SIGTERM', () => void stop('SIGTERM'));
+  });
 }
 
 main().catch(async (e: unknown) => {

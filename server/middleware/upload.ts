@@ -2,7 +2,7 @@
 // with), with a size limit whose 413 names the limit and what the file was for.
 import type { RequestHandler } from 'express';
 import multer from 'multer';
-import { tooLarge } from '../lib/http-error';
+import { badRequest, tooLarge } from '../lib/http-error';
 
 export function singleUpload(limitBytes: number, what: string): RequestHandler {
   const handler = multer({ storage: multer.memoryStorage(), limits: { fileSize: limitBytes, files: 1 } }).single('file');
@@ -15,4 +15,12 @@ export function singleUpload(limitBytes: number, what: string): RequestHandler {
       }
       next(err);
     });
+}
+
+/** 400 unless the request carried its file (the multipart part named "file"); `what` says what to attach. */
+export function requireFile(what: string): RequestHandler {
+  return (req, _res, next) => {
+    if (!req.file) throw badRequest('no_file', `Attach ${what} as the multipart part named "file".`);
+    next();
+  };
 }

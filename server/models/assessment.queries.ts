@@ -1,7 +1,7 @@
 // Reads for assessments that span several tables: the stored board rows of a farm or of all an
-// advisor's client farms in one query each, the per-field terrain figures an assessment uses,
-// and the farms whose stored assessments are missing or from an older engine.
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+// advisor's client farms in one query each, and the farms whose stored assessments are missing
+// or from an older engine.
+import { QueryTypes, type Sequelize } from 'sequelize';
 import type { StoredBoardFigures } from '../../shared/schemas/assessment';
 
 /** A field with its stored board figures for the season (null when none is stored yet). */
@@ -60,18 +60,6 @@ export async function advisorBoardRecords(sequelize: Sequelize, args: { userId: 
     { replacements: { userId: args.userId, label: args.seasonLabel ?? null }, type: QueryTypes.SELECT },
   );
   return { seasons: [...new Set(rows.map((r) => r.season_label))], records: toRecords(rows) };
-}
-
-export type TerrainRecord = { fieldId: number; fieldVersion: number; stats: { meanSlopePct: number; meanLS: number | null; cellCount: number; cellSizeM?: number; concentratedFlow?: { cellCount: number } } };
-
-/** The last terrain run's figures for these fields. */
-export async function terrainRecordsOf(sequelize: Sequelize, fieldIds: number[], transaction?: Transaction): Promise<TerrainRecord[]> {
-  if (fieldIds.length === 0) return [];
-  const rows = await sequelize.query<{ field_id: number; field_version: number; stats: TerrainRecord['stats'] }>(
-    `SELECT field_id, field_version, stats FROM field_terrain WHERE field_id IN (:fieldIds)`,
-    { replacements: { fieldIds }, type: QueryTypes.SELECT, transaction },
-  );
-  return rows.map((r) => ({ fieldId: r.field_id, fieldVersion: r.field_version, stats: r.stats }));
 }
 
 /** Farms where some field lacks a stored assessment for some season, or has one from another engine version. */

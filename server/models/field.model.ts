@@ -3,6 +3,9 @@ import { Membership } from './membership.model';
 import { FieldCropping } from './field-cropping.model';
 import { FieldGround } from './field-ground.model';
 import { Assessment } from './assessment.model';
+import { SoilPhoto } from './soil-photo.model';
+import { SoilSample } from './soil-sample.model';
+import { FieldTerrain } from './field-terrain.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 import type { MultiPolygon } from 'geojson';
 
@@ -43,5 +46,8 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
     Field.hasMany(FieldCropping, { foreignKey: 'fieldId', as: 'croppings' });
     Field.hasOne(FieldGround, { foreignKey: 'fieldId', as: 'ground' });
     Field.hasMany(Assessment, { foreignKey: 'fieldId', as: 'assessments' });
+    Field.hasMany(SoilSample, { foreignKey: 'fieldId', as: 'soilSamples' });
+    Field.hasMany(SoilPhoto, { foreignKey: 'fieldId', as: 'soilPhotos' });
+    Field.hasOne(FieldTerrain, { foreignKey: 'fieldId', as: 'terrain' });
   }
 }

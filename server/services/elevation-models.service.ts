@@ -1,6 +1,9 @@
 // Accepting a DEM upload: it must be a GeoTIFF with a known CRS that overlaps the farm's
 // fields. The file is stored under a server-made key and a terrain job is queued.
-import { QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
+import type { Polygon } from 'geojson';
+import { ElevationModel, ProcessingJob } from '../models';
+import { countFieldsOverlapping } from '../models/elevation-model.queries';
 import { readDem, converterBetween } from './terrain';
 import type { DemGrid } from './terrain';
 import { HttpError, invalid, unsupportedType } from '../lib/http-error';
@@ -27,12 +30,15 @@ export function demBoundsWgs84(dem: DemGrid): { ok: true; ring: [number, number]
   return { ok: true, ring };
 }
 
+/** 503 without a job queue: the upload would wait for a run that never comes. */
 export async function acceptDem(
-  deps: { sequelize: Sequelize; storage: FileStorage; jobs: JobQueue },
+  deps: { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue },
   actor: { userId: number },
   farmId: number,
   file: { buffer: Buffer; originalName: string },
 ): Promise<{ jobId: string; elevationModelId: number }> {
+  const { jobs } = deps;
+  if (!jobs) throw new HttpError(503, 'jobs_unavailable', 'Background processing is not running on this server; try again later.');
   if (file.buffer.length === 0) throw new HttpError(400, 'empty_file', 'The file is empty.');
   const read = await readDem(file.buffer);
   if (!read.ok) {
@@ -40,36 +46,33 @@ export async function acceptDem(
     throw invalid('invalid_dem', `The elevation model cannot be used: ${read.reason}.`);
   }
   const dem = read.dem;
-  const bounds = demBoundsWgs84(dem);
-  if (!bounds.ok) throw invalid('invalid_dem', `The elevation model's coordinate system cannot be used: ${bounds.reason}.`);
-  const boundsGeoJson = JSON.stringify({ type: 'Polygon', coordinates: [bounds.ring] });
-  const [overlap] = await deps.sequelize.query<{ n: number }>(
-    `SELECT count(*)::int AS n FROM fields WHERE farm_id = :farmId AND ST_Intersects(geom, ST_SetSRID(ST_GeomFromGeoJSON(:b), 4326))`,
-    { replacements: { farmId, b: boundsGeoJson }, type: QueryTypes.SELECT },
-  );
-  if (overlap.n === 0) {
+  const outline = demBoundsWgs84(dem);
+  if (!outline.ok) throw invalid('invalid_dem', `The elevation model's coordinate system cannot be used: ${outline.reason}.`);
+  const bounds: Polygon = { type: 'Polygon', coordinates: [outline.ring] };
+  if ((await countFieldsOverlapping(farmId, bounds)) === 0) {
     throw invalid('dem_outside_fields', `The elevation model (EPSG:${dem.epsg}) does not overlap any of this farm's fields; check that it covers the farm and that its coordinate system is right.`);
   }
-  const key = newKey('dems', '.tif');
-  await deps.storage.put(key, file.buffer);
+  const fileKey = newKey('dems', '.tif');
+  await deps.storage.put(fileKey, file.buffer);
   try {
-    const id = await deps.sequelize.transaction(async (t) => {
-      const [row] = await deps.sequelize.query<{ id: number }>(
-        `INSERT INTO elevation_models (farm_id, file_key, original_name, epsg, width, height, cell_size_m, bounds, created_by)
-         VALUES (:farmId, :key, :name, :epsg, :w, :h, :cell, ST_SetSRID(ST_GeomFromGeoJSON(:b), 4326), :userId) RETURNING id`,
-        {
-          replacements: { farmId, key, name: file.originalName.slice(0, 200), epsg: dem.epsg, w: dem.width, h: dem.height, cell: dem.rowCellSizeXM[0], b: boundsGeoJson, userId: actor.userId },
-          type: QueryTypes.SELECT,
-          transaction: t,
-        },
+    const id = await deps.sequelize.transaction(async (transaction) => {
+      const model = await ElevationModel.create(
+        { farmId, fileKey, originalName: file.originalName.slice(0, 200), epsg: dem.epsg, width: dem.width, height: dem.height, cellSizeM: dem.rowCellSizeXM[0], bounds, createdBy: actor.userId },
+        { transaction },
       );
-      await recordEvent({ userId: actor.userId, farmId, entity: 'elevation_model', entityId: row.id, action: 'uploaded', detail: { epsg: dem.epsg, width: dem.width, height: dem.height } }, t);
-      return row.id;
+      await recordEvent({ userId: actor.userId, farmId, entity: 'elevation_model', entityId: model.id, action: 'uploaded', detail: { epsg: dem.epsg, width: dem.width, height: dem.height } }, transaction);
+      return model.id;
     });
-    const jobId = await deps.jobs.enqueue('terrain', farmId, actor.userId, { elevationModelId: id });
+    const jobId = await jobs.enqueue('terrain', farmId, actor.userId, { elevationModelId: id });
     return { jobId, elevationModelId: id };
   } catch (e) {
-    await deps.storage.remove(key); // no orphan file when the row could not be written
+    await deps.storage.remove(fileKey); // no orphan file when the row could not be written
     throw e;
   }
+}
+
+/** The farm's current elevation model and its latest terrain job (either may be missing). */
+export async function farmElevation(farmId: number): Promise<{ model: ElevationModel | null; latestJob: ProcessingJob | null }> {
+  const [model, latestJob] = await Promise.all([ElevationModel.newestOfFarm(farmId), ProcessingJob.latestOfFarm(farmId, 'terrain')]);
+  return { model, latestJob };
 }

@@ -2,21 +2,17 @@
 // the cell's LS from the last terrain run (RUSLE, AH-703 ch. 1). Drawn on request, so it follows
 // cropping, soil and climate changes without another terrain run; cells outside assessed
 // fields stay transparent.
-import { QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize } from 'sequelize';
+import { TerrainGrid } from '../models';
 import type { FileStorage } from './storage/file-storage';
 import { renderLayer, type RenderResult } from './terrain';
 import { storedEstimates } from './assessments/read-assessments';
 
-type GridRow = { kind: string; file_key: string; frame: { width: number; height: number; originX: number; originY: number; cellSizeX: number; cellSizeY: number; epsg: number }; detail: { fieldIdsByLabel?: number[] } };
-
 /** The kept grids of the farm's newest terrain run, or null before any run. */
-export async function keptGrids(sequelize: Sequelize, farmId: number): Promise<{ ls: GridRow; labels: GridRow } | null> {
-  const rows = await sequelize.query<GridRow>(
-    `SELECT g.kind, g.file_key, g.frame, g.detail FROM terrain_grids g JOIN elevation_models m ON m.id = g.elevation_model_id WHERE m.farm_id = :farmId`,
-    { replacements: { farmId }, type: QueryTypes.SELECT },
-  );
-  const ls = rows.find((r) => r.kind === 'ls');
-  const labels = rows.find((r) => r.kind === 'field-labels');
+export async function keptGrids(farmId: number): Promise<{ ls: TerrainGrid; labels: TerrainGrid } | null> {
+  const grids = await TerrainGrid.ofFarm(farmId);
+  const ls = grids.find((g) => g.kind === 'ls');
+  const labels = grids.find((g) => g.kind === 'field-labels');
   return ls && labels ? { ls, labels } : null;
 }
 
@@ -33,10 +29,10 @@ export async function renderSoilLossLayer(
   farmId: number,
   season: { id: number; label: string },
 ): Promise<RenderResult | null> {
-  const grids = await keptGrids(deps.sequelize, farmId);
+  const grids = await keptGrids(farmId);
   if (!grids) return null;
-  const lsBuf = await deps.storage.get(grids.ls.file_key);
-  const labelBuf = await deps.storage.get(grids.labels.file_key);
+  const lsBuf = await deps.storage.get(grids.ls.fileKey);
+  const labelBuf = await deps.storage.get(grids.labels.fileKey);
   const ls = new Float32Array(lsBuf.buffer.slice(lsBuf.byteOffset, lsBuf.byteOffset + lsBuf.byteLength));
   const labels = labelGrid(labelBuf, ls.length);
   const ids = grids.labels.detail.fieldIdsByLabel ?? [];

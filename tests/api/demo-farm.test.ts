@@ -30,14 +30,14 @@ let seeded = false;
 
 beforeAll(async () => {
   initModels(sequelize);
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
+  jobs = await JobQueue.start(inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'demo-secret-demo-secret' }), storage, jobs, clientDir: '/nonexistent' });
   seeded = await seedDemoFarm(sequelize);
   await seedDemoSeason(sequelize);
   await seedDemoSecondFarm(sequelize);
   await seedDemoTerrain({ sequelize, storage, jobs });
   const [job] = (await sequelize.query(`SELECT id FROM processing_jobs ORDER BY created_at DESC LIMIT 1`))[0] as { id: string }[];
-  await JobQueue.waitFor(sequelize, job.id);
+  await JobQueue.waitFor(job.id);
 });
 afterAll(async () => {
   await jobs.stop();

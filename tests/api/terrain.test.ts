@@ -1,52 +1,23 @@
 // DEM upload → background job with progress → per-field terrain figures and map layers.
-import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
-import proj4 from 'proj4';
-import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
-import os from 'node:os';
-import path from 'node:path';
+import { readdirSync } from 'node:fs';
 import request from 'supertest';
 import type { Express } from 'express';
-import { createSequelize } from '../../server/db/sequelize';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { initModels } from '../../server/models';
+import type { Sequelize } from 'sequelize';
 import { JobQueue } from '../../server/services/jobs/job-queue';
-import { LocalFileStorage } from '../../server/services/storage/file-storage';
-import { terrainJobHandler } from '../../server/services/farm-terrain.service';
-import { writeGeoTiff } from '../../server/services/terrain';
 import { makeFarm, signedIn } from '../helpers/test-app';
+import { planeDem, startTerrainApp, utmSquare } from '../helpers/terrain-fixtures';
 
-const UTM15N = '+proj=utm +zone=15 +datum=WGS84 +units=m +no_defs';
-const sequelize = createSequelize(inject('databaseUrl'));
-const uploads = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-uploads-'));
-const storage = new LocalFileStorage(uploads);
-let jobs: JobQueue;
+let ctx: Awaited<ReturnType<typeof startTerrainApp>>;
 let app: Express;
+let sequelize: Sequelize;
+let uploads: string;
 
 beforeAll(async () => {
-  initModels(sequelize);
-  jobs = await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`);
-  app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'terrain-secret-terrain' }), storage, jobs, clientDir: '/nonexistent' });
+  ctx = await startTerrainApp({ worker: true });
+  ({ app, sequelize, uploads } = ctx);
 });
-afterAll(async () => {
-  await jobs.stop();
-  await sequelize.close();
-  rmSync(uploads, { recursive: true, force: true });
-});
-
-/** A plane rising 5 m per 100 m to the east: slope exactly 5 % everywhere (analytic). */
-function planeDem(originX = 600000, originY = 4684400, size = 80, cell = 5): Buffer {
-  const z = new Float32Array(size * size);
-  for (let r = 0; r < size; r++) for (let c = 0; c < size; c++) z[r * size + c] = 100 + 0.05 * (c + 0.5) * cell;
-  return Buffer.from(writeGeoTiff({ width: size, height: size, samples: z, originX, originY, cellSizeX: cell, cellSizeY: cell, epsg: 32615, nodata: -9999 }));
-}
-
-function utmSquare(e0: number, n0: number, side: number) {
-  const ring = [[e0, n0], [e0 + side, n0], [e0 + side, n0 + side], [e0, n0 + side], [e0, n0]].map((p) => proj4(UTM15N, 'WGS84', p));
-  return { type: 'Feature', properties: { name: 'Plane field' }, geometry: { type: 'Polygon', coordinates: [ring] } };
-}
+afterAll(() => ctx.close());
 
 async function farmWithField() {
   const made = await makeFarm(['farmer', 'advisor', 'landowner']);
@@ -64,7 +35,7 @@ describe('terrain from an uploaded DEM', () => {
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
     expect(up.status).toBe(202);
     expect(up.body.jobId).toMatch(/^[0-9a-f-]{36}$/);
-    const done = await JobQueue.waitFor(sequelize, up.body.jobId);
+    const done = await JobQueue.waitFor(up.body.jobId);
     expect(done.state).toBe('done');
     const job = await agent.get(`/api/jobs/${up.body.jobId}`);
     expect(job.body).toMatchObject({ state: 'done', progress: 1 });
@@ -93,12 +64,12 @@ describe('terrain from an uploaded DEM', () => {
   it('recomputes a field’s figures when its boundary changes', async () => {
     const { farm, agent, fieldId } = await farmWithField();
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
-    await JobQueue.waitFor(sequelize, up.body.jobId);
+    await JobQueue.waitFor(up.body.jobId);
     const smaller = utmSquare(600100, 4684100, 100);
     const patch = await agent.patch(`/api/fields/${fieldId}`).send({ version: 0, geometry: smaller.geometry });
     expect(patch.status).toBe(200);
     const latest = await agent.get(`/api/farms/${farm.id}/elevation`);
-    await JobQueue.waitFor(sequelize, latest.body.latestJob.id);
+    await JobQueue.waitFor(latest.body.latestJob.id);
     const t = await agent.get(`/api/fields/${fieldId}/terrain`);
     expect(t.body.cellCount).toBe(20 * 20);
     expect(t.body.upToDate).toBe(true);
@@ -153,13 +124,13 @@ describe('terrain from an uploaded DEM', () => {
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
     const stranger = await signedIn(app, (await makeFarm(['farmer'])).users.farmer);
     expect((await stranger.get(`/api/jobs/${up.body.jobId}`)).status).toBe(404);
-    await JobQueue.waitFor(sequelize, up.body.jobId);
+    await JobQueue.waitFor(up.body.jobId);
   });
 
   it('uses the farm’s own slope-class breaks when set, and refuses broken ones', async () => {
     const { farm, agent, fieldId, users } = await farmWithField();
     const up = await agent.post(`/api/farms/${farm.id}/dems`).attach('file', planeDem(), 'plane.tif');
-    await JobQueue.waitFor(sequelize, up.body.jobId);
+    await JobQueue.waitFor(up.body.jobId);
     const def = (await agent.get(`/api/farms/${farm.id}/slope-classes`)).body;
     expect(def.custom).toBe(false);
     expect(def.classes[0]).toEqual({ name: 'nearly level', minPct: 0, maxPct: 2 });
@@ -168,7 +139,7 @@ describe('terrain from an uploaded DEM', () => {
     expect(gap.body.message).toMatch(/minPct/);
     const set = await agent.put(`/api/farms/${farm.id}/slope-classes`).send({ classes: [{ name: 'flat', minPct: 0, maxPct: 4 }, { name: 'sloping', minPct: 4, maxPct: null }] });
     expect(set.status).toBe(200);
-    await JobQueue.waitFor(sequelize, set.body.jobId);
+    await JobQueue.waitFor(set.body.jobId);
     const t = (await agent.get(`/api/fields/${fieldId}/terrain`)).body;
     // The 5 % plane lies wholly in "sloping" (4 % and over).
     expect(t.slopeClasses.map((c: { name: string; share: number }) => [c.name, c.share])).toEqual([['flat', 0], ['sloping', 1]]);

@@ -49,7 +49,7 @@ export async function startBrowserApp(options: { withJobs?: boolean } = {}) {
   const storage = new LocalFileStorage(path.join(tmp, 'uploads'));
   // Each file works its own queue: its files live in its own storage folder.
   const jobs = options.withJobs
-    ? await JobQueue.start(sequelize, inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`)
+    ? await JobQueue.start(inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`)
     : undefined;
   const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}` });
   const { url, server } = await listen(createApp({ sequelize, config, storage, jobs, clientDir: dist }));

@@ -36,7 +36,7 @@ export default async function setup(project: TestProject) {
   const s = createSequelize(url);
   await migrate(s);
   // Create the job queue's own schema once, before test files start queues in parallel.
-  const boss = await JobQueue.start(s, url);
+  const boss = await JobQueue.start(url);
   await boss.stop();
   await s.close();
   project.provide('databaseUrl', url);

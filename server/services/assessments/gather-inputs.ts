@@ -2,10 +2,9 @@
 // per input table for the whole scope (seasons, fields, climate, typed ground, cropping,
 // terrain figures), and the soil summary of each field.
 import { Op, type Sequelize, type Transaction } from 'sequelize';
-import { FarmClimate, Field, FieldCropping, FieldGround, Season, User } from '../../models';
-import { terrainRecordsOf } from '../../models/assessment.queries';
+import { FarmClimate, Field, FieldCropping, FieldGround, FieldTerrain, Season, User } from '../../models';
 import { presentClimate, presentCropping, presentGround } from '../../presenters/seasons.presenter';
-import { fieldSoilSummary } from '../soils/field-soil-summary';
+import { fieldSoilSummaries } from '../soils/field-soil-summary';
 import type { GatheredInputs, TerrainFigures } from './gathered-inputs';
 
 export type AssessmentScope = { farmId: number; /** Only these fields; every field of the farm when omitted. */ fieldIds?: number[] };
@@ -28,13 +27,11 @@ export async function gatherInputs(sequelize: Sequelize, scope: AssessmentScope,
   const climate = await FarmClimate.findByPk(scope.farmId, { include: [withEditor], transaction });
   const grounds = await FieldGround.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, include: [withEditor], transaction });
   const croppings = await FieldCropping.findAll({ where: { fieldId: { [Op.in]: fieldIds }, seasonId: { [Op.in]: seasons.map((s) => s.id) } }, include: [withEditor], transaction });
-  const terrain = await terrainRecordsOf(sequelize, fieldIds, transaction);
-  // One field at a time until the soils layer reads every field of a scope at once.
-  const soils = await Promise.all(fieldIds.map(async (id) => [id, await fieldSoilSummary(sequelize, id)] as const));
+  const terrain = await FieldTerrain.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, transaction });
+  const soilBy = await fieldSoilSummaries(sequelize, { farmId: scope.farmId, fieldIds }, transaction);
   const groundBy = new Map(grounds.map((g) => [g.fieldId, g]));
   const croppingBy = new Map(croppings.map((c) => [`${c.fieldId}:${c.seasonId}`, c]));
   const terrainBy = new Map(terrain.map((t) => [t.fieldId, t]));
-  const soilBy = new Map(soils);
   const climateShown = climate ? { ...presentClimate(climate), typedBy: editorName(climate as Edited) } : null;
 
   const out: GatheredInputs[] = [];

@@ -1,36 +1,48 @@
-// The soil map units under one field: PostGIS intersects the farm's map units with the field
+// The soil map units under fields: PostGIS intersects the farm's map units with each field
 // (areas on the WGS84 ellipsoid, ST_Area of the intersection as geography) and the mapped
 // attributes are read per unit; then area-weighted K and T, the mix of soil groups, and the
 // dominant texture and drainage class.
-import { QueryTypes, type Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { FieldSoilMapUnits } from '../../../shared/schemas/soils';
-import { EMPTY_MAPPING, unitValues, type StoredMapping } from './map-unit-values';
+import { Field } from '../../models';
+import { mapUnitsUnderFields, type UnitUnderField } from '../../models/soil-map-unit.queries';
+import { EMPTY_MAPPING, unitValues } from './map-unit-values';
 
 /** Slivers smaller than this (m²) where outlines only touch are left out. */
 const MIN_AREA_M2 = 0.01;
 
-export async function fieldSoilMapUnits(sequelize: Sequelize, fieldId: number): Promise<FieldSoilMapUnits> {
-  const rows = await sequelize.query<{ id: number; feature_index: number; attributes: Record<string, unknown>; mapping: Partial<StoredMapping>; area_m2: number; field_area_m2: number }>(
-    `SELECT u.id, u.feature_index, u.attributes, m.mapping, ST_Area(ST_Intersection(u.geom, f.geom)::geography) AS area_m2, f.area_m2 AS field_area_m2
-       FROM fields f
-       JOIN soil_maps m ON m.farm_id = f.farm_id
-       JOIN soil_map_units u ON u.soil_map_id = m.id AND ST_Intersects(u.geom, f.geom)
-      WHERE f.id = :fieldId
-      ORDER BY u.feature_index, u.id`,
-    { replacements: { fieldId }, type: QueryTypes.SELECT },
-  );
-  let fieldAreaM2 = rows[0]?.field_area_m2;
-  if (fieldAreaM2 === undefined) {
-    const [f] = await sequelize.query<{ area_m2: number }>('SELECT area_m2 FROM fields WHERE id = :fieldId', { replacements: { fieldId }, type: QueryTypes.SELECT });
-    fieldAreaM2 = f?.area_m2 ?? 0;
-  }
+/** One field's units (rows of mapUnitsUnderFields, in their order) with their share of the field and their read values. */
+function unitsOfField(fieldAreaM2: number, rows: UnitUnderField[]): FieldSoilMapUnits {
   const units = rows
-    .filter((r) => r.area_m2 > MIN_AREA_M2)
+    .filter((r) => r.areaM2 > MIN_AREA_M2)
     .map((r) => {
       const mapping = { ...EMPTY_MAPPING, ...r.mapping };
-      return { unitId: r.id, featureIndex: r.feature_index, areaM2: r.area_m2, share: fieldAreaM2 > 0 ? r.area_m2 / fieldAreaM2 : 0, ...unitValues(r.attributes, mapping), attributes: r.attributes };
+      return { unitId: r.unitId, featureIndex: r.featureIndex, areaM2: r.areaM2, share: fieldAreaM2 > 0 ? r.areaM2 / fieldAreaM2 : 0, ...unitValues(r.attributes, mapping), attributes: r.attributes };
     });
   return { fieldAreaM2, mappedAreaM2: units.reduce((s, u) => s + u.areaM2, 0), units };
+}
+
+/** The soil map units under each of some fields, in one PostGIS query whatever their number. */
+export async function soilMapUnitsOfFields(
+  sequelize: Sequelize,
+  fields: { id: number; areaM2: number }[],
+  transaction?: Transaction,
+): Promise<Map<number, FieldSoilMapUnits>> {
+  const rows = await mapUnitsUnderFields(sequelize, fields.map((f) => f.id), transaction);
+  const byField = new Map<number, UnitUnderField[]>();
+  for (const r of rows) {
+    const list = byField.get(r.fieldId);
+    if (list) list.push(r);
+    else byField.set(r.fieldId, [r]);
+  }
+  return new Map(fields.map((f) => [f.id, unitsOfField(f.areaM2, byField.get(f.id) ?? [])]));
+}
+
+/** GET /api/fields/:fieldId/soil-map-units: the units under one field. */
+export async function fieldSoilMapUnits(sequelize: Sequelize, fieldId: number, transaction?: Transaction): Promise<FieldSoilMapUnits> {
+  const field = await Field.findByPk(fieldId, { attributes: ['id', 'areaM2'], transaction });
+  const fields = [{ id: fieldId, areaM2: field?.areaM2 ?? 0 }];
+  return (await soilMapUnitsOfFields(sequelize, fields, transaction)).get(fieldId)!;
 }
 
 export type MapAggregate = {

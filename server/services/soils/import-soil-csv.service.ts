@@ -1,12 +1,12 @@
 // Stores the samples of an uploaded CSV: all or nothing, unless the person accepts the good
-// rows of a file that also has bad ones. One transaction.
+// rows of a file that also has bad ones. One transaction; the field's assessments are
+// refreshed once after it.
 import type { Sequelize } from 'sequelize';
-import type { SoilCsvImportResult } from '../../../shared/schemas/soils';
 import { HttpError, invalid } from '../../lib/http-error';
-import { parseSoilCsv } from './parse-soil-csv';
-import { farmOfField, insertSample } from './soil-samples.service';
+import { SoilSample } from '../../models';
 import { afterInputsChange } from '../input-changes.service';
-import { querySamples } from './soil-sample-presenter';
+import { parseSoilCsv } from './parse-soil-csv';
+import { insertSample, sampleFieldOf } from './soil-samples.service';
 
 export const SOIL_CSV_LIMIT_BYTES = 1024 * 1024;
 
@@ -16,7 +16,7 @@ export async function importSoilCsv(
   fieldId: number,
   file: { buffer: Buffer; originalName: string },
   options: { acceptGoodRows: boolean },
-): Promise<SoilCsvImportResult> {
+): Promise<{ created: SoilSample[]; rejected: { row: number; reason: string }[] }> {
   const parsed = parseSoilCsv(file.buffer);
   if (!parsed.ok) throw new HttpError(parsed.status, parsed.error, parsed.message);
   const { rows, rejected } = parsed;
@@ -29,12 +29,12 @@ export async function importSoilCsv(
       rejected,
     });
   }
-  const { created, farmId } = await sequelize.transaction(async (t) => {
+  const { created, field } = await sequelize.transaction(async (t) => {
+    const field = await sampleFieldOf(fieldId, t);
     const ids: number[] = [];
-    for (const r of rows) ids.push(await insertSample(sequelize, actor, fieldId, r.input, t));
-    return { created: await querySamples(sequelize, { sampleIds: ids }, t), farmId: await farmOfField(sequelize, fieldId, t) };
+    for (const r of rows) ids.push((await insertSample(actor, field, r.input, t)).id);
+    return { created: await SoilSample.scope('oldestFirst').findAll({ where: { id: ids }, transaction: t }), field };
   });
-  // After the commit: the soil summary reads committed samples.
-  await afterInputsChange({ sequelize }, { kind: 'soils', farmId, fieldIds: [fieldId] }, actor);
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId: field.farmId, fieldIds: [field.id] }, actor);
   return { created, rejected };
 }

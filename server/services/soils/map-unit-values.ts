@@ -3,8 +3,7 @@
 // counted, not guessed.
 import { DRAINAGE_CLASSES, HYDROLOGIC_SOIL_GROUPS, TEXTURE_CLASSES, kSiToUs, type TextureClass } from '../../../shared/erosion';
 import type { SoilMapMeaning } from '../../../shared/schemas/soils';
-
-export type StoredMapping = { texture: string | null; k: string | null; hsg: string | null; t: string | null; drainage: string | null; kUnits: 'us' | 'si' };
+import type { StoredMapping } from '../../models/soil-map.model';
 export const EMPTY_MAPPING: StoredMapping = { texture: null, k: null, hsg: null, t: null, drainage: null, kUnits: 'us' };
 
 export type UnitValues = { textureClass: TextureClass | null; kUs: number | null; tTonPerAcYr: number | null; hsg: string | null; drainageClass: string | null };

@@ -1,19 +1,18 @@
 // An uploaded soil map (GeoJSON or zipped shapefile) → map units with their attributes, using
 // the boundary import's readers (which keep each feature's properties) and its geometry checks.
-import type { Polygon, MultiPolygon } from 'geojson';
 import { detectFormat } from '../imports/detect-format';
 import { failure, type ImportFailure, type ReadResult } from '../imports/import-types';
 import { readGeojson } from '../imports/read-geojson';
 import { readShapefileZip } from '../imports/read-shapefile-zip';
 import { openZip } from '../imports/read-zip';
 import { toParsedItem } from '../imports/to-parsed-item';
+import type { MapUnitOutline } from '../../models/soil-map-unit.queries';
 
 export const SOIL_MAP_LIMIT_BYTES = 8 * 1024 * 1024;
 /** Most map units one file may hold. */
 export const MAX_MAP_UNITS = 20_000;
 
-export type MapUnitInput = { index: number; geometry: Polygon | MultiPolygon; properties: Record<string, unknown> };
-export type SoilMapRead = { ok: true; units: MapUnitInput[]; rejected: { index: number; reason: string }[]; warnings: string[] } | ImportFailure;
+export type SoilMapRead = { ok: true; units: MapUnitOutline[]; rejected: { index: number; reason: string }[]; warnings: string[] } | ImportFailure;
 
 const ACCEPTED = 'A soil map must be GeoJSON (.geojson or .json) or a zipped shapefile (a .zip with the .shp, .shx, .dbf and .prj of the map units)';
 const isFailure = (v: unknown): v is ImportFailure => typeof v === 'object' && v !== null && (v as ImportFailure).ok === false;
@@ -37,7 +36,7 @@ export async function readSoilMapFile(input: { buffer: Uint8Array; originalName:
   if (read.features.length > MAX_MAP_UNITS) {
     return failure(413, 'too_many_features', `The file holds ${read.features.length} map units; at most ${MAX_MAP_UNITS} can be uploaded at once (clip the map to the farm).`);
   }
-  const units: MapUnitInput[] = [];
+  const units: MapUnitOutline[] = [];
   const rejected: { index: number; reason: string }[] = [];
   read.features.forEach((raw, i) => {
     const item = toParsedItem(raw, i + 1);

@@ -1,28 +1,33 @@
 // Create, change and remove soil samples: one transaction each, version check on change
-// (409 when stale), derived texture and drainage stored with the row, an audit event.
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
-import { SoilSampleCreate, type SoilSample, type SoilSampleUpdate } from '../../../shared/schemas/soils';
+// (409 when stale), derived texture and drainage stored with the row, an audit event; then the
+// field's assessments are refreshed, since its soil figures changed.
+import type { Sequelize, Transaction } from 'sequelize';
+import { SoilSampleCreate, type SoilSampleUpdate } from '../../../shared/schemas/soils';
 import { badRequest, conflict, notFound } from '../../lib/http-error';
+import { Field, SoilSample } from '../../models';
 import { describeIssues } from '../../middleware/validate';
+import { presentSample } from '../../presenters/soil-sample.presenter';
 import { recordEvent } from '../audit';
 import { afterInputsChange } from '../input-changes.service';
 import { deriveSample } from './derive-sample';
-import { presentSample, querySamples, sampleRows, type SampleRow } from './soil-sample-presenter';
 
 type Actor = { userId: number };
+/** The field a sample belongs to, with its farm (for the audit trail and the assessments). */
+export type SampleField = { id: number; farmId: number };
 
-export async function farmOfField(sequelize: Sequelize, fieldId: number, transaction: Transaction): Promise<number> {
-  const [f] = await sequelize.query<{ farm_id: number }>('SELECT farm_id FROM fields WHERE id = :fieldId', {
-    replacements: { fieldId },
-    type: QueryTypes.SELECT,
-    transaction,
-  });
-  if (!f) throw notFound('That field');
-  return f.farm_id;
+export async function sampleFieldOf(fieldId: number, transaction: Transaction): Promise<SampleField> {
+  const field = await Field.findByPk(fieldId, { attributes: ['id', 'farmId'], transaction });
+  if (!field) throw notFound('That field');
+  return { id: field.id, farmId: field.farmId };
 }
 
-/** The column values of a checked sample (typed values plus what the engine derives). */
-function columnsOf(input: SoilSampleCreate) {
+/** A field's samples, oldest first (undated last). */
+export async function listSamples(fieldId: number): Promise<SoilSample[]> {
+  return SoilSample.scope('oldestFirst').findAll({ where: { fieldId } });
+}
+
+/** The stored values of a checked sample: the typed values plus what the engine derives. */
+function valuesOf(input: SoilSampleCreate) {
   const d = deriveSample(input);
   if (!d.ok) throw badRequest('invalid_input', `${d.path}: ${d.reason}`, { issues: [{ path: d.path, message: d.reason }] });
   const v = d.value;
@@ -42,12 +47,12 @@ function columnsOf(input: SoilSampleCreate) {
     bufferPh: input.bufferPh ?? null,
     depthToGrayCm: input.depthToGrayCm ?? null,
     describedToCm: input.describedToCm ?? null,
-    bulkDensity: input.bulkDensity ?? null,
-    cec: input.cecCmolPerKg ?? null,
-    esp: input.espPct ?? null,
-    balls: feel ? feel.balls : null,
-    ribbonCm: feel ? (feel.ribbonCm ?? null) : null,
-    grit: feel ? (feel.feel ?? null) : null,
+    bulkDensityMgM3: input.bulkDensity ?? null,
+    cecCmolKg: input.cecCmolPerKg ?? null,
+    espPct: input.espPct ?? null,
+    feelBalls: feel ? feel.balls : null,
+    feelRibbonCm: feel ? (feel.ribbonCm ?? null) : null,
+    feelGrit: feel ? (feel.feel ?? null) : null,
     ribbonClass: v.ribbonClass,
     textureClass: v.textureClass,
     textureSource: v.textureSource,
@@ -57,123 +62,71 @@ function columnsOf(input: SoilSampleCreate) {
   };
 }
 
-const ASSIGNMENTS = `kind = :kind, label = :label, sampled_on = :sampledOn, depth_top_cm = :depthTopCm, depth_bottom_cm = :depthBottomCm,
-  sand_pct = :sandPct, silt_pct = :siltPct, clay_pct = :clayPct, separates_sum_pct = :separatesSumPct,
-  organic_matter_pct = :organicMatterPct, ph = :ph, buffer_ph = :bufferPh, depth_to_gray_cm = :depthToGrayCm,
-  described_to_cm = :describedToCm, bulk_density_mg_m3 = :bulkDensity, cec_cmol_kg = :cec, esp_pct = :esp,
-  feel_balls = :balls, feel_ribbon_cm = :ribbonCm, feel_grit = :grit, ribbon_class = :ribbonClass,
-  texture_class = :textureClass, texture_source = :textureSource, drainage_class = :drainageClass,
-  not_worth_amending = :notWorthAmending, drainage_source = :drainageSource`;
-
-/** Inserts one checked sample inside the caller's transaction; returns its id. */
-export async function insertSample(
-  sequelize: Sequelize,
-  actor: Actor,
-  fieldId: number,
-  input: SoilSampleCreate,
-  transaction: Transaction,
-  farmId?: number,
-): Promise<number> {
-  const cols = columnsOf(input);
-  const farm = farmId ?? (await farmOfField(sequelize, fieldId, transaction));
-  const [row] = await sequelize.query<{ id: number }>(
-    `INSERT INTO soil_samples (field_id, created_by, kind, label, sampled_on, depth_top_cm, depth_bottom_cm, sand_pct, silt_pct, clay_pct,
-        separates_sum_pct, organic_matter_pct, ph, buffer_ph, depth_to_gray_cm, described_to_cm, bulk_density_mg_m3, cec_cmol_kg, esp_pct,
-        feel_balls, feel_ribbon_cm, feel_grit, ribbon_class, texture_class, texture_source, drainage_class, not_worth_amending, drainage_source)
-     VALUES (:fieldId, :userId, :kind, :label, :sampledOn, :depthTopCm, :depthBottomCm, :sandPct, :siltPct, :clayPct,
-        :separatesSumPct, :organicMatterPct, :ph, :bufferPh, :depthToGrayCm, :describedToCm, :bulkDensity, :cec, :esp,
-        :balls, :ribbonCm, :grit, :ribbonClass, :textureClass, :textureSource, :drainageClass, :notWorthAmending, :drainageSource)
-     RETURNING id`,
-    { replacements: { ...cols, fieldId, userId: actor.userId }, type: QueryTypes.SELECT, transaction },
-  );
+/** Stores one checked sample inside the caller's transaction. */
+export async function insertSample(actor: Actor, field: SampleField, input: SoilSampleCreate, transaction: Transaction): Promise<SoilSample> {
+  const values = valuesOf(input);
+  const sample = await SoilSample.create({ ...values, fieldId: field.id, createdBy: actor.userId }, { transaction });
   await recordEvent(
-    { userId: actor.userId, farmId: farm, entity: 'soil_sample', entityId: row.id, action: 'created', detail: { fieldId, kind: cols.kind, textureClass: cols.textureClass } },
+    { userId: actor.userId, farmId: field.farmId, entity: 'soil_sample', entityId: sample.id, action: 'created', detail: { fieldId: field.id, kind: values.kind, textureClass: values.textureClass } },
     transaction,
   );
-  return row.id;
-}
-
-/** After the commit: the soil summary reads committed samples. */
-async function soilsChanged(sequelize: Sequelize, actor: Actor, farmId: number, fieldId: number): Promise<void> {
-  await afterInputsChange({ sequelize }, { kind: 'soils', farmId, fieldIds: [fieldId] }, actor);
+  return sample;
 }
 
 export async function createSample(sequelize: Sequelize, actor: Actor, fieldId: number, input: SoilSampleCreate): Promise<SoilSample> {
-  const { s, farmId } = await sequelize.transaction(async (t) => {
-    const id = await insertSample(sequelize, actor, fieldId, input, t);
-    const [s] = await querySamples(sequelize, { sampleIds: [id] }, t);
-    return { s, farmId: await farmOfField(sequelize, fieldId, t) };
+  const { sample, field } = await sequelize.transaction(async (t) => {
+    const field = await sampleFieldOf(fieldId, t);
+    return { sample: await insertSample(actor, field, input, t), field };
   });
-  await soilsChanged(sequelize, actor, farmId, fieldId);
-  return s;
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId: field.farmId, fieldIds: [field.id] }, actor);
+  return sample;
 }
 
-/** A stored row back in the create payload's shape, so a change can be merged and re-checked. */
-function inputOf(r: SampleRow): Record<string, unknown> {
-  return {
-    kind: r.kind,
-    label: r.label,
-    sampledOn: r.sampled_on,
-    depthTopCm: r.depth_top_cm,
-    depthBottomCm: r.depth_bottom_cm,
-    // The renormalised values: they add up to 100 %, so a stored sample always re-checks.
-    sandPct: r.sand_pct,
-    siltPct: r.silt_pct,
-    clayPct: r.clay_pct,
-    organicMatterPct: r.organic_matter_pct,
-    ph: r.ph,
-    bufferPh: r.buffer_ph,
-    depthToGrayCm: r.depth_to_gray_cm,
-    describedToCm: r.described_to_cm,
-    bulkDensity: r.bulk_density_mg_m3,
-    cecCmolPerKg: r.cec_cmol_kg,
-    espPct: r.esp_pct,
-    balls: r.feel_balls ?? undefined,
-    ribbonCm: r.feel_ribbon_cm,
-    feel: r.feel_grit,
-  };
+/**
+ * A stored sample back in the create payload's shape (the API's sample uses the same names; the
+ * schema drops the rest), so a change can be merged and re-checked. Sand, silt and clay are the
+ * renormalised values: they add up to 100 %, so a stored sample always re-checks.
+ */
+function inputOf(s: SoilSample): Record<string, unknown> {
+  const { feelTest, ...stored } = presentSample(s);
+  return { ...stored, balls: feelTest?.balls, ribbonCm: feelTest?.ribbonCm ?? null, feel: feelTest?.feel ?? null };
 }
 
 export async function updateSample(sequelize: Sequelize, actor: Actor, sampleId: number, patch: SoilSampleUpdate): Promise<SoilSample> {
-  const { s, farmId } = await sequelize.transaction(async (t) => {
-    const [row] = await sampleRows(sequelize, { sampleIds: [sampleId] }, t, true);
-    if (!row) throw notFound('That soil sample');
-    if (row.version !== patch.version) {
+  const { sample, field } = await sequelize.transaction(async (t) => {
+    const sample = await SoilSample.findByPk(sampleId, { lock: t.LOCK.UPDATE, transaction: t });
+    if (!sample) throw notFound('That soil sample');
+    if (sample.version !== patch.version) {
       throw conflict(
         'stale_version',
-        `Someone changed this soil sample since you opened it (you had version ${patch.version}, it is now ${row.version}). Reload it and make your change again.`,
-        { current: presentSample(row) },
+        `Someone changed this soil sample since you opened it (you had version ${patch.version}, it is now ${sample.version}). Reload it and make your change again.`,
+        { current: presentSample(sample) },
       );
     }
     const { version: _version, ...changes } = patch;
-    const merged = { ...inputOf(row), ...Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)) };
+    const merged = { ...inputOf(sample), ...Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)) };
     const parsed = SoilSampleCreate.safeParse(merged);
     if (!parsed.success) {
       const d = describeIssues(parsed.error);
       throw badRequest('invalid_input', d.message, { issues: d.issues });
     }
-    const cols = columnsOf(parsed.data);
-    await sequelize.query(`UPDATE soil_samples SET ${ASSIGNMENTS}, version = version + 1, updated_at = now() WHERE id = :id`, {
-      replacements: { ...cols, id: sampleId },
-      transaction: t,
-    });
-    const farmId = await farmOfField(sequelize, row.field_id, t);
-    await recordEvent({ userId: actor.userId, farmId, entity: 'soil_sample', entityId: sampleId, action: 'updated', detail: { changed: Object.keys(changes) } }, t);
-    const [s] = await querySamples(sequelize, { sampleIds: [sampleId] }, t);
-    return { s, farmId };
+    await sample.update({ ...valuesOf(parsed.data), version: sample.version + 1 }, { transaction: t });
+    const field = await sampleFieldOf(sample.fieldId, t);
+    await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'soil_sample', entityId: sampleId, action: 'updated', detail: { changed: Object.keys(changes) } }, t);
+    return { sample, field };
   });
-  await soilsChanged(sequelize, actor, farmId, s.fieldId);
-  return s;
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId: field.farmId, fieldIds: [field.id] }, actor);
+  return sample;
 }
 
 export async function deleteSample(sequelize: Sequelize, actor: Actor, sampleId: number): Promise<void> {
-  const { farmId, fieldId } = await sequelize.transaction(async (t) => {
-    const [row] = await sampleRows(sequelize, { sampleIds: [sampleId] }, t, true);
-    if (!row) throw notFound('That soil sample');
-    const farmId = await farmOfField(sequelize, row.field_id, t);
-    await sequelize.query('DELETE FROM soil_samples WHERE id = :id', { replacements: { id: sampleId }, transaction: t });
-    await recordEvent({ userId: actor.userId, farmId, entity: 'soil_sample', entityId: sampleId, action: 'deleted', detail: { fieldId: row.field_id, label: row.label } }, t);
-    return { farmId, fieldId: row.field_id };
+  const field = await sequelize.transaction(async (t) => {
+    const sample = await SoilSample.findByPk(sampleId, { lock: t.LOCK.UPDATE, transaction: t });
+    if (!sample) throw notFound('That soil sample');
+    const field = await sampleFieldOf(sample.fieldId, t);
+    await sample.destroy({ transaction: t });
+    await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'soil_sample', entityId: sampleId, action: 'deleted', detail: { fieldId: sample.fieldId, label: sample.label } }, t);
+    return field;
   });
-  await soilsChanged(sequelize, actor, farmId, fieldId);
+  await afterInputsChange({ sequelize }, { kind: 'soils', farmId: field.farmId, fieldIds: [field.id] }, actor);
 }

@@ -16,8 +16,14 @@ import {
 } from '../../../shared/erosion';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
 import type { Origin } from '../../../shared/schemas/provenance';
+import type { SoilSample } from '../../models';
 import type { MapAggregate } from './field-soil-map';
-import type { SampleRow } from './soil-sample-presenter';
+
+/** What the summary reads of each sample. */
+export type SampleFigures = Pick<
+  SoilSample,
+  'kind' | 'sandPct' | 'siltPct' | 'clayPct' | 'organicMatterPct' | 'ph' | 'bufferPh' | 'depthToGrayCm' | 'describedToCm' | 'textureClass' | 'bulkDensityMgM3' | 'cecCmolKg' | 'espPct'
+>;
 
 /** Organic matter taken when no sample gives it, for the K table only (common practice). */
 export const ASSUMED_OM_PCT = 2;
@@ -34,25 +40,25 @@ const round1 = (x: number) => Math.round(x * 10) / 10;
 const isTexture = (s: string | null): s is TextureClass => s !== null && (TEXTURE_CLASSES as readonly string[]).includes(s);
 
 /** The most common feel-test class; a tie goes to the latest sample. */
-function feelClass(samples: SampleRow[]): TextureClass | null {
+function feelClass(samples: SampleFigures[]): TextureClass | null {
   const counts = new Map<string, number>();
   let best: string | null = null;
   for (const s of samples) {
-    if (s.kind !== 'feel' || !s.texture_class) continue;
-    const n = (counts.get(s.texture_class) ?? 0) + 1;
-    counts.set(s.texture_class, n);
-    if (best === null || n >= (counts.get(best) ?? 0)) best = s.texture_class;
+    if (s.kind !== 'feel' || !s.textureClass) continue;
+    const n = (counts.get(s.textureClass) ?? 0) + 1;
+    counts.set(s.textureClass, n);
+    if (best === null || n >= (counts.get(best) ?? 0)) best = s.textureClass;
   }
   return isTexture(best) ? best : null;
 }
 
-export function summariseSoils(samples: SampleRow[], map: MapAggregate): FieldSoilSummary {
-  const lab = samples.filter((s) => s.kind === 'lab' && s.sand_pct !== null);
-  const sandPct = mean(lab.map((s) => s.sand_pct));
-  const siltPct = mean(lab.map((s) => s.silt_pct));
-  const clayPct = mean(lab.map((s) => s.clay_pct));
-  const organicMatterPct = mean(samples.map((s) => s.organic_matter_pct));
-  const grays = samples.map((s) => s.depth_to_gray_cm).filter((d): d is number => d !== null);
+export function summariseSoils(samples: SampleFigures[], map: MapAggregate): FieldSoilSummary {
+  const lab = samples.filter((s) => s.kind === 'lab' && s.sandPct !== null);
+  const sandPct = mean(lab.map((s) => s.sandPct));
+  const siltPct = mean(lab.map((s) => s.siltPct));
+  const clayPct = mean(lab.map((s) => s.clayPct));
+  const organicMatterPct = mean(samples.map((s) => s.organicMatterPct));
+  const grays = samples.map((s) => s.depthToGrayCm).filter((d): d is number => d !== null);
   const depthToGrayCm = grays.length ? Math.min(...grays) : null;
 
   // Texture: the mean of the lab fractions (SSM ch. 3), else the feel tests, else the soil map.
@@ -66,7 +72,7 @@ export function summariseSoils(samples: SampleRow[], map: MapAggregate): FieldSo
   let drainageClass: string | null = null;
   let notWorthAmending = false;
   let drainageFrom: 'samples' | 'map' | null = null;
-  const describedTo = samples.map((s) => s.described_to_cm).filter((d): d is number => d !== null);
+  const describedTo = samples.map((s) => s.describedToCm).filter((d): d is number => d !== null);
   const verdict = depthToGrayCm !== null
     ? drainageVerdict({ depthToGrayCm })
     : describedTo.length ? drainageVerdict({ depthToGrayCm: null, describedToCm: Math.max(...describedTo) }) : null;
@@ -137,7 +143,7 @@ export function summariseSoils(samples: SampleRow[], map: MapAggregate): FieldSo
     organicMatterPct,
     textureClass,
     ph: mean(samples.map((s) => s.ph)),
-    bufferPh: mean(samples.map((s) => s.buffer_ph)),
+    bufferPh: mean(samples.map((s) => s.bufferPh)),
     depthToGrayCm,
     drainageClass,
     notWorthAmending,
@@ -147,9 +153,9 @@ export function summariseSoils(samples: SampleRow[], map: MapAggregate): FieldSo
     tSource,
     hsg,
     hsgShares,
-    bulkDensity: mean(samples.map((s) => s.bulk_density_mg_m3)),
-    cecCmolPerKg: mean(samples.map((s) => s.cec_cmol_kg)),
-    espPct: mean(samples.map((s) => s.esp_pct)),
+    bulkDensity: mean(samples.map((s) => s.bulkDensityMgM3)),
+    cecCmolPerKg: mean(samples.map((s) => s.cecCmolKg)),
+    espPct: mean(samples.map((s) => s.espPct)),
     problemClay: problemClayReasons.length > 0,
     problemClayReasons,
   };

@@ -17,5 +17,6 @@ export { DEFAULT_SLOPE_CLASSES, parseSlopeClasses, type SlopeClass } from './slo
 export { loadDefaultSlopeClasses } from './load-slope-classes';
 export { reprojectBoundary, converterBetween } from './reproject';
 export { proj4Definition } from './epsg-definitions';
-export { renderLayer, layerLegend, type LayerKind, type RenderResult, type RenderValues, type BoundsWgs84 } from './render-layer';
+export { renderLayer, layerLegend, type LayerKind, type LegendEntry, type RenderResult, type RenderValues, type BoundsWgs84 } from './render-layer';
 export { runTerrain, type TerrainGrids, type TerrainOptions } from './pipeline';
+export { LAYER_LABELS } from './layer-labels';
