@@ -82,14 +82,13 @@ export const GroundUpdate = z.object({
 export type Ground = { slopePct: number | null; slopeLengthM: number | null; version: number };
 
 /** The text parts of a rainfall-record upload (multipart): both optional, numbers as text. */
-const formNumber = (field: string, min: number, max: number) =>
-  z.preprocess(
-    (v) => (v === undefined || v === '' ? undefined : Number(v)),
-    z.number({ error: `${field}: must be a number from ${min} to ${max}.` }).min(min, `${field}: must be a number from ${min} to ${max}.`).max(max, `${field}: must be a number from ${min} to ${max}.`).optional(),
-  );
+const formNumber = (min: number, max: number) => {
+  const message = `must be a number from ${min} to ${max}`;
+  return z.preprocess((v) => (v === undefined || v === '' ? undefined : Number(v)), z.number({ error: message }).min(min, message).max(max, message).optional());
+};
 export const RainfallRecordFields = z.object({
   /** Years the record spans, when its dates do not say it plainly. */
-  years: formNumber('years', 0.1, 200),
-  designStormMm: formNumber('designStormMm', 1, 1000),
+  years: formNumber(0.1, 200),
+  designStormMm: formNumber(1, 1000),
 });
 export type RainfallRecordFields = z.output<typeof RainfallRecordFields>;
