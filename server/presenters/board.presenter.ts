@@ -4,7 +4,7 @@
 import type { Board, BoardRow, StoredBoardFigures } from '../../shared/schemas/assessment';
 import type { BoardRecord } from '../models/assessment.queries';
 
-export function rankRows(rows: BoardRow[]): BoardRow[] {
+function rankRows(rows: BoardRow[]): BoardRow[] {
   return [...rows].sort((x, y) => {
     if (x.aOverT == null || y.aOverT == null) return x.aOverT == null ? (y.aOverT == null ? x.name.localeCompare(y.name) : 1) : -1;
     return y.aOverT - x.aOverT || (y.tonnesPerYr ?? 0) - (x.tonnesPerYr ?? 0);
@@ -12,7 +12,7 @@ export function rankRows(rows: BoardRow[]): BoardRow[] {
 }
 
 /** A board row; the farm's name only on the advisor's board across farms. */
-export function presentBoardRow(r: BoardRecord & { boardRow: StoredBoardFigures }, withFarmName: boolean): BoardRow {
+function presentBoardRow(r: BoardRecord & { boardRow: StoredBoardFigures }, withFarmName: boolean): BoardRow {
   return {
     fieldId: r.fieldId,
     farmId: r.farmId,

@@ -9,7 +9,7 @@ import { buildEstimateInput } from './build-estimate-input';
 import type { GatheredInputs } from './gathered-inputs';
 
 /** Gray, mottled subsoil means a high water table; amendments will not fix it. */
-export const NOT_WORTH_AMENDING_ADVICE =
+const NOT_WORTH_AMENDING_ADVICE =
   'Gray or mottled subsoil near the surface means the ground stays wet: gypsum, lime or organic matter will not fix it. ' +
   'Consider raised or no-dig beds, permanent cover, or drainage designed to local standards by a qualified person ' +
   '(check for buried utilities before any digging, and follow local drainage rules).';
@@ -31,7 +31,7 @@ function withSoilSources(e: EstimateSuccess, soil: FieldSoilSummary): EstimateSu
 }
 
 /** Words beside a rank: rules of thumb for what drives the loss (common practice, no single source). */
-export function reasonsFor(a: FieldAssessment): string[] {
+function reasonsFor(a: FieldAssessment): string[] {
   const out: string[] = [];
   const e = a.estimate;
   if (e) {
@@ -47,7 +47,7 @@ export function reasonsFor(a: FieldAssessment): string[] {
   return out;
 }
 
-export type AssessedField = { estimateInput: EstimateInput | null; results: FieldAssessment; boardRow: StoredBoardFigures };
+type AssessedField = { estimateInput: EstimateInput | null; results: FieldAssessment; boardRow: StoredBoardFigures };
 
 export function assessField(g: GatheredInputs, computedAt: Date): AssessedField {
   const { input, gaps, lines } = buildEstimateInput(g);

@@ -7,12 +7,12 @@ import type { Origin } from '../../../shared/schemas/provenance';
 import type { GatheredInputs } from './gathered-inputs';
 
 /** Slope length assumed for the support-practice limit when only a DEM gives the slope (common practice, no single source). */
-export const ASSUMED_SLOPE_LENGTH_M = 50;
+const ASSUMED_SLOPE_LENGTH_M = 50;
 
 const typed = (typedBy: string | null): Origin => (typedBy ? { kind: 'typed', typedBy } : { kind: 'typed' });
 const fmt = (x: number, d = 1) => x.toFixed(d);
 
-export type BuiltInput = { input: EstimateInput | null; gaps: Gap[]; lines: AssessmentInput[] };
+type BuiltInput = { input: EstimateInput | null; gaps: Gap[]; lines: AssessmentInput[] };
 
 export function buildEstimateInput(g: GatheredInputs): BuiltInput {
   const gaps: Gap[] = [];
