@@ -10,6 +10,7 @@ import { JobQueue } from './services/jobs/job-queue';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
 import { seedDemoSeason } from './db/seeders/demo-season';
 import { seedDemoSecondFarm } from './db/seeders/demo-second-farm';
+import { refreshStaleAssessments } from './services/assessments/refresh-assessments';
 
 function newestMtime(dir: string): number {
   let newest = 0;
@@ -44,6 +45,9 @@ async function main(): Promise<void> {
     console.log('Loaded the demo farm (Alder Run Farm) and its 2027 season.');
     if (await seedDemoTerrain({ sequelize: db.sequelize, storage, jobs })) console.log('Queued the demo elevation model for processing.');
   }
+  // Stored assessments worked out by an older engine (or missing) are redone once, here, not on reads.
+  const refreshedFarms = await refreshStaleAssessments(db.sequelize);
+  if (refreshedFarms) console.log(`Brought the stored assessments of ${refreshedFarms} farm${refreshedFarms === 1 ? '' : 's'} up to date.`);
   await buildClientIfStale();
   const app = createApp({ sequelize: db.sequelize, config, storage, jobs });
   const server: Server = app.listen(config.port, config.host);

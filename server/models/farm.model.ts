@@ -1,5 +1,7 @@
 import { Membership } from './membership.model';
 import { Field } from './field.model';
+import { Season } from './season.model';
+import { FarmClimate } from './farm-climate.model';
 import { SoilMap } from './soil-map.model';
 import { ElevationModel } from './elevation-model.model';
 import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
@@ -29,6 +31,8 @@ export class Farm extends Model<InferAttributes<Farm>, InferCreationAttributes<F
   static associate(): void {
     Farm.hasMany(Membership, { foreignKey: 'farmId', as: 'memberships' });
     Farm.hasMany(Field, { foreignKey: 'farmId', as: 'fields' });
+    Farm.hasMany(Season, { foreignKey: 'farmId', as: 'seasons' });
+    Farm.hasOne(FarmClimate, { foreignKey: 'farmId', as: 'climate' });
     Farm.hasOne(SoilMap, { foreignKey: 'farmId', as: 'soilMap' });
     Farm.hasMany(ElevationModel, { foreignKey: 'farmId', as: 'elevationModels' });
   }

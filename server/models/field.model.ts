@@ -1,5 +1,8 @@
 import { Farm } from './farm.model';
 import { Membership } from './membership.model';
+import { FieldCropping } from './field-cropping.model';
+import { FieldGround } from './field-ground.model';
+import { Assessment } from './assessment.model';
 import { SoilPhoto } from './soil-photo.model';
 import { SoilSample } from './soil-sample.model';
 import { FieldTerrain } from './field-terrain.model';
@@ -48,6 +51,9 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
   static associate(): void {
     Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });
+    Field.hasMany(FieldCropping, { foreignKey: 'fieldId', as: 'croppings' });
+    Field.hasOne(FieldGround, { foreignKey: 'fieldId', as: 'ground' });
+    Field.hasMany(Assessment, { foreignKey: 'fieldId', as: 'assessments' });
     Field.hasMany(SoilSample, { foreignKey: 'fieldId', as: 'soilSamples' });
     Field.hasMany(SoilPhoto, { foreignKey: 'fieldId', as: 'soilPhotos' });
     Field.hasOne(FieldTerrain, { foreignKey: 'fieldId', as: 'terrain' });

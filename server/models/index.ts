@@ -16,11 +16,22 @@ import { ProcessingJob } from './processing-job.model';
 import { FieldTerrain } from './field-terrain.model';
 import { TerrainLayer } from './terrain-layer.model';
 import { TerrainGrid } from './terrain-grid.model';
+import { Season } from './season.model';
+import { FieldCropping } from './field-cropping.model';
+import { FarmClimate } from './farm-climate.model';
+import { FieldGround } from './field-ground.model';
+import { Assessment } from './assessment.model';
 
-export { User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid };
+export {
+  User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment,
+};
 
 /** Every model, in an order where a table comes after the tables it refers to. */
-const MODELS = [User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid];
+const MODELS = [
+  User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment,
+];
 
 let initialised: Sequelize | null = null;
 

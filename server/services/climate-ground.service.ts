@@ -1,81 +1,96 @@
-// The farm's climate (R and the design storm) and a field's typed ground (slope % and
-// slope length where no elevation model covers it). Both versioned: 409 when stale.
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
-import type { Climate, ClimateUpdate, Ground, RainfallRecordSummary } from '../../shared/schemas/season';
-import { conflict, invalid } from '../lib/http-error';
+// The farm's climate (R and the design storm) and a field's typed ground (slope % and slope
+// length where no elevation model covers it). Both versioned: 409 when stale. Every change
+// refreshes the stored assessments it touches.
+import { UniqueConstraintError, type Sequelize } from 'sequelize';
+import type { Climate, ClimateUpdate, Ground, RainfallRecordFields, RainfallRecordSummary } from '../../shared/schemas/season';
+import { badRequest, conflict, HttpError, invalid } from '../lib/http-error';
+import { FarmClimate, FieldGround } from '../models';
+import { NO_GROUND, presentClimate, presentGround } from '../presenters/seasons.presenter';
 import { recordEvent } from './audit';
+import { afterInputsChange } from './input-changes.service';
+import type { JobQueue } from './jobs/job-queue';
+import { rFromRainfallCsv } from './rainfall-record';
 
-type ClimateRow = { r_from: Climate['rFrom']; r_value: number | null; annual_precipitation_mm: number | null; design_storm_mm: number; r_record: Climate['record']; version: number };
-
-export async function getClimate(sequelize: Sequelize, farmId: number, transaction?: Transaction): Promise<Climate | null> {
-  const [r] = await sequelize.query<ClimateRow>(`SELECT * FROM farm_climates WHERE farm_id = :farmId`, { replacements: { farmId }, type: QueryTypes.SELECT, transaction });
-  return r
-    ? { rFrom: r.r_from, rValue: r.r_value, annualPrecipitationMm: r.annual_precipitation_mm, designStormMm: r.design_storm_mm, record: r.r_record, version: r.version }
-    : null;
+export async function getClimate(farmId: number): Promise<Climate> {
+  const c = await FarmClimate.findByPk(farmId);
+  if (!c) throw new HttpError(404, 'no_climate', "This farm's climate (R and the design storm) is not set yet.");
+  return presentClimate(c);
 }
 
-function staleCheck(what: string, current: { version: number } | null, sent: number | undefined): void {
+function staleCheck<T extends { version: number }>(what: string, current: T | null, sent: number | undefined): void {
   if (current && current.version !== sent) {
     throw conflict('stale_version', `Someone changed the ${what} since you opened it (you had version ${sent ?? 'none'}, it is now ${current.version}). Reload and change it again.`, { current });
   }
 }
 
-export async function putClimate(sequelize: Sequelize, actor: { userId: number }, farmId: number, input: ClimateUpdate): Promise<Climate> {
+/** Two first saves at the same moment: the loser is told to reload. */
+async function firstSave<T>(what: string, create: () => Promise<T>): Promise<T> {
+  try {
+    return await create();
+  } catch (e) {
+    if (e instanceof UniqueConstraintError) throw conflict('stale_version', `Someone saved the ${what} at the same time. Reload and change it again.`);
+    throw e;
+  }
+}
+
+type ClimateValues = Pick<FarmClimate, 'rFrom' | 'rValue' | 'annualPrecipitationMm' | 'designStormMm' | 'rRecord'>;
+
+async function saveClimate(sequelize: Sequelize, actor: { userId: number }, farmId: number, values: (cur: FarmClimate | null) => ClimateValues, version: number | undefined | 'any', audit: { action?: string; detail?: Record<string, unknown> }): Promise<Climate> {
   return sequelize.transaction(async (t) => {
-    const [cur] = await sequelize.query<{ version: number }>(`SELECT version FROM farm_climates WHERE farm_id = :farmId FOR UPDATE`, { replacements: { farmId }, type: QueryTypes.SELECT, transaction: t });
-    staleCheck("farm's climate", cur ?? null, input.version);
-    await sequelize.query(
-      `INSERT INTO farm_climates (farm_id, r_from, r_value, annual_precipitation_mm, design_storm_mm) VALUES (:farmId, :rFrom, :rValue, :p, :storm)
-       ON CONFLICT (farm_id) DO UPDATE SET r_from = EXCLUDED.r_from, r_value = EXCLUDED.r_value, annual_precipitation_mm = EXCLUDED.annual_precipitation_mm,
-         design_storm_mm = EXCLUDED.design_storm_mm, r_record = NULL, version = farm_climates.version + 1, updated_at = now()`,
-      { replacements: { farmId, rFrom: input.rFrom, rValue: input.rValue ?? null, p: input.annualPrecipitationMm ?? null, storm: input.designStormMm }, transaction: t },
-    );
-    await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: cur ? 'updated' : 'created' }, t);
-    return (await getClimate(sequelize, farmId, t))!;
+    const cur = await FarmClimate.findByPk(farmId, { transaction: t, lock: t.LOCK.UPDATE });
+    if (version !== 'any') staleCheck("farm's climate", cur ? presentClimate(cur) : null, version);
+    const next = { ...values(cur), updatedBy: actor.userId };
+    const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("farm's climate", () => FarmClimate.create({ farmId, ...next }, { transaction: t }));
+    await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: audit.action ?? (cur ? 'updated' : 'created'), ...(audit.detail ? { detail: audit.detail } : {}) }, t);
+    await afterInputsChange({ sequelize }, { kind: 'climate', farmId }, actor, t);
+    // Read back: REAL columns round what was sent, and the answer should match a later GET.
+    return presentClimate(await row.reload({ transaction: t }));
   });
 }
 
-/** R from an uploaded rainfall record; the design storm stays unless given. */
-export async function putClimateFromRecord(
+export async function putClimate(sequelize: Sequelize, actor: { userId: number }, farmId: number, input: ClimateUpdate): Promise<Climate> {
+  const values = (): ClimateValues => ({ rFrom: input.rFrom, rValue: input.rValue ?? null, annualPrecipitationMm: input.annualPrecipitationMm ?? null, designStormMm: input.designStormMm, rRecord: null });
+  return saveClimate(sequelize, actor, farmId, values, input.version, {});
+}
+
+/** R from an uploaded rainfall record (breakpoint CSV); the design storm stays unless given. */
+export async function putClimateFromRecord(sequelize: Sequelize, actor: { userId: number }, farmId: number, file: Buffer | undefined, fields: RainfallRecordFields): Promise<Climate> {
+  if (!file) throw badRequest('no_file', 'Attach the rainfall record as the multipart part named "file".');
+  const r = rFromRainfallCsv(file, fields.years);
+  if (!r.ok) throw new HttpError(r.status, r.error, r.message);
+  const summary: RainfallRecordSummary = r.summary;
+  const values = (cur: FarmClimate | null): ClimateValues => {
+    const storm = fields.designStormMm ?? cur?.designStormMm;
+    if (storm === undefined) throw invalid('invalid_input', 'designStormMm: give the design storm depth (mm) with the first climate record of a farm.');
+    return { rFrom: 'record', rValue: summary.r, annualPrecipitationMm: null, designStormMm: storm, rRecord: summary };
+  };
+  return saveClimate(sequelize, actor, farmId, values, 'any', { action: 'rainfall-record', detail: { r: summary.r, years: summary.years } });
+}
+
+export async function getGround(fieldId: number): Promise<Ground | typeof NO_GROUND> {
+  const g = await FieldGround.findByPk(fieldId);
+  return g ? presentGround(g) : NO_GROUND;
+}
+
+export async function putGround(
   sequelize: Sequelize,
   actor: { userId: number },
-  farmId: number,
-  summary: RainfallRecordSummary,
-  designStormMm: number | undefined,
-): Promise<Climate> {
-  return sequelize.transaction(async (t) => {
-    const [cur] = await sequelize.query<{ design_storm_mm: number }>(`SELECT design_storm_mm FROM farm_climates WHERE farm_id = :farmId FOR UPDATE`, { replacements: { farmId }, type: QueryTypes.SELECT, transaction: t });
-    const storm = designStormMm ?? cur?.design_storm_mm;
-    if (storm === undefined) throw invalid('invalid_input', 'designStormMm: give the design storm depth (mm) with the first climate record of a farm.');
-    await sequelize.query(
-      `INSERT INTO farm_climates (farm_id, r_from, r_value, annual_precipitation_mm, design_storm_mm, r_record) VALUES (:farmId, 'record', :r, NULL, :storm, :rec)
-       ON CONFLICT (farm_id) DO UPDATE SET r_from = 'record', r_value = EXCLUDED.r_value, annual_precipitation_mm = NULL,
-         design_storm_mm = EXCLUDED.design_storm_mm, r_record = EXCLUDED.r_record, version = farm_climates.version + 1, updated_at = now()`,
-      { replacements: { farmId, r: summary.r, storm, rec: JSON.stringify(summary) }, transaction: t },
-    );
-    await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: 'rainfall-record', detail: { r: summary.r, years: summary.years } }, t);
-    return (await getClimate(sequelize, farmId, t))!;
-  });
-}
-
-export async function getGround(sequelize: Sequelize, fieldId: number, transaction?: Transaction): Promise<Ground | null> {
-  const [r] = await sequelize.query<{ slope_pct: number | null; slope_length_m: number | null; version: number }>(
-    `SELECT slope_pct, slope_length_m, version FROM field_grounds WHERE field_id = :fieldId`,
-    { replacements: { fieldId }, type: QueryTypes.SELECT, transaction },
-  );
-  return r ? { slopePct: r.slope_pct, slopeLengthM: r.slope_length_m, version: r.version } : null;
-}
-
-export async function putGround(sequelize: Sequelize, actor: { userId: number }, field: { id: number; farmId: number }, input: { version?: number; slopePct: number | null; slopeLengthM: number | null }): Promise<Ground> {
-  return sequelize.transaction(async (t) => {
-    const [cur] = await sequelize.query<{ version: number }>(`SELECT version FROM field_grounds WHERE field_id = :id FOR UPDATE`, { replacements: { id: field.id }, type: QueryTypes.SELECT, transaction: t });
-    staleCheck("field's slope", cur ?? null, input.version);
-    await sequelize.query(
-      `INSERT INTO field_grounds (field_id, slope_pct, slope_length_m) VALUES (:id, :s, :l)
-       ON CONFLICT (field_id) DO UPDATE SET slope_pct = EXCLUDED.slope_pct, slope_length_m = EXCLUDED.slope_length_m, version = field_grounds.version + 1, updated_at = now()`,
-      { replacements: { id: field.id, s: input.slopePct, l: input.slopeLengthM }, transaction: t },
-    );
+  field: { id: number; farmId: number },
+  input: { version?: number; slopePct: number | null; slopeLengthM: number | null },
+  jobs?: JobQueue,
+): Promise<Ground> {
+  const { ground, slopeLengthChanged } = await sequelize.transaction(async (t) => {
+    const cur = await FieldGround.findByPk(field.id, { transaction: t, lock: t.LOCK.UPDATE });
+    staleCheck("field's slope", cur ? presentGround(cur) : null, input.version);
+    const lengthBefore = cur?.slopeLengthM ?? null;
+    const next = { slopePct: input.slopePct, slopeLengthM: input.slopeLengthM, updatedBy: actor.userId };
+    const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("field's slope", () => FieldGround.create({ fieldId: field.id, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'ground', entityId: field.id, action: cur ? 'updated' : 'created' }, t);
-    return (await getGround(sequelize, field.id, t))!;
+    await row.reload({ transaction: t });
+    return { ground: presentGround(row), slopeLengthChanged: lengthBefore !== row.slopeLengthM };
   });
+  // After the commit: the typed slope length caps the elevation model's flow length for LS, so a
+  // change of it queues a terrain run, and that run must read the committed length.
+  await afterInputsChange({ sequelize, jobs }, { kind: 'ground', farmId: field.farmId, fieldIds: [field.id], slopeLengthChanged }, actor);
+  return ground;
 }

@@ -4,9 +4,8 @@
 // Field borders break overland flow for LS; where water gathers is drawn from unbroken flow.
 // Field labels are 2 bytes per cell (Uint16, up to 65 535 fields), kept as such for the soil-loss map.
 import type { Sequelize } from 'sequelize';
-import { ElevationModel, FieldTerrain, TerrainGrid, TerrainLayer } from '../models';
+import { ElevationModel, FieldGround, FieldTerrain, TerrainGrid, TerrainLayer } from '../models';
 import type { StoredTerrainStats } from '../models/field-terrain.model';
-import { typedSlopeLengthsM } from '../models/field-terrain.queries';
 import type { FileStorage } from './storage/file-storage';
 import { newKey } from './storage/file-storage';
 import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats, converterBetween, rasterisePolygon, LAYER_LABELS } from './terrain';
@@ -46,7 +45,7 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
       for (const cell of rasterisePolygon(rings.rings, frame)) labels[cell] = idx + 1;
     });
     // A slope length typed on the Ground tab (terraces, diversions, field roads) caps the flow length.
-    const typedById = await typedSlopeLengthsM(job.farmId);
+    const typedById = await FieldGround.typedSlopeLengthsM(job.farmId);
     const capByLabel = new Float64Array(fields.length + 1).fill(NaN);
     fields.forEach((f, idx) => (capByLabel[idx + 1] = typedById.get(f.id) ?? NaN));
     let last = 0;

@@ -1,114 +1,95 @@
-// Seasons of a farm ("2027"), and the per-season, per-field cropping record.
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
-import type { Cropping, CroppingUpdate, Season } from '../../shared/schemas/season';
-import { conflict, notFound } from '../lib/http-error';
+// Seasons of a farm ("2027"), and the per-season, per-field cropping record. A new season and
+// every cropping change refresh the stored assessments they touch.
+import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
+import type { Cropping, CroppingUpdate, Season as SeasonShape } from '../../shared/schemas/season';
+import { conflict, HttpError, notFound } from '../lib/http-error';
+import { FieldCropping, Season } from '../models';
+import { presentCropping, presentSeason } from '../presenters/seasons.presenter';
 import { recordEvent } from './audit';
+import { afterInputsChange, type InputChange } from './input-changes.service';
 
-export async function listSeasons(sequelize: Sequelize, farmId: number): Promise<Season[]> {
-  return sequelize.query<Season>(`SELECT id, label FROM seasons WHERE farm_id = :farmId ORDER BY label DESC`, { replacements: { farmId }, type: QueryTypes.SELECT });
-}
-
-/** The season with that label, created when missing. */
-export async function ensureSeason(sequelize: Sequelize, farmId: number, label: string, transaction?: Transaction): Promise<Season> {
-  const [row] = await sequelize.query<Season>(
-    `INSERT INTO seasons (farm_id, label) VALUES (:farmId, :label)
-     ON CONFLICT (farm_id, label) DO UPDATE SET label = EXCLUDED.label RETURNING id, label`,
-    { replacements: { farmId, label }, type: QueryTypes.SELECT, transaction },
-  );
-  return row;
-}
-
-export async function findSeason(sequelize: Sequelize, farmId: number, label: string): Promise<Season | null> {
-  const [row] = await sequelize.query<Season>(`SELECT id, label FROM seasons WHERE farm_id = :farmId AND label = :label`, {
-    replacements: { farmId, label },
-    type: QueryTypes.SELECT,
-  });
-  return row ?? null;
+export async function listSeasons(farmId: number, transaction?: Transaction): Promise<SeasonShape[]> {
+  return (await Season.scope('newestFirst').findAll({ where: { farmId }, transaction })).map(presentSeason);
 }
 
 /** The season asked for, or the newest one; 404 when the farm has none by that label. */
-export async function resolveSeason(sequelize: Sequelize, farmId: number, label: string | undefined): Promise<Season> {
+export async function resolveSeason(farmId: number, label: string | undefined): Promise<SeasonShape> {
   if (label) {
-    const s = await findSeason(sequelize, farmId, label);
+    const s = await Season.findOne({ where: { farmId, label } });
     if (!s) throw notFound(`Season ${label}`);
-    return s;
+    return presentSeason(s);
   }
-  const [latest] = await listSeasons(sequelize, farmId);
+  const latest = await Season.scope('newestFirst').findOne({ where: { farmId } });
   if (!latest) throw notFound('A season on this farm');
-  return latest;
+  return presentSeason(latest);
 }
 
-type CroppingRow = {
-  field_id: number;
-  label: string;
-  crop: Cropping['crop'];
-  tillage: Cropping['tillage'];
-  residue_pct: number | null;
-  ground_cover_pct: number | null;
-  cover_crop: Cropping['coverCrop'];
-  practice: Cropping['practice'];
-  terrace_interval_m: number | null;
-  version: number;
-  updated_at: Date;
-};
+/** The season with that label, created when missing. */
+async function ensureSeason(farmId: number, label: string, transaction: Transaction): Promise<{ season: Season; created: boolean }> {
+  const [season, created] = await Season.findOrCreate({ where: { farmId, label }, transaction });
+  return { season, created };
+}
 
-const presentCropping = (r: CroppingRow): Cropping => ({
-  fieldId: r.field_id,
-  season: r.label,
-  crop: r.crop,
-  tillage: r.tillage,
-  residuePct: r.residue_pct,
-  groundCoverPct: r.ground_cover_pct,
-  coverCrop: r.cover_crop,
-  practice: r.practice,
-  terraceIntervalM: r.terrace_interval_m,
-  version: r.version,
-  updatedAt: new Date(r.updated_at).toISOString(),
-});
+/** POST a season: the existing one when the label is taken. */
+export async function createSeason(sequelize: Sequelize, actor: { userId: number }, farmId: number, label: string): Promise<{ season: SeasonShape; created: boolean }> {
+  return sequelize.transaction(async (t) => {
+    const { season, created } = await ensureSeason(farmId, label, t);
+    if (created) {
+      await recordEvent({ userId: actor.userId, farmId, entity: 'season', entityId: season.id, action: 'created', detail: { label } }, t);
+      // A new season needs an assessment row for every field of the farm.
+      await afterInputsChange({ sequelize }, { kind: 'season', farmId }, actor, t);
+    }
+    return { season: presentSeason(season), created };
+  });
+}
 
-export async function getCropping(sequelize: Sequelize, fieldId: number, seasonId: number, transaction?: Transaction): Promise<Cropping | null> {
-  const [row] = await sequelize.query<CroppingRow>(
-    `SELECT c.*, s.label FROM field_croppings c JOIN seasons s ON s.id = c.season_id WHERE c.field_id = :fieldId AND c.season_id = :seasonId`,
-    { replacements: { fieldId, seasonId }, type: QueryTypes.SELECT, transaction },
+export async function getCropping(fieldId: number, seasonLabel: string | undefined, farmId: number): Promise<Cropping> {
+  const season = await resolveSeason(farmId, seasonLabel);
+  const row = await FieldCropping.findOne({ where: { fieldId, seasonId: season.id } });
+  if (!row) throw new HttpError(404, 'no_cropping', `This field has no cropping for season ${season.label} yet.`);
+  return presentCropping(row, season.label);
+}
+
+const staleCropping = (label: string, sent: number | undefined, current: Cropping) =>
+  conflict(
+    'stale_version',
+    sent === undefined
+      ? `This field already has cropping for ${label}; send the version you read to change it.`
+      : `Someone changed this field's cropping for ${label} since you opened it (you had version ${sent}, it is now ${current.version}). Reload and change it again.`,
+    { current },
   );
-  return row ? presentCropping(row) : null;
-}
 
 export async function putCropping(sequelize: Sequelize, actor: { userId: number }, field: { id: number; farmId: number }, input: CroppingUpdate): Promise<Cropping> {
   return sequelize.transaction(async (t) => {
-    const season = await ensureSeason(sequelize, field.farmId, input.season, t);
-    const existing = await getCropping(sequelize, field.id, season.id, t);
-    if (existing && existing.version !== input.version) {
-      throw conflict(
-        'stale_version',
-        input.version === undefined
-          ? `This field already has cropping for ${season.label}; send the version you read to change it.`
-          : `Someone changed this field's cropping for ${season.label} since you opened it (you had version ${input.version}, it is now ${existing.version}). Reload and change it again.`,
-        { current: existing },
-      );
-    }
-    const rep = {
-      fieldId: field.id,
-      seasonId: season.id,
+    const { season, created } = await ensureSeason(field.farmId, input.season, t);
+    const existing = await FieldCropping.findOne({ where: { fieldId: field.id, seasonId: season.id }, transaction: t, lock: t.LOCK.UPDATE });
+    if (existing && existing.version !== input.version) throw staleCropping(season.label, input.version, presentCropping(existing, season.label));
+    const values = {
       crop: input.crop,
       tillage: input.tillage ?? null,
       residuePct: input.residuePct ?? null,
       groundCoverPct: input.groundCoverPct ?? null,
-      coverCrop: input.coverCrop ? JSON.stringify(input.coverCrop) : null,
+      coverCrop: input.coverCrop ?? null,
       practice: input.practice ?? 'none',
       terraceIntervalM: input.terraceIntervalM ?? null,
-      userId: actor.userId,
+      updatedBy: actor.userId,
     };
-    await sequelize.query(
-      `INSERT INTO field_croppings (field_id, season_id, crop, tillage, residue_pct, ground_cover_pct, cover_crop, practice, terrace_interval_m, updated_by)
-       VALUES (:fieldId, :seasonId, :crop, :tillage, :residuePct, :groundCoverPct, :coverCrop, :practice, :terraceIntervalM, :userId)
-       ON CONFLICT (field_id, season_id) DO UPDATE SET crop = EXCLUDED.crop, tillage = EXCLUDED.tillage, residue_pct = EXCLUDED.residue_pct,
-         ground_cover_pct = EXCLUDED.ground_cover_pct, cover_crop = EXCLUDED.cover_crop, practice = EXCLUDED.practice,
-         terrace_interval_m = EXCLUDED.terrace_interval_m, updated_by = EXCLUDED.updated_by, updated_at = now(),
-         version = field_croppings.version + 1`,
-      { replacements: rep, transaction: t },
-    );
+    let row: FieldCropping;
+    if (existing) row = await existing.update({ ...values, version: existing.version + 1 }, { transaction: t });
+    else {
+      try {
+        row = await FieldCropping.create({ fieldId: field.id, seasonId: season.id, ...values }, { transaction: t });
+      } catch (e) {
+        // Someone else saved the first record at the same moment.
+        if (e instanceof UniqueConstraintError) throw conflict('stale_version', `Someone saved this field's cropping for ${season.label} at the same time. Reload and change it again.`);
+        throw e;
+      }
+    }
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'cropping', entityId: field.id, action: existing ? 'updated' : 'created', detail: { season: season.label, crop: input.crop } }, t);
-    return (await getCropping(sequelize, field.id, season.id, t))!;
+    // A season created by this record needs rows for every field of the farm.
+    const change: InputChange = created ? { kind: 'season', farmId: field.farmId } : { kind: 'cropping', farmId: field.farmId, fieldIds: [field.id] };
+    await afterInputsChange({ sequelize }, change, actor, t);
+    // Read back: REAL columns round what was sent, and the answer should match a later GET.
+    return presentCropping(await row.reload({ transaction: t }), season.label);
   });
 }

@@ -6,8 +6,7 @@ import type { Sequelize } from 'sequelize';
 import { TerrainGrid } from '../models';
 import type { FileStorage } from './storage/file-storage';
 import { renderLayer, type RenderResult } from './terrain';
-import { listFieldFeatures } from './fields.service';
-import { assessField } from './assessment.service';
+import { storedEstimates } from './assessments/read-assessments';
 
 /** The kept grids of the farm's newest terrain run, or null before any run. */
 export async function keptGrids(farmId: number): Promise<{ ls: TerrainGrid; labels: TerrainGrid } | null> {
@@ -37,13 +36,11 @@ export async function renderSoilLossLayer(
   const ls = new Float32Array(lsBuf.buffer.slice(lsBuf.byteOffset, lsBuf.byteOffset + lsBuf.byteLength));
   const labels = labelGrid(labelBuf, ls.length);
   const ids = grids.labels.detail.fieldIdsByLabel ?? [];
-  const fields = new Map((await listFieldFeatures(deps.sequelize, { farmId })).map((f) => [f.id, f]));
-  // Label k (1-based) → R·K·C·P of that field's assessment, NaN when it cannot be assessed.
+  const estimates = await storedEstimates(deps.sequelize, farmId, season.id);
+  // Label k (1-based) → R·K·C·P of that field's stored assessment, NaN when it cannot be assessed.
   const factor = new Float64Array(ids.length + 1).fill(NaN);
   for (const [i, id] of ids.entries()) {
-    const f = fields.get(id);
-    if (!f) continue;
-    const e = (await assessField(deps.sequelize, f, season)).estimate;
+    const e = estimates.get(id);
     if (e) factor[i + 1] = e.factors.r.value * e.factors.k.value * e.factors.c.value * e.factors.p.value;
   }
   const values = new Float32Array(ls.length);

@@ -17,7 +17,7 @@ export type FarmLayers = {
 export async function farmLayers(sequelize: Sequelize, farmId: number): Promise<FarmLayers> {
   const layers = await TerrainLayer.ofFarm(farmId);
   const grids = await keptGrids(farmId);
-  const [season] = await listSeasons(sequelize, farmId);
+  const [season] = await listSeasons(farmId);
   return { layers, soilLoss: grids && season && layers.length ? { ls: grids.ls, season } : null };
 }
 
@@ -31,7 +31,7 @@ export async function layerImage(
   seasonLabel: string | undefined,
 ): Promise<LayerImage> {
   if (kind === 'soil-loss') {
-    const season = await resolveSeason(deps.sequelize, farmId, seasonLabel);
+    const season = await resolveSeason(farmId, seasonLabel);
     const drawn = await renderSoilLossLayer(deps, farmId, season);
     if (!drawn) throw notFound('That map layer');
     if (!drawn.ok) throw new HttpError(422, 'cannot_draw', drawn.reason);

@@ -59,7 +59,7 @@ export function sodicGypsumRequirement(args: {
 
 /** Sodic-soil gypsum as a quantity for an area. */
 export function sodicGypsumQuantity(args: Parameters<typeof sodicGypsumRequirement>[0] & { areaHa: number; truckCapacityT?: number }): Quantity {
-  return quantity(sodicGypsumRequirement(args), args.areaHa, 'sodic-soil gypsum requirement 0.0861·ΔNa·depth·BD [memory]', 'memory', args.truckCapacityT);
+  return quantity(sodicGypsumRequirement(args), args.areaHa, 'sodic-soil gypsum requirement 0.0861·ΔNa·depth·BD', 'memory', args.truckCapacityT);
 }
 
 export type LimeInput = { soilPh: number; bufferPh: number; targetPh: number; ccePct?: number; areaHa?: number; truckCapacityT?: number };
@@ -97,7 +97,7 @@ export function compostQuantity(args: { areaHa: number; purpose: 'build' | 'main
   const rate = args.rateTPerHa ?? r.typical;
   assertNonNegative('rateTPerHa', rate);
   return {
-    ...quantity(rate, args.areaHa, 'compost rates [memory]; bound by nutrient budgets (NRCS practice 590)', 'memory', args.truckCapacityT),
+    ...quantity(rate, args.areaHa, 'compost rates; bound by nutrient budgets (NRCS practice 590)', 'memory', args.truckCapacityT),
     rangeTPerHa: [r.low, r.high],
     note: 'check the compost\'s nutrients against the field\'s nutrient budget (NRCS 590) before spreading',
   };

@@ -66,7 +66,7 @@ function run(inp: EstimateInputParsed): EstimateResult {
     r = prov(si, R_UNIT, 'typed in', `R typed in ${inp.r.units === 'us' ? 'US' : 'SI'} units`, undefined, { value: rSiToUs(si), unit: R_UNIT_US });
   } else {
     const si = rFromAnnualPrecipitation(inp.r.annualPrecipitationMm);
-    r = prov(si, R_UNIT, 'Renard & Freimund 1994, J. Hydrol. 157:287 [memory]', `from mean annual precipitation ${inp.r.annualPrecipitationMm} mm`, 'memory', { value: rSiToUs(si), unit: R_UNIT_US });
+    r = prov(si, R_UNIT, 'Renard & Freimund 1994, J. Hydrol. 157:287', `from mean annual precipitation ${inp.r.annualPrecipitationMm} mm`, 'memory', { value: rSiToUs(si), unit: R_UNIT_US });
     warnings.push('R from annual precipitation is a rough regional fit; use the local R where it is published');
   }
 
@@ -189,7 +189,7 @@ function run(inp: EstimateInputParsed): EstimateResult {
         const g = soilGroupFromTexture(textureClass);
         hsg = g.hsg;
         hsgFlag = g.flag;
-        warnings.push(`hydrologic soil group ${g.hsg} taken from the texture (${textureClass}) [practice]; the soil survey's group wins`);
+        warnings.push(`hydrologic soil group ${g.hsg} taken from the texture (${textureClass}) by a rule of thumb; the soil survey's group wins`);
       }
       const res = curveNumberFromTable({ cover: ro.cover as string, treatment: ro.treatment ?? null, condition: ro.condition ?? null, hsg: hsg as never, drained: ro.drained });
       if (!res.ok) return failAt('runoff', res.reason);

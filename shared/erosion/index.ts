@@ -13,6 +13,7 @@ export * from './erosivity';
 export * from './tolerance';
 export * from './soil-loss';
 export * from './runoff';
+export * from './curve-number-cover';
 export * from './soil-group';
 export * from './drainage';
 export * from './amendments';

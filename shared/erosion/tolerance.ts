@@ -2,9 +2,12 @@
 import { assertNonNegative, assertPositive } from './assert';
 import type { Flag } from './cover';
 import { tonPerAcToTPerHa } from './units';
+import type { SourceRef } from '../schemas/provenance';
 
-/** T for deep soils when the survey gives none, t/ac/yr [practice]. */
+/** T for deep soils when the survey gives none, t/ac/yr: common practice, the top of NSSH part 618's 1–5 range. */
 export const DEFAULT_T_TON_PER_AC_YR = 5;
+/** Where the default T comes from, for people: common practice, no single published source. */
+export const DEFAULT_T_SOURCE: SourceRef = { title: 'deep-soil T, common practice (the top of the 1–5 t/ac/yr range of NSSH part 618)' };
 
 export type ToleranceResult = { tonPerAcYr: number; tPerHaYr: number; source: string; method: string; flag?: Flag };
 
@@ -23,7 +26,7 @@ export function soilLossTolerance(args: { surveyTTonPerAcYr?: number; rootingDep
     assertNonNegative('rootingDepthCm', rootingDepthCm);
     // NSSH part 618 T by rooting depth, favourable subsoil [memory]
     const t = rootingDepthCm < 25 ? 1 : rootingDepthCm < 50 ? 2 : rootingDepthCm < 100 ? 3 : rootingDepthCm < 150 ? 4 : 5;
-    return { tonPerAcYr: t, tPerHaYr: tonPerAcToTPerHa(t), source: 'NSSH part 618, T by rooting depth [memory]', method: `rooting depth ${rootingDepthCm} cm`, flag: 'memory' };
+    return { tonPerAcYr: t, tPerHaYr: tonPerAcToTPerHa(t), source: 'NSSH part 618, T by rooting depth', method: `rooting depth ${rootingDepthCm} cm`, flag: 'memory' };
   }
   return {
     tonPerAcYr: DEFAULT_T_TON_PER_AC_YR,

@@ -1,8 +1,17 @@
 // What the server says about one field in one season, and the priority board.
 import type { EstimateSuccess } from './estimate';
 import type { RiskClass } from '../erosion/risk-class';
+import type { Origin } from './provenance';
 
-export type InputOrigin = 'typed' | 'derived' | 'default' | 'missing';
+export type InputKey = 'r' | 'k' | 'slope' | 'length' | 'crop' | 'practice' | 't' | 'storm' | 'hsg';
+/** One input of an assessment: its value in words and where it came from. */
+export type AssessmentInput = { key: InputKey; label: string; value: string; origin: Origin; note?: string };
+
+export type GapKey = 'erosivity' | 'erodibility' | 'slope' | 'slope-length' | 'cropping' | 'soil-group';
+/** Where a gap is filled: a tab of the Field screen, or the farm's climate panel. */
+export type GapTab = 'ground' | 'soil' | 'cropping' | 'farm-climate';
+/** An input the estimate still waits for. */
+export type Gap = { key: GapKey; tab: GapTab; message: string };
 
 export type FieldAssessment = {
   fieldId: number;
@@ -10,10 +19,10 @@ export type FieldAssessment = {
   name: string;
   season: string;
   areaHa: number;
-  /** What each input came from, in words, for "every figure explains itself". */
-  inputs: { key: string; label: string; value: string; origin: InputOrigin; note?: string }[];
-  /** Inputs that are still missing, in words; the estimate waits for them. */
-  gaps: string[];
+  /** Every input and where it came from, for "every figure explains itself". */
+  inputs: AssessmentInput[];
+  /** Inputs that are still missing; the estimate waits for them. */
+  gaps: Gap[];
   estimate: EstimateSuccess | null;
   /** The reason the engine gave when it could not estimate. */
   failure: string | null;
@@ -36,6 +45,19 @@ export type FieldAssessment = {
   computedAt: string;
 };
 
+/** What an assessment stores for the board; the field's name and area are read live. */
+export type StoredBoardFigures = {
+  soilLossTPerHaYr: number | null;
+  toleranceTPerHaYr: number | null;
+  aOverT: number | null;
+  tonnesPerYr: number | null;
+  runoffMm: number | null;
+  riskClass: RiskClass | null;
+  problemClay: boolean;
+  gaps: Gap[];
+  reasons: string[];
+};
+
 export type BoardRow = {
   fieldId: number;
   farmId: number;
@@ -49,7 +71,7 @@ export type BoardRow = {
   runoffMm: number | null;
   riskClass: RiskClass | null;
   problemClay: boolean;
-  gaps: string[];
+  gaps: Gap[];
   /** Short reasons for the rank, e.g. "steep (LS 3.1)", "bare after soybean". */
   reasons: string[];
 };

@@ -80,3 +80,15 @@ export const GroundUpdate = z.object({
   slopeLengthM: z.number().min(1, 'slopeLengthM must be at least 1 m').max(2000, 'slopeLengthM must be at most 2000 m').nullable(),
 });
 export type Ground = { slopePct: number | null; slopeLengthM: number | null; version: number };
+
+/** The text parts of a rainfall-record upload (multipart): both optional, numbers as text. */
+const formNumber = (min: number, max: number) => {
+  const message = `must be a number from ${min} to ${max}`;
+  return z.preprocess((v) => (v === undefined || v === '' ? undefined : Number(v)), z.number({ error: message }).min(min, message).max(max, message).optional());
+};
+export const RainfallRecordFields = z.object({
+  /** Years the record spans, when its dates do not say it plainly. */
+  years: formNumber(0.1, 200),
+  designStormMm: formNumber(1, 1000),
+});
+export type RainfallRecordFields = z.output<typeof RainfallRecordFields>;

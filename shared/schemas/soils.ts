@@ -3,6 +3,7 @@
 // server's validate() middleware. Percentages are of the fine earth (< 2 mm).
 import { z } from 'zod';
 import { tryClassifyTexture } from '../erosion/texture';
+import type { Origin } from './provenance';
 
 /** A number with limits and a message that names the field. */
 const num = (field: string, min: number, max: number, unit = '') =>
@@ -245,9 +246,11 @@ export type FieldSoilSummary = {
   drainageClass: string | null;
   notWorthAmending: boolean;
   kUs: number | null;
-  kSource: string | null;
+  /** Where K came from (soil map, equation or table), with the work it cites. */
+  kSource: Origin | null;
   tTonPerAcYr: number | null;
-  tSource: string | null;
+  /** Where T came from: the soil map, or the deep-soil default. */
+  tSource: Origin | null;
   hsg: string | null;
   hsgShares: { group: string; share: number }[];
   bulkDensity: number | null;

@@ -52,7 +52,7 @@ describe('assessment of a field for a season', () => {
     const S = 1000 / 69 - 10;
     expect(a.runoffMm).toBeCloseTo(((5 - 0.2 * S) ** 2 / (5 + 0.8 * S)) * 25.4, 1);
     expect(a.lsSource).toBe('typed slope');
-    expect(a.inputs.find((i: { key: string }) => i.key === 'slope').origin).toBe('typed');
+    expect(a.inputs.find((i: { key: string }) => i.key === 'slope').origin).toEqual({ kind: 'typed', typedBy: 'Test farmer' });
   });
 
   it('lists what is missing instead of guessing', async () => {
@@ -61,9 +61,13 @@ describe('assessment of a field for a season', () => {
     await farmer.post(`/api/farms/${farmId}/seasons`).send({ label: '2027' });
     const a = (await farmer.get(`/api/fields/${id}/assessment?season=2027`)).body;
     expect(a.estimate).toBeNull();
-    expect(a.gaps.join(' | ')).toMatch(/soil erodibility K/);
-    expect(a.gaps.join(' | ')).toMatch(/slope/);
-    expect(a.gaps.join(' | ')).toMatch(/cropping for season 2027/);
+    // Each gap is typed: what is missing, where it is filled, and a sentence for people.
+    expect(a.gaps).toEqual([
+      { key: 'erodibility', tab: 'soil', message: expect.stringMatching(/soil erodibility K/) },
+      { key: 'slope', tab: 'ground', message: expect.stringMatching(/slope/) },
+      { key: 'slope-length', tab: 'ground', message: expect.stringMatching(/slope length/) },
+      { key: 'cropping', tab: 'cropping', message: 'cropping for season 2027' },
+    ]);
   });
 
   it('recomputes when an input changes', async () => {

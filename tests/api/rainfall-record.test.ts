@@ -48,6 +48,17 @@ describe('R from a rainfall record', () => {
     expect(wrong.body.message).toMatch(/cumulative_mm/);
   });
 
+  it('refuses a years or design-storm figure out of range with 400 naming it, and stores nothing', async () => {
+    const { farmId, agent } = await farmer();
+    const years = await agent.post(`/api/farms/${farmId}/climate/rainfall-record`).attach('file', Buffer.from(record), 'rain.csv').field('years', '500').field('designStormMm', '100');
+    expect(years.status).toBe(400);
+    expect(years.body.message).toBe('years: must be a number from 0.1 to 200');
+    const storm = await agent.post(`/api/farms/${farmId}/climate/rainfall-record`).attach('file', Buffer.from(record), 'rain.csv').field('designStormMm', 'deep');
+    expect(storm.status).toBe(400);
+    expect(storm.body.message).toMatch(/^designStormMm/);
+    expect((await agent.get(`/api/farms/${farmId}/climate`)).status).toBe(404);
+  });
+
   it('is for the farmer and advisor only', async () => {
     const { farmId, landowner } = await farmer();
     expect((await landowner.post(`/api/farms/${farmId}/climate/rainfall-record`).attach('file', Buffer.from(record), 'rain.csv')).status).toBe(403);

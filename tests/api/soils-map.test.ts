@@ -179,9 +179,9 @@ describe('soil map intersected with fields', () => {
     const bM2 = geographicLibArea(overlapOf(UNIT_B, FIELD)!);
     // By hand: K = Σ Kᵢ·aᵢ / Σ aᵢ with the areas from GeographicLib; T likewise
     expect(s.body.kUs).toBeCloseTo((0.43 * aM2 + 0.24 * bM2) / (aM2 + bM2), 6);
-    expect(s.body.kSource).toMatch(/soil map K, area-weighted over the 100 % of the field/);
+    expect(s.body.kSource).toEqual({ kind: 'derived', source: { title: 'soil map K' }, detail: expect.stringMatching(/area-weighted over the 100 % of the field/) });
     expect(s.body.tTonPerAcYr).toBeCloseTo((5 * aM2 + 3 * bM2) / (aM2 + bM2), 6);
-    expect(s.body.tSource).toMatch(/soil map T/);
+    expect(s.body.tSource).toMatchObject({ kind: 'derived', source: { title: 'soil map T' } });
     expect(s.body.hsg).toBe('C/D');
     expect(s.body.hsgShares).toHaveLength(2);
     expect(s.body.hsgShares[0].group).toBe('C/D');
@@ -203,7 +203,7 @@ describe('soil map intersected with fields', () => {
     await agent.post(`/api/farms/${farmId}/soil-map`).attach('file', geojsonFile(onlyA), 'part.geojson');
     const s = await agent.get(`/api/fields/${fieldId}/soil-summary`);
     expect(s.body.kUs).toBeCloseTo(0.43, 9);
-    expect(s.body.kSource).toMatch(/over the 60 % of the field/);
+    expect(s.body.kSource.detail).toMatch(/over the 60 % of the field/);
     expect(s.body.hsgShares).toEqual([{ group: 'C/D', share: 1 }]);
   });
 

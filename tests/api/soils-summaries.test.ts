@@ -70,7 +70,7 @@ describe('soil summaries of many fields', () => {
     expect(all.get(ids['Across both units'])!.hsgShares.map((h) => h.group)).toEqual(['C/D', 'B']);
     expect(all.get(ids['Inside unit A, with a feel test'])).toMatchObject({ textureClass: 'silty clay', kUs: 0.43, tTonPerAcYr: 5, hsg: 'C/D' });
     expect(all.get(ids['Inside unit B, with lab samples'])).toMatchObject({ sampleCount: 2, textureClass: 'loam', kUs: 0.24, tTonPerAcYr: 3, hsg: 'B' });
-    expect(all.get(ids['Off the map, with a feel test'])).toMatchObject({ sampleCount: 2, tSource: 'deep soil default [practice]', drainageClass: 'well drained' });
+    expect(all.get(ids['Off the map, with a feel test'])).toMatchObject({ sampleCount: 2, tSource: { kind: 'default', source: { title: expect.stringMatching(/deep-soil T/) } }, drainageClass: 'well drained' });
     expect(all.get(ids['Off the map, nothing known'])).toMatchObject({ sampleCount: 0, kUs: null, hsg: null, tTonPerAcYr: 5 });
   });
 

@@ -35,7 +35,7 @@ describe('field soil summary', () => {
     expect(s.hsgShares).toEqual([{ group: 'D', share: 1 }]);
     // REFERENCES.md "T": 5 t/ac/yr for a deep soil when no survey T is known [practice]
     expect(s.tTonPerAcYr).toBe(5);
-    expect(s.tSource).toBe('deep soil default [practice]');
+    expect(s.tSource).toEqual({ kind: 'default', source: { title: expect.stringMatching(/deep-soil T, common practice/) } });
     // Same answer when another service calls the function directly.
     expect(await fieldSoilSummary(ctx.sequelize, fieldId)).toEqual(s);
   });
@@ -60,7 +60,7 @@ describe('field soil summary', () => {
     expect(s.drainageClass).toBe('moderately well drained');
     // Sharpley & Williams 1990 eq. 2.96, REFERENCES.md check: 40/40/20, OC 1.5 % → K 0.2604 (US)
     expect(s.kUs).toBeCloseTo(0.2604, 4);
-    expect(s.kSource).toMatch(/Williams \(EPIC\).*2 lab samples/);
+    expect(s.kSource).toEqual({ kind: 'derived', source: { title: expect.stringMatching(/Williams \(EPIC\).*Sharpley & Williams 1990, eq\. 2\.96/) }, detail: 'from the mean of 2 lab samples' });
     // Texture default [practice]: loam → B (gray deeper than 60 cm, so not the water-table rule)
     expect(s.hsg).toBe('B');
     expect(s.problemClay).toBe(false);
@@ -76,7 +76,7 @@ describe('field soil summary', () => {
     expect(s.sandPct).toBeNull();
     // K table after Stewart et al. 1975 (REFERENCES.md): silt loam at 2 % OM → 0.42 (US)
     expect(s.kUs).toBeCloseTo(0.42, 9);
-    expect(s.kSource).toMatch(/Stewart et al\. \(1975\).*silt loam, organic matter 2 %/);
+    expect(s.kSource).toEqual({ kind: 'published-table', source: { title: expect.stringMatching(/Stewart et al\. \(1975\)/) }, detail: 'silt loam, organic matter 2 %' });
     // Texture default [practice]: silt loam → B
     expect(s.hsg).toBe('B');
   });
@@ -89,7 +89,8 @@ describe('field soil summary', () => {
     expect(s.textureClass).toBe('clay loam');
     // K table after Stewart et al. 1975: clay loam at 2 % OM → 0.25 (US)
     expect(s.kUs).toBeCloseTo(0.25, 9);
-    expect(s.kSource).toMatch(/organic matter unknown, 2 % assumed \[practice\]/);
+    // An assumed OM makes the table's K a rule of thumb.
+    expect(s.kSource).toMatchObject({ kind: 'rule-of-thumb', detail: 'clay loam, organic matter unknown, 2 % assumed (rule of thumb)' });
   });
 
   it('calls a silty clay feel test problem clay by its class alone', async () => {
@@ -105,7 +106,7 @@ describe('field soil summary', () => {
     const s = (await agent.get(`/api/fields/${fieldId}/soil-summary`)).body;
     expect(s).toEqual({
       sampleCount: 0, sandPct: null, siltPct: null, clayPct: null, organicMatterPct: null, textureClass: null, ph: null, bufferPh: null,
-      depthToGrayCm: null, drainageClass: null, notWorthAmending: false, kUs: null, kSource: null, tTonPerAcYr: 5, tSource: 'deep soil default [practice]',
+      depthToGrayCm: null, drainageClass: null, notWorthAmending: false, kUs: null, kSource: null, tTonPerAcYr: 5, tSource: { kind: 'default', source: { title: expect.stringMatching(/deep-soil T/) } },
       hsg: null, hsgShares: [], bulkDensity: null, cecCmolPerKg: null, espPct: null, problemClay: false, problemClayReasons: [],
     });
   });

@@ -2,8 +2,7 @@
 // length per field, and the soil checks of data/demo/soils-2027.json. Run once with the demo farm.
 import { readFileSync } from 'node:fs';
 import type { Sequelize } from 'sequelize';
-import { Farm, User } from '../../models';
-import { listFieldFeatures } from '../../services/fields.service';
+import { Farm, Field, User } from '../../models';
 import { putClimate, putGround } from '../../services/climate-ground.service';
 import { putCropping } from '../../services/seasons.service';
 import { demoFields, DEMO_ACCOUNTS, DEMO_FARM_NAME } from './demo-farm';
@@ -25,13 +24,13 @@ export async function seedDemoSeason(sequelize: Sequelize): Promise<void> {
   const actor = { userId: farmer.id };
   await putClimate(sequelize, actor, farm.id, data.climate);
   const keyByName = new Map(demoFields().map((f) => [f.properties.name, (f.properties as { key?: string }).key ?? '']));
-  for (const f of await listFieldFeatures(sequelize, { farmId: farm.id })) {
-    const spec = data.fields[keyByName.get(f.properties.name) ?? ''];
+  for (const f of await Field.findAll({ where: { farmId: farm.id }, attributes: ['id', 'name'], order: [['name', 'ASC']] })) {
+    const spec = data.fields[keyByName.get(f.name) ?? ''];
     if (!spec) continue;
     const field = { id: f.id, farmId: farm.id };
     await putCropping(sequelize, actor, field, { ...spec.cropping, season: data.season });
     await putGround(sequelize, actor, field, { slopePct: null, slopeLengthM: spec.slopeLengthM });
-    for (const raw of soils.samples[keyByName.get(f.properties.name) ?? ''] ?? []) {
+    for (const raw of soils.samples[keyByName.get(f.name) ?? ''] ?? []) {
       await createSample(sequelize, actor, f.id, SoilSampleCreate.parse(raw));
     }
   }

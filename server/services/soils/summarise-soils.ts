@@ -3,6 +3,8 @@
 import {
   DEFAULT_DRAINAGE_KEY,
   classifyTexture,
+  DEFAULT_T_SOURCE,
+  DEFAULT_T_TON_PER_AC_YR,
   drainageVerdict,
   hydrologicSoilGroup,
   kFactorWilliams,
@@ -13,6 +15,7 @@ import {
   type TextureClass,
 } from '../../../shared/erosion';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
+import type { Origin } from '../../../shared/schemas/provenance';
 import type { SoilSample } from '../../models';
 import type { MapAggregate } from './field-soil-map';
 
@@ -22,12 +25,11 @@ export type SampleFigures = Pick<
   'kind' | 'sandPct' | 'siltPct' | 'clayPct' | 'organicMatterPct' | 'ph' | 'bufferPh' | 'depthToGrayCm' | 'describedToCm' | 'textureClass' | 'bulkDensityMgM3' | 'cecCmolKg' | 'espPct'
 >;
 
-/** Organic matter taken when no sample gives it, for the K table only [practice]. */
+/** Organic matter taken when no sample gives it, for the K table only (common practice). */
 export const ASSUMED_OM_PCT = 2;
 /** Clay at or above this is problem clay (the clay classes of the SSM triangle start at 40 %). */
 export const PROBLEM_CLAY_PCT = 40;
 export const PROBLEM_CLAY_CLASSES: readonly string[] = ['clay', 'silty clay', 'sandy clay'];
-export const DEFAULT_T_SOURCE = 'deep soil default [practice]';
 
 const mean = (xs: (number | null)[]): number | null => {
   const v = xs.filter((x): x is number => x !== null);
@@ -82,26 +84,35 @@ export function summariseSoils(samples: SampleFigures[], map: MapAggregate): Fie
 
   // K: the soil map where mapped; else Williams (EPIC) from the lab fractions; else the table by class and OM.
   let kUs: number | null = null;
-  let kSource: string | null = null;
+  let kSource: Origin | null = null;
   if (map.kUs !== null) {
     kUs = map.kUs;
-    kSource = `soil map K, area-weighted over the ${pct(map.kShareOfField)} of the field that the map gives a K for`;
+    kSource = { kind: 'derived', source: { title: 'soil map K' }, detail: `area-weighted over the ${pct(map.kShareOfField)} of the field that the map gives a K for` };
   } else if (textureFrom === 'lab' && organicMatterPct !== null) {
     kUs = kFactorWilliams({ sandPct: sandPct!, siltPct: siltPct!, clayPct: clayPct!, organicCarbonPct: organicCarbonFromOm(organicMatterPct) }).us;
-    kSource = `Williams (EPIC) equation, Sharpley & Williams 1990 eq. 2.96, from the mean of ${lab.length} lab sample${lab.length === 1 ? '' : 's'}`;
+    kSource = {
+      kind: 'derived',
+      source: { title: 'Williams (EPIC) equation, Sharpley & Williams 1990, eq. 2.96' },
+      detail: `from the mean of ${lab.length} lab sample${lab.length === 1 ? '' : 's'}`,
+    };
   } else if (textureClass) {
     const om = organicMatterPct ?? ASSUMED_OM_PCT;
     const r = kFromTextureTable(textureClass, om);
     if (r.ok) {
       kUs = r.value.us;
-      const omWords = organicMatterPct === null ? `organic matter unknown, ${ASSUMED_OM_PCT} % assumed [practice]` : `organic matter ${round1(om)} %`;
-      kSource = `${r.value.source}: ${textureClass}, ${omWords}${r.value.note ? `; ${r.value.note}` : ''}`;
+      const omWords = organicMatterPct === null ? `organic matter unknown, ${ASSUMED_OM_PCT} % assumed (rule of thumb)` : `organic matter ${round1(om)} %`;
+      // A midpoint of a printed range, or an assumed OM, makes the K a rule of thumb.
+      const kind = r.value.flag === 'practice' || organicMatterPct === null ? 'rule-of-thumb' : 'published-table';
+      kSource = { kind, source: { title: r.value.source }, detail: `${textureClass}, ${omWords}${r.value.note ? `; ${r.value.note}` : ''}` };
     }
   }
 
   // T: the soil map's where mapped, else the deep-soil default.
-  const tTonPerAcYr = map.tTonPerAcYr ?? 5;
-  const tSource = map.tTonPerAcYr !== null ? `soil map T, area-weighted over the ${pct(map.tShareOfField)} of the field that the map gives a T for` : DEFAULT_T_SOURCE;
+  const tTonPerAcYr = map.tTonPerAcYr ?? DEFAULT_T_TON_PER_AC_YR;
+  const tSource: Origin =
+    map.tTonPerAcYr !== null
+      ? { kind: 'derived', source: { title: 'soil map T' }, detail: `area-weighted over the ${pct(map.tShareOfField)} of the field that the map gives a T for` }
+      : { kind: 'default', source: DEFAULT_T_SOURCE };
 
   // Hydrologic soil group: the map's mix wins; else a water table within 60 cm (gray colours) gives D; else by texture.
   let hsgShares = map.hsgShares;

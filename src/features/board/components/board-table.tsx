@@ -48,7 +48,7 @@ function Reasons({ row }: { row: BoardRow }) {
       {row.gaps.length ? (
         <span className="text-caution">
           <span className="font-semibold">Missing: </span>
-          {row.gaps.join(' · ')}
+          {row.gaps.map((g) => g.message).join(' · ')}
         </span>
       ) : null}
     </p>

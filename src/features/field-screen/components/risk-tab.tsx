@@ -2,8 +2,11 @@
 // with its risk class, tonnes a year, the design storm's runoff; how A builds up, every factor
 // with its source, what went in and what is missing, problem clay and what to do about it,
 // and the cautions.
+import { Link } from 'react-router-dom';
 import { Notice } from '../../../components/ui/notice';
-import type { FieldAssessment } from '../../../../shared/schemas/assessment';
+import { paths } from '../../../lib/paths';
+import { CAUTION_TERRACES } from '../../../../shared/erosion/estimate';
+import type { FieldAssessment, Gap, GapTab } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
 import { RiskBadge } from '../../board/components/risk-badge';
 import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../board/components/loss-units';
@@ -13,6 +16,7 @@ import { useAssessment } from '../../seasons/api/get-assessment';
 import { TERRACE_CAUTION } from '../../seasons/components/cropping-form';
 import { AssessmentInputs } from './assessment-inputs';
 import { FactorBuildUpChart } from './factor-build-up-chart';
+import type { FieldTab } from './field-tabs';
 
 function Big({ label, figure, testId }: { label: string; figure: Figure | null; testId?: string }) {
   return (
@@ -32,18 +36,28 @@ function Big({ label, figure, testId }: { label: string; figure: Figure | null; 
   );
 }
 
-type TabName = 'ground' | 'soil' | 'cropping';
+const TAB_WORDS: Record<Exclude<GapTab, 'farm-climate'>, string> = { ground: 'Ground', soil: 'Soil', cropping: 'Cropping' };
 
-/** The tab where a gap is filled, from the words of the gap. */
-const tabFor = (gap: string): TabName | null => {
-  if (/slope|elevation/i.test(gap)) return 'ground';
-  if (/soil|texture|\bK\b|sample/i.test(gap)) return 'soil';
-  if (/cropping|crop/i.test(gap)) return 'cropping';
-  return null;
-};
-const TAB_WORDS: Record<TabName, string> = { ground: 'Ground', soil: 'Soil', cropping: 'Cropping' };
+/** The control that takes a person to where the gap is filled: a tab here, or the farm's climate on the board. */
+function FixIt({ gap, farmId, onOpenTab }: { gap: Gap; farmId: number; onOpenTab?: (tab: FieldTab) => void }) {
+  const className = 'font-semibold text-clay-dark underline underline-offset-2';
+  if (gap.tab === 'farm-climate') {
+    return (
+      <Link to={paths.board.getHref(farmId)} className={className}>
+        Set the farm climate on the Priority board
+      </Link>
+    );
+  }
+  if (!onOpenTab) return null;
+  const tab = gap.tab;
+  return (
+    <button type="button" className={className} onClick={() => onOpenTab(tab)}>
+      Open the {TAB_WORDS[tab]} tab
+    </button>
+  );
+}
 
-function Gaps({ gaps, onOpenTab }: { gaps: string[]; onOpenTab?: (tab: TabName) => void }) {
+function Gaps({ gaps, farmId, onOpenTab }: { gaps: Gap[]; farmId: number; onOpenTab?: (tab: FieldTab) => void }) {
   return (
     <section aria-labelledby="gaps-heading" data-testid="assessment-gaps" className="flex flex-col gap-1">
       <h3 id="gaps-heading" className="font-serif text-lg font-semibold">
@@ -51,22 +65,11 @@ function Gaps({ gaps, onOpenTab }: { gaps: string[]; onOpenTab?: (tab: TabName) 
       </h3>
       {gaps.length ? (
         <ul className="list-inside list-disc text-sm">
-          {gaps.map((g) => {
-            const tab = tabFor(g);
-            return (
-              <li key={g}>
-                {g}
-                {tab && onOpenTab ? (
-                  <>
-                    {' '}
-                    <button type="button" className="font-semibold text-clay-dark underline underline-offset-2" onClick={() => onOpenTab(tab)}>
-                      Open the {TAB_WORDS[tab]} tab
-                    </button>
-                  </>
-                ) : null}
-              </li>
-            );
-          })}
+          {gaps.map((g) => (
+            <li key={g.key} data-testid={`gap-${g.key}`}>
+              {g.message} <FixIt gap={g} farmId={farmId} onOpenTab={onOpenTab} />
+            </li>
+          ))}
         </ul>
       ) : (
         <p className="text-sm text-ink-soft">Nothing: every input the estimate needs is there.</p>
@@ -100,9 +103,9 @@ function ProblemClay({ a }: { a: FieldAssessment }) {
   );
 }
 
-type Props = { fieldId: number; season: string; units: Units; onOpenTab?: (tab: TabName) => void };
+type Props = { farmId: number; fieldId: number; season: string; units: Units; onOpenTab?: (tab: FieldTab) => void };
 
-export function RiskTab({ fieldId, season, units, onOpenTab }: Props) {
+export function RiskTab({ farmId, fieldId, season, units, onOpenTab }: Props) {
   const q = useAssessment(fieldId, season);
   if (q.isPending) return <p className="text-sm text-ink-soft">Working out the risk…</p>;
   if (q.isError) return <Notice tone="error" title="The risk could not be worked out">{q.error.message}</Notice>;
@@ -161,7 +164,7 @@ export function RiskTab({ fieldId, season, units, onOpenTab }: Props) {
         </Notice>
       )}
 
-      <Gaps gaps={a.gaps} onOpenTab={onOpenTab} />
+      <Gaps gaps={a.gaps} farmId={farmId} onOpenTab={onOpenTab} />
       <ProblemClay a={a} />
       {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
       {e ? <FactorTable factors={e.factors} units={units === 'ac' ? 'us' : 'si'} extra={ro ? [{ name: 'CN, curve number', p: ro.cn }] : undefined} /> : null}
@@ -190,7 +193,7 @@ export function RiskTab({ fieldId, season, units, onOpenTab }: Props) {
           {(e?.cautions ?? ['These figures are planning aids, not designs.']).map((c) => (
             <li key={c}>{c}</li>
           ))}
-          {terraces && !(e?.cautions ?? []).some((c) => /qualified person/i.test(c)) ? <li>{TERRACE_CAUTION}</li> : null}
+          {terraces && !(e?.cautions ?? []).includes(CAUTION_TERRACES) ? <li>{TERRACE_CAUTION}</li> : null}
         </ul>
       </Notice>
     </div>

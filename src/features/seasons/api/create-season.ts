@@ -4,6 +4,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { Season } from '../../../../shared/schemas/season';
 import { getSeasonsQueryOptions } from './get-seasons';
+import { invalidateAssessments } from './query-keys';
 
 export const createSeason = (farmId: number, label: string) => api.post<Season>(`/api/farms/${farmId}/seasons`, { label });
 
@@ -11,6 +12,9 @@ export function useCreateSeason(farmId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (label: string) => createSeason(farmId, label),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: getSeasonsQueryOptions(farmId).queryKey }),
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ queryKey: getSeasonsQueryOptions(farmId).queryKey });
+      invalidateAssessments(queryClient);
+    },
   });
 }

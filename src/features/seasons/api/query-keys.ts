@@ -1,5 +1,5 @@
 // Query keys of seasons, cropping, climate, ground and assessments, and what a change of any
-// input makes stale: every assessment and every board (the server recomputes on read).
+// input makes stale: every assessment and every board (the server stores fresh ones on each change).
 import type { QueryClient } from '@tanstack/react-query';
 
 export const assessmentsRootKey = ['assessments'] as const;

@@ -4,6 +4,7 @@
 import { Notice } from '../../../components/ui/notice';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FieldSoilSummary } from '../../../../shared/schemas/soils';
+import { originWords, type Origin } from '../../../../shared/schemas/provenance';
 import { useSoilSummary } from '../api/get-soil-summary';
 import { fmt, fmtCm, fmtPct, fmtPh, fmtShare, formatK, formatT } from './format-soil';
 import { NotWorthAmendingNotice } from './not-worth-amending-notice';
@@ -18,6 +19,9 @@ function Row({ term, children, testId }: { term: string; children: React.ReactNo
 }
 
 const Source = ({ children }: { children: React.ReactNode }) => <span className="block text-xs text-ink-soft">{children}</span>;
+
+/** Where K or T came from, in words: "Williams (EPIC) equation, …; from the mean of 2 lab samples". */
+const OriginLine = ({ origin }: { origin: Origin }) => <Source>from {[originWords(origin), origin.detail].filter(Boolean).join('; ')}</Source>;
 
 function HsgMix({ shares }: { shares: FieldSoilSummary['hsgShares'] }) {
   if (shares.length === 0) return <span className="text-ink-soft">not known yet</span>;
@@ -53,7 +57,7 @@ function Figures({ s, units }: { s: FieldSoilSummary; units: Units }) {
         {k ? (
           <>
             <span className="num">{k.main}</span> <span className="num text-ink-soft">({k.other})</span>
-            {s.kSource ? <Source>from {s.kSource}</Source> : null}
+            {s.kSource ? <OriginLine origin={s.kSource} /> : null}
           </>
         ) : (
           <>
@@ -66,7 +70,7 @@ function Figures({ s, units }: { s: FieldSoilSummary; units: Units }) {
         {t ? (
           <>
             <span className="num">{t.main}</span> <span className="num text-ink-soft">({t.other})</span>
-            {s.tSource ? <Source>from {s.tSource}</Source> : null}
+            {s.tSource ? <OriginLine origin={s.tSource} /> : null}
           </>
         ) : (
           unknown

@@ -1,0 +1,33 @@
+// Seasons, cropping, climate and typed ground as the API shows them. Pure: rows in, shapes out.
+import type { Climate, Cropping, Ground, Season as SeasonShape } from '../../shared/schemas/season';
+import type { FarmClimate, FieldCropping, FieldGround, Season } from '../models';
+
+export const presentSeason = (s: Season): SeasonShape => ({ id: s.id, label: s.label });
+
+export const presentCropping = (c: FieldCropping, seasonLabel: string): Cropping => ({
+  fieldId: c.fieldId,
+  season: seasonLabel,
+  crop: c.crop,
+  tillage: c.tillage,
+  residuePct: c.residuePct,
+  groundCoverPct: c.groundCoverPct,
+  coverCrop: c.coverCrop,
+  practice: c.practice,
+  terraceIntervalM: c.terraceIntervalM,
+  version: c.version,
+  updatedAt: new Date(c.updatedAt).toISOString(),
+});
+
+export const presentClimate = (c: FarmClimate): Climate => ({
+  rFrom: c.rFrom,
+  rValue: c.rValue,
+  annualPrecipitationMm: c.annualPrecipitationMm,
+  designStormMm: c.designStormMm,
+  record: c.rRecord,
+  version: c.version,
+});
+
+export const presentGround = (g: FieldGround): Ground => ({ slopePct: g.slopePct, slopeLengthM: g.slopeLengthM, version: g.version });
+
+/** GET ground of a field nobody has typed a slope for yet. */
+export const NO_GROUND = { slopePct: null, slopeLengthM: null, version: null } as const;

@@ -1,0 +1,95 @@
+// One field's assessment for one season from its gathered inputs: the engine's answer, the
+// figures and reasons the priority board shows, and what went in. Pure.
+import { estimate, riskClassOf, ENGINE_VERSION } from '../../../shared/erosion';
+import type { FieldAssessment, StoredBoardFigures } from '../../../shared/schemas/assessment';
+import type { EstimateInput, EstimateSuccess, Provenance } from '../../../shared/schemas/estimate';
+import { originWords, type Origin } from '../../../shared/schemas/provenance';
+import type { FieldSoilSummary } from '../../../shared/schemas/soils';
+import { buildEstimateInput } from './build-estimate-input';
+import type { GatheredInputs } from './gathered-inputs';
+
+/** Gray, mottled subsoil means a high water table; amendments will not fix it. */
+const NOT_WORTH_AMENDING_ADVICE =
+  'Gray or mottled subsoil near the surface means the ground stays wet: gypsum, lime or organic matter will not fix it. ' +
+  'Consider raised or no-dig beds, permanent cover, or drainage designed to local standards by a qualified person ' +
+  '(check for buried utilities before any digging, and follow local drainage rules).';
+
+const flagOf = (o: Origin): Provenance['flag'] => (o.kind === 'rule-of-thumb' || o.kind === 'default' ? 'practice' : undefined);
+
+/** K (and a mapped T) reach the engine as plain values; name where they really came from. */
+function withSoilSources(e: EstimateSuccess, soil: FieldSoilSummary): EstimateSuccess {
+  const sourced = (p: Provenance, o: Origin | null, method: string): Provenance => {
+    if (!o) return p;
+    const { flag: _engineFlag, ...rest } = p;
+    const flag = flagOf(o);
+    return { ...rest, source: originWords(o), method: o.detail ?? method, ...(flag ? { flag } : {}) };
+  };
+  const k = sourced(e.factors.k, soil.kSource, "from the field's soil checks or soil map");
+  // The default T keeps the engine's own provenance; a mapped T names the map.
+  const t = soil.tSource?.kind === 'default' ? e.factors.t : sourced(e.factors.t, soil.tSource, "from the field's soil map");
+  return { ...e, factors: { ...e.factors, k, t } };
+}
+
+/** Words beside a rank: rules of thumb for what drives the loss (common practice, no single source). */
+function reasonsFor(a: FieldAssessment): string[] {
+  const out: string[] = [];
+  const e = a.estimate;
+  if (e) {
+    if (e.factors.ls.value >= 1.5) out.push(`steep or long slope (LS ${e.factors.ls.value.toFixed(1)})`);
+    if (e.factors.c.value >= 0.2) out.push(`little cover (C ${e.factors.c.value.toFixed(2)})`);
+    if (e.factors.k.us && e.factors.k.us.value >= 0.4) out.push(`erodible soil (K ${e.factors.k.us.value.toFixed(2)} US)`);
+    // Half or more of the design storm running off (common practice, no single source).
+    const storm = e.runoff?.rainfallMm;
+    if (a.runoffMm != null && storm && a.runoffMm >= 0.5 * storm) out.push(`much runoff (${a.runoffMm.toFixed(0)} of ${storm.toFixed(0)} mm in the design storm)`);
+  }
+  if (a.concentratedFlowCells) out.push(`water gathers in ${a.concentratedFlowCells} cells: a grassed waterway candidate`);
+  if (a.problemClay) out.push(...a.problemClayReasons);
+  return out;
+}
+
+type AssessedField = { estimateInput: EstimateInput | null; results: FieldAssessment; boardRow: StoredBoardFigures };
+
+export function assessField(g: GatheredInputs, computedAt: Date): AssessedField {
+  const { input, gaps, lines } = buildEstimateInput(g);
+  const result = input ? estimate(input) : null;
+  const ok = result && result.ok ? withSoilSources(result, g.soil) : null;
+  const soil = g.soil;
+  const results: FieldAssessment = {
+    fieldId: g.field.id,
+    farmId: g.field.farmId,
+    name: g.field.name,
+    season: g.season.label,
+    areaHa: g.field.areaHa,
+    inputs: lines,
+    gaps,
+    estimate: ok,
+    failure: result && !result.ok ? result.reason : null,
+    soilLossTPerHaYr: ok ? ok.soilLoss.tPerHaYr : null,
+    toleranceTPerHaYr: ok ? ok.factors.t.value : null,
+    aOverT: ok ? ok.aOverT : null,
+    tonnesPerYr: ok ? (ok.soilLoss.tonnesPerYr ?? null) : null,
+    runoffMm: ok?.runoff ? ok.runoff.runoffMm : null,
+    runoffM3: ok?.runoff?.volumeM3 ?? null,
+    riskClass: ok ? riskClassOf(ok.aOverT) : null,
+    problemClay: soil.problemClay,
+    problemClayReasons: soil.problemClayReasons,
+    drainageClass: soil.drainageClass,
+    groundAdvice: soil.notWorthAmending ? NOT_WORTH_AMENDING_ADVICE : null,
+    lsSource: ok ? (input?.lsFromGrid ? 'elevation model' : 'typed slope') : null,
+    concentratedFlowCells: g.terrain ? g.terrain.concentratedFlowCells : null,
+    engineVersion: ENGINE_VERSION,
+    computedAt: computedAt.toISOString(),
+  };
+  const boardRow: StoredBoardFigures = {
+    soilLossTPerHaYr: results.soilLossTPerHaYr,
+    toleranceTPerHaYr: results.toleranceTPerHaYr,
+    aOverT: results.aOverT,
+    tonnesPerYr: results.tonnesPerYr,
+    runoffMm: results.runoffMm,
+    riskClass: results.riskClass,
+    problemClay: results.problemClay,
+    gaps,
+    reasons: reasonsFor(results),
+  };
+  return { estimateInput: input, results, boardRow };
+}
