@@ -10,6 +10,7 @@
 // Both are per cell, beyond the DEM's own 4 bytes.
 import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { writeDocSection } from './doc-section';
 import { cpus, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
@@ -234,7 +235,7 @@ try {
     ...lines,
     '',
   ].join('\n');
-  writeFileSync('docs/benchmarks.md', md);
+  writeDocSection('docs/benchmarks.md', 'terrain-benchmark', md);
   for (const r of results) {
     console.log(`\n${r.n}×${r.n}`);
     console.table(r.times.map((s) => ({ stage: s.stage, ms: Math.round(s.ms), msWithLabels: Math.round(r.timesFarm.find((x) => x.stage === s.stage)?.ms ?? NaN) })));

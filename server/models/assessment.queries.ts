@@ -23,19 +23,29 @@ const toRecords = (rows: BoardSqlRow[]): BoardRecord[] =>
     .filter((r) => r.field_id !== null)
     .map((r) => ({ seasonId: r.season_id, seasonLabel: r.season_label, farmId: r.farm_id, farmName: r.farm_name, fieldId: r.field_id!, name: r.name!, areaM2: r.area_m2!, boardRow: r.board_row }));
 
-/** Every field of one farm (or only one owner's) with its stored board figures for a season. */
-export async function farmBoardRecords(sequelize: Sequelize, args: { farmId: number; seasonId: number; ownerMembershipId?: number }): Promise<BoardRecord[]> {
+/**
+ * Every field of one farm (or only one owner's) with its stored board figures, for the season with
+ * that label or the farm's newest, in one query. No season: an empty list and a null season.
+ */
+export async function farmBoardRecords(
+  sequelize: Sequelize,
+  args: { farmId: number; seasonLabel?: string; ownerMembershipId?: number },
+): Promise<{ season: { id: number; label: string } | null; records: BoardRecord[] }> {
   const rows = await sequelize.query<BoardSqlRow>(
-    `SELECT s.id AS season_id, s.label AS season_label, fa.id AS farm_id, fa.name AS farm_name,
+    `WITH chosen AS (
+       SELECT s.id, s.label, s.farm_id FROM seasons s
+        WHERE s.farm_id = $farmId AND ($label::text IS NULL OR s.label = $label)
+        ORDER BY s.label DESC LIMIT 1)
+     SELECT c.id AS season_id, c.label AS season_label, fa.id AS farm_id, fa.name AS farm_name,
             f.id AS field_id, f.name, f.area_m2, a.board_row
-       FROM seasons s
-       JOIN farms fa ON fa.id = s.farm_id
-       JOIN fields f ON f.farm_id = fa.id AND (CAST(:owner AS integer) IS NULL OR f.owner_membership_id = :owner)
-       LEFT JOIN assessments a ON a.field_id = f.id AND a.season_id = s.id
-      WHERE s.id = :seasonId AND s.farm_id = :farmId`,
-    { replacements: { farmId: args.farmId, seasonId: args.seasonId, owner: args.ownerMembershipId ?? null }, type: QueryTypes.SELECT },
+       FROM chosen c
+       JOIN farms fa ON fa.id = c.farm_id
+       LEFT JOIN fields f ON f.farm_id = c.farm_id AND ($owner::integer IS NULL OR f.owner_membership_id = $owner)
+       LEFT JOIN assessments a ON a.field_id = f.id AND a.season_id = c.id`,
+    { bind: { farmId: args.farmId, label: args.seasonLabel ?? null, owner: args.ownerMembershipId ?? null }, type: QueryTypes.SELECT },
   );
-  return toRecords(rows);
+  const season = rows[0] ? { id: rows[0].season_id, label: rows[0].season_label } : null;
+  return { season, records: toRecords(rows) };
 }
 
 /**

@@ -13,14 +13,19 @@ export async function listSeasons(farmId: number, transaction?: Transaction): Pr
 }
 
 /** The season asked for, or the newest one; 404 when the farm has none by that label. */
+/** The 404 for a season label the farm does not have (or for a farm with no season at all). */
+export function seasonNotFound(label: string | undefined): HttpError {
+  return label ? notFound(`Season ${label}`) : notFound('A season on this farm');
+}
+
 export async function resolveSeason(farmId: number, label: string | undefined): Promise<SeasonShape> {
   if (label) {
     const s = await Season.findOne({ where: { farmId, label } });
-    if (!s) throw notFound(`Season ${label}`);
+    if (!s) throw seasonNotFound(label);
     return presentSeason(s);
   }
   const latest = await Season.scope('newestFirst').findOne({ where: { farmId } });
-  if (!latest) throw notFound('A season on this farm');
+  if (!latest) throw seasonNotFound(undefined);
   return presentSeason(latest);
 }
 

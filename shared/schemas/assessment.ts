@@ -55,24 +55,10 @@ export type StoredBoardFigures = {
   riskClass: RiskClass | null;
   problemClay: boolean;
   gaps: Gap[];
-  reasons: string[];
-};
-
-export type BoardRow = {
-  fieldId: number;
-  farmId: number;
-  farmName?: string;
-  name: string;
-  areaHa: number;
-  soilLossTPerHaYr: number | null;
-  toleranceTPerHaYr: number | null;
-  aOverT: number | null;
-  tonnesPerYr: number | null;
-  runoffMm: number | null;
-  riskClass: RiskClass | null;
-  problemClay: boolean;
-  gaps: Gap[];
   /** Short reasons for the rank, e.g. "steep (LS 3.1)", "bare after soybean". */
   reasons: string[];
 };
+
+/** A board row: the field as it is now, with its stored figures; the farm's name on the advisor's board. */
+export type BoardRow = { fieldId: number; farmId: number; farmName?: string; name: string; areaHa: number } & StoredBoardFigures;
 export type Board = { season: string; rows: BoardRow[] };

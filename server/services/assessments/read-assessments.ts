@@ -8,7 +8,7 @@ import type { EstimateSuccess } from '../../../shared/schemas/estimate';
 import { Assessment } from '../../models';
 import { advisorBoardRecords, farmBoardRecords, type BoardRecord } from '../../models/assessment.queries';
 import { presentBoard } from '../../presenters/board.presenter';
-import { resolveSeason } from '../seasons.service';
+import { resolveSeason, seasonNotFound } from '../seasons.service';
 import { refreshAssessments } from './refresh-assessments';
 
 type Viewer = { farmId: number; membershipId: number; role: string };
@@ -35,11 +35,14 @@ async function withMissingStored(sequelize: Sequelize, records: BoardRecord[], r
   return again.filter((r): r is Complete => r.boardRow !== null);
 }
 
-/** GET /api/farms/:farmId/board: every field of the farm (a landowner's own only), ranked. */
+/** GET /api/farms/:farmId/board: every field of the farm (a landowner's own only), ranked; one query when all are stored. */
 export async function farmBoard(sequelize: Sequelize, viewer: Viewer, seasonLabel: string | undefined): Promise<Board> {
-  const season = await resolveSeason(viewer.farmId, seasonLabel);
-  const read = () => farmBoardRecords(sequelize, { farmId: viewer.farmId, seasonId: season.id, ...(viewer.role === 'landowner' ? { ownerMembershipId: viewer.membershipId } : {}) });
-  return presentBoard(season.label, await withMissingStored(sequelize, await read(), read), false);
+  const owner = viewer.role === 'landowner' ? { ownerMembershipId: viewer.membershipId } : {};
+  const read = () => farmBoardRecords(sequelize, { farmId: viewer.farmId, ...owner, ...(seasonLabel ? { seasonLabel } : {}) });
+  const first = await read();
+  if (!first.season) throw seasonNotFound(seasonLabel);
+  const records = await withMissingStored(sequelize, first.records, async () => (await read()).records);
+  return presentBoard(first.season.label, records, false);
 }
 
 /** GET /api/board: every field of every farm the user advises, each farm's season by that label or its newest. */

@@ -31,5 +31,3 @@ export const volumeFigure = (m3: number, units: Units): Figure => {
   const us = `${formatFigure(m3 / M3_PER_ACRE_FT)} acre-ft`;
   return units === 'ac' ? { main: us, alt: si } : { main: si, alt: us };
 };
-
-export const ratioText = (aOverT: number) => `${formatFigure(aOverT)} × T`;

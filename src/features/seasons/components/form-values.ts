@@ -6,7 +6,6 @@ export const toNumberOrNull = (raw: unknown): number | null => {
   return s === '' ? null : Number(s);
 };
 
-export const numberText = (x: number | null | undefined) => (x === null || x === undefined ? '' : String(x));
 
 export function plainMessage(message: string | undefined): string | undefined {
   if (!message) return undefined;
