@@ -6,7 +6,6 @@ export const toNumberOrNull = (raw: unknown): number | null => {
   return s === '' ? null : Number(s);
 };
 
-
 export function plainMessage(message: string | undefined): string | undefined {
   if (!message) return undefined;
   const m = /^[a-z][\w.]*\s+(must be|is required|needs)(.*)$/i.exec(message);
