@@ -5,8 +5,11 @@ import { assertFinite, assertNonNegative, assertPositive } from './assert';
 
 /** Length of the RUSLE/USLE unit plot in metres (72.6 ft). */
 export const UNIT_PLOT_LENGTH_M = 22.13;
-/** Below this horizontal length (15 ft) RUSLE uses the short-slope S equation. */
-export const SHORT_SLOPE_LENGTH_M = 4.5;
+/**
+ * 15 ft in metres: the shortest length of AH-703's LS table (Table 4-3) with its own L. Shorter
+ * slopes keep L at its 15-ft value, so LS never falls as a slope grows at a fixed steepness.
+ */
+export const SHORT_SLOPE_LENGTH_M = 15 * 0.3048;
 
 export type RillRatio = 'low' | 'moderate' | 'high';
 
@@ -18,19 +21,24 @@ function sinTheta(slopePct: number): number {
 /**
  * RUSLE slope steepness factor S (dimensionless).
  * @param slopePct slope steepness in percent (>= 0)
- * @param lengthM horizontal slope length in metres; when given and < 4.5 m the short-slope
- *   form is used. Omit it for the ordinary (long-slope) form.
+ * @param lengthM horizontal slope length in metres. Below 15 ft (4.572 m) and from 9 % up, S
+ *   moves from the short-slope S toward the ordinary S as the slope grows (see below); omit it
+ *   for the ordinary (long-slope) form.
  */
 export function rusleSlopeFactor(slopePct: number, lengthM?: number): number {
   assertNonNegative('slopePct', slopePct);
   if (lengthM !== undefined) assertNonNegative('lengthM', lengthM);
   const sin = sinTheta(slopePct);
-  if (lengthM !== undefined && lengthM < SHORT_SLOPE_LENGTH_M) {
-    // AH-703 eq. 4-5, McCool et al. 1987: S = 3.0 (sin θ)^0.8 + 0.56 for λ < 4.5 m
-    return 3.0 * Math.pow(sin, 0.8) + 0.56;
-  }
   // AH-703 eq. 4-4, McCool et al. 1987: S = 10.8 sin θ + 0.03 (s < 9 %), 16.8 sin θ − 0.50 (s ≥ 9 %)
-  return slopePct < 9 ? 10.8 * sin + 0.03 : 16.8 * sin - 0.5;
+  const ordinary = slopePct < 9 ? 10.8 * sin + 0.03 : 16.8 * sin - 0.5;
+  // AH-703 Table 4-3: below 9 % every column shorter than 15 ft repeats the 15-ft value.
+  if (lengthM === undefined || lengthM >= SHORT_SLOPE_LENGTH_M || slopePct < 9) return ordinary;
+  // AH-703 eq. 4-5, McCool et al. 1987: S = 3.0 (sin θ)^0.8 + 0.56 for interrill erosion alone,
+  // which is the table's "< 3 ft" column. Its 6, 9 and 12 ft columns lie between that and the
+  // ordinary S by a rule we have not read; blending linearly in length from 0 to 15 ft is our
+  // reading, and matches the printed 10, 12 and 14 % rows within 0.012.
+  const interrillOnly = 3.0 * Math.pow(sin, 0.8) + 0.56;
+  return interrillOnly + (lengthM / SHORT_SLOPE_LENGTH_M) * (ordinary - interrillOnly);
 }
 
 /**
@@ -71,7 +79,8 @@ export function rusleLS(args: { slopePct: number; lengthM: number; rillRatio?: R
   assertNonNegative('slopePct', slopePct);
   assertNonNegative('lengthM', lengthM);
   const m = rusleLengthExponent(slopePct, rillRatio);
-  const l = rusleLengthFactor(lengthM, m);
+  // AH-703 Table 4-3: below 15 ft, L stays at its 15-ft value.
+  const l = rusleLengthFactor(Math.max(lengthM, SHORT_SLOPE_LENGTH_M), m);
   const s = rusleSlopeFactor(slopePct, lengthM);
   return { l, s, ls: l * s, m };
 }

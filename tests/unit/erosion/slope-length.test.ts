@@ -28,11 +28,51 @@ describe('RUSLE LS (AH-703 ch. 4; McCool et al. 1987, 1989)', () => {
     expect(rusleSlopeFactor(8.99)).toBeCloseTo(10.8 * sin + 0.03, 12);
     expect(rusleSlopeFactor(9)).toBeCloseTo(16.8 * Math.sin(Math.atan(0.09)) - 0.5, 12);
   });
-  it('uses the short-slope S below 4.5 m (AH-703 eq. 4-5)', () => {
+  // AH-703 Table 4-3 (moderate rill/interrill ratio), the short columns < 3, 6, 9, 12 and 15 ft,
+  // as printed in the handbook's LS table (read from a university extension reproduction of it).
+  const SHORT_COLUMNS_FT = [0.03, 6, 9, 12, 15];
+  const TABLE_4_3_SHORT: Record<number, number[]> = {
+    0.2: [0.05, 0.05, 0.05, 0.05, 0.05],
+    0.5: [0.07, 0.07, 0.07, 0.07, 0.07],
+    1: [0.11, 0.11, 0.11, 0.11, 0.11],
+    2: [0.17, 0.17, 0.17, 0.17, 0.17],
+    3: [0.22, 0.22, 0.22, 0.22, 0.22],
+    4: [0.26, 0.26, 0.26, 0.26, 0.26],
+    5: [0.3, 0.3, 0.3, 0.3, 0.3],
+    6: [0.34, 0.34, 0.34, 0.34, 0.34],
+    8: [0.42, 0.42, 0.42, 0.42, 0.42],
+    10: [0.46, 0.48, 0.5, 0.51, 0.52],
+    12: [0.47, 0.53, 0.58, 0.61, 0.64],
+    14: [0.48, 0.58, 0.65, 0.7, 0.75],
+  };
+  it('repeats the 15-ft LS in every shorter column below 9 % (AH-703 Table 4-3)', () => {
+    for (const [slope, row] of Object.entries(TABLE_4_3_SHORT).filter(([s]) => Number(s) < 9)) {
+      SHORT_COLUMNS_FT.forEach((ft, i) => expect(rusleLS({ slopePct: Number(slope), lengthM: ftToM(ft) }).ls.toFixed(2), `${slope} %, ${ft} ft`).toBe(row[i].toFixed(2)));
+    }
+  });
+  it('gives the < 3 ft and 15 ft cells from 9 % up, and the 6–12 ft cells within 0.012 (AH-703 Table 4-3; short-slope S, eq. 4-5)', () => {
+    for (const [slope, row] of Object.entries(TABLE_4_3_SHORT).filter(([s]) => Number(s) >= 9)) {
+      const ls = SHORT_COLUMNS_FT.map((ft) => rusleLS({ slopePct: Number(slope), lengthM: ftToM(ft) }).ls);
+      expect(ls[0].toFixed(2), `${slope} %, < 3 ft`).toBe(row[0].toFixed(2));
+      expect(ls[4].toFixed(2), `${slope} %, 15 ft`).toBe(row[4].toFixed(2));
+      for (const i of [1, 2, 3]) expect(Math.abs(ls[i] - row[i]), `${slope} %, ${SHORT_COLUMNS_FT[i]} ft`).toBeLessThanOrEqual(0.012);
+    }
+  });
+  it('never lowers LS as a slope grows longer at a fixed steepness (AH-703 Table 4-3 rows rise left to right)', () => {
+    for (const slope of [0.5, 2, 5, 8.99, 9, 12, 20, 35]) {
+      let previous = 0;
+      for (let lengthM = 0.05; lengthM <= 30; lengthM += 0.05) {
+        const ls = rusleLS({ slopePct: slope, lengthM }).ls;
+        expect(ls, `${slope} %, ${lengthM.toFixed(2)} m`).toBeGreaterThanOrEqual(previous - 1e-12);
+        previous = ls;
+      }
+    }
+  });
+  it('uses the ordinary S from 15 ft and when no length is given (AH-703 eq. 4-4)', () => {
     const sin = Math.sin(Math.atan(0.2));
-    expect(rusleSlopeFactor(20, 3)).toBeCloseTo(3 * sin ** 0.8 + 0.56, 12);
-    expect(rusleSlopeFactor(20, 4.5)).toBeCloseTo(16.8 * sin - 0.5, 12);
+    expect(rusleSlopeFactor(20, ftToM(15))).toBeCloseTo(16.8 * sin - 0.5, 12);
     expect(rusleSlopeFactor(20)).toBeCloseTo(16.8 * sin - 0.5, 12);
+    expect(rusleSlopeFactor(20, 0)).toBeCloseTo(3 * sin ** 0.8 + 0.56, 12); // eq. 4-5, interrill only
   });
   it('orders m low < moderate < high rill/interrill ratio (β/2, β, 2β) [memory for the labels]', () => {
     const low = rusleLengthExponent(10, 'low');
