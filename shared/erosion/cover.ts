@@ -20,7 +20,7 @@ export type CoverRow = {
 };
 export type CoverTable = {
   rows: CoverRow[];
-  pasture: { source: string; flag: Flag; rows: { groundCoverPct: number; c: number }[] };
+  pasture: { source: string; flag: Flag; rows: { groundCoverPct: number; c: number; source?: string; flag?: Flag }[] };
   coverCrop: { factor: number; source: string; flag: Flag };
   residueAdjustment: { b: number; source: string; flag: Flag };
 };
@@ -58,12 +58,15 @@ export function pastureC(groundCoverPct: number, table: CoverTable = DEFAULT_COV
   const t = (groundCoverPct - a.groundCoverPct) / (b.groundCoverPct - a.groundCoverPct);
   // AH-537 Table 10, interpolated log-linearly between rows
   const c = Math.exp(Math.log(a.c) + t * (Math.log(b.c) - Math.log(a.c)));
-  const exact = rows.some((r) => r.groundCoverPct === groundCoverPct);
+  const exact = rows.find((r) => r.groundCoverPct === groundCoverPct);
+  // A figure is only as sure as the least sure row it comes from.
+  const used = exact ? [exact] : [a, b];
+  const recalled = used.find((r) => r.flag === 'memory');
   return succeed({
     c,
-    source: table.pasture.source,
+    source: recalled?.source ?? table.pasture.source,
     method: exact ? `table row, ground cover ${groundCoverPct} %` : 'table, log-linear between ground-cover rows',
-    flag: table.pasture.flag,
+    flag: recalled ? 'memory' : table.pasture.flag,
     notes: [],
   });
 }

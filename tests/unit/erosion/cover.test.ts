@@ -75,11 +75,21 @@ describe('C from tables', () => {
     expect(r.ok && r.value.c).toBeCloseTo(c, 10);
     expect(r.ok && r.value.flag).toBe('pub');
   });
-  it('interpolates pasture C between rows and refuses cover below the table', () => {
+  it('interpolates pasture C between rows and refuses cover outside 0–100 %', () => {
     const r = pastureC(50);
     expect(r.ok && r.value.c).toBeLessThan(0.1);
     expect(r.ok && r.value.c).toBeGreaterThan(0.042);
-    expect(pastureC(10)).toMatchObject({ ok: false });
+    expect(pastureC(-1)).toMatchObject({ ok: false });
+    expect(pastureC(101)).toMatchObject({ ok: false });
+  });
+  it('covers bare pasture: 0 % ground cover gives C 0.45 (AH-537 Table 10 [memory]), flagged as recalled', () => {
+    const bare = pastureC(0);
+    expect(bare.ok && bare.value.c).toBeCloseTo(0.45, 10);
+    expect(bare.ok && bare.value.flag).toBe('memory');
+    // Between the bare row and 20 % the figure leans on the recalled row too.
+    const thin = pastureC(10);
+    expect(thin.ok && thin.value.c).toBeCloseTo(Math.sqrt(0.45 * 0.2), 10);
+    expect(thin.ok && thin.value.flag).toBe('memory');
   });
   it('gives continuous corn under a moldboard plough a C within 0.40–0.55 [memory]', () => {
     const r = coverFromTable({ crop: 'corn', tillage: 'moldboard plough' });
