@@ -9,10 +9,11 @@ import { refreshAssessments } from './assessments/refresh-assessments';
 export type InputChange =
   /** Fields drawn, reshaped, imported or removed: flow paths and per-field figures change. */
   | { kind: 'boundary'; farmId: number; fieldIds?: number[] }
-  /** The typed slope length also caps the elevation model's flow length on that field. */
   /** A field renamed or given another owner: nothing the terrain run computes. */
   | { kind: 'field-details'; farmId: number; fieldIds: number[] }
+  /** The typed slope length also caps the elevation model's flow length on that field. */
   | { kind: 'ground'; farmId: number; fieldIds: number[]; slopeLengthChanged: boolean }
+  /** Slope classes change the terrain figures only, not the assessment's inputs. */
   | { kind: 'slope-classes'; farmId: number }
   /** A terrain run finished and wrote new per-field figures. */
   | { kind: 'terrain'; farmId: number }
@@ -39,7 +40,9 @@ export async function afterInputsChange(
   actor: { userId: number },
   transaction?: Transaction,
 ): Promise<{ terrainJobId: string | null }> {
-  await refreshAssessments(deps.sequelize, { farmId: change.farmId, fieldIds: fieldsTouched(change) }, transaction);
+  if (change.kind !== 'slope-classes') {
+    await refreshAssessments(deps.sequelize, { farmId: change.farmId, fieldIds: fieldsTouched(change) }, transaction);
+  }
   const terrainJobId = rerunsTerrain(change) ? await refreshTerrainIfAny(deps, change.farmId, actor.userId) : null;
   return { terrainJobId };
 }

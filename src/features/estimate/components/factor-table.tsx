@@ -1,5 +1,6 @@
 // Every factor of the estimate: its value and unit (SI, or US where the units differ), where
-// it came from and how it was worked out; recalled values and rules of thumb are marked.
+// it came from and how it was worked out; figures to check against the handbook and rules of
+// thumb are marked in plain words.
 import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
 import { formatFigure } from './format-figure';
 
@@ -15,7 +16,7 @@ const FACTORS: { key: keyof EstimateSuccess['factors']; name: string }[] = [
 ];
 
 const FLAG_BADGES: Record<NonNullable<Provenance['flag']>, { text: string; title: string }> = {
-  memory: { text: 'recalled value', title: 'Recalled from the literature, not re-read from the source: check it before relying on it.' },
+  memory: { text: 'check against the handbook', title: 'Taken from the named handbook without re-reading it: check the figure there, or use your local one, before relying on it.' },
   practice: { text: 'rule of thumb', title: 'Common practice with no single published source.' },
 };
 
