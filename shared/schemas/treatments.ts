@@ -1,0 +1,71 @@
+// Payloads of the treatments, prices and budget-plan API, shared by the client and the server's
+// validate() middleware. Money is in the farm's currency; soil in metric tonnes.
+import { z } from 'zod';
+import { SeasonLabel } from './season';
+
+/** What a farm pays for, one price per item, each in its own unit. */
+export const PRICE_ITEMS = {
+  'lime-per-t': { label: 'Agricultural lime, delivered', unit: 'per tonne' },
+  'gypsum-per-t': { label: 'Gypsum, delivered', unit: 'per tonne' },
+  'compost-per-t': { label: 'Compost, delivered', unit: 'per tonne' },
+  'spreading-per-ha': { label: 'Spreading lime, gypsum or compost', unit: 'per hectare' },
+  'cover-crop-per-ha': { label: 'Cover crop seed and planting', unit: 'per hectare' },
+  'no-till-per-ha': { label: 'Changing to no-till (drill hire, first year)', unit: 'per hectare' },
+  'reduced-till-per-ha': { label: 'Changing to reduced tillage', unit: 'per hectare' },
+  'contour-layout-per-ha': { label: 'Laying out contour lines', unit: 'per hectare' },
+  'strip-layout-per-ha': { label: 'Laying out contour strips', unit: 'per hectare' },
+  'terrace-per-m': { label: 'Terrace, built', unit: 'per metre' },
+  'waterway-per-m': { label: 'Grassed waterway, shaped and seeded', unit: 'per metre' },
+  'filter-strip-per-ha': { label: 'Filter strip seeding', unit: 'per hectare of strip' },
+  'drainage-per-ha': { label: 'Subsurface drainage, designed and installed', unit: 'per hectare' },
+  'raised-beds-per-ha': { label: 'Raised or no-dig beds', unit: 'per hectare' },
+  'permanent-cover-per-ha': { label: 'Permanent cover seeding', unit: 'per hectare' },
+} as const;
+export type PriceKey = keyof typeof PRICE_ITEMS;
+export const PRICE_KEYS = Object.keys(PRICE_ITEMS) as PriceKey[];
+
+const money = (key: string) =>
+  z
+    .number({ error: `${key} must be a number` })
+    .refine(Number.isFinite, `${key} must be a finite number`)
+    .pipe(z.number().min(0, `${key} must be at least 0`).max(1_000_000, `${key} must be at most 1000000`));
+
+/** Every item's price, in the farm's currency. */
+export const Prices = z.object(Object.fromEntries(PRICE_KEYS.map((k) => [k, money(k)])) as Record<PriceKey, ReturnType<typeof money>>);
+export type Prices = z.infer<typeof Prices>;
+
+export const Currency = z.string().regex(/^[A-Z]{3}$/, 'currency must be a three-letter code such as USD');
+
+/** PUT /api/farms/:farmId/prices */
+export const PricesUpdate = z.object({
+  /** The version read (0 when the farm still has the example list). */
+  version: z.number().int().nonnegative(),
+  currency: Currency,
+  prices: Prices,
+});
+export type PricesUpdate = z.input<typeof PricesUpdate>;
+
+/** GET /api/farms/:farmId/prices answer. */
+export type PriceList = {
+  currency: string;
+  prices: Prices;
+  /** True while the farm still has the example list: the figures are examples to replace. */
+  examples: boolean;
+  /** Items still at their example figure. */
+  exampleKeys: PriceKey[];
+  version: number;
+  updatedBy: string | null;
+  updatedAt: string | null;
+};
+
+/** GET /api/fields/:fieldId/treatments?season=YYYY */
+export const TreatmentsQuery = z.object({ season: SeasonLabel.optional() });
+
+/** POST /api/farms/:farmId/budget-plan */
+export const BudgetPlanRequest = z.object({
+  season: SeasonLabel,
+  budget: money('budget'),
+  /** most-soil: the most tonnes saved; most-fields-under-t: the most fields brought under T (then the most tonnes). */
+  goal: z.enum(['most-soil', 'most-fields-under-t'], { error: "goal must be 'most-soil' or 'most-fields-under-t'" }).default('most-soil'),
+});
+export type BudgetPlanRequest = z.input<typeof BudgetPlanRequest>;
