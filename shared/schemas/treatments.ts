@@ -69,3 +69,49 @@ export const BudgetPlanRequest = z.object({
   goal: z.enum(['most-soil', 'most-fields-under-t'], { error: "goal must be 'most-soil' or 'most-fields-under-t'" }).default('most-soil'),
 });
 export type BudgetPlanRequest = z.input<typeof BudgetPlanRequest>;
+
+// ------------------------------------------------------------------ answers
+import type { FieldTreatments, TreatmentOption, TreatmentSite } from '../erosion/treatments/types';
+
+/** GET /api/fields/:fieldId/treatments answer. `site` lets the browser's what-if rerun the engine. */
+export type FieldTreatmentsAnswer =
+  | ({ ok: true; fieldId: number; season: string; site: TreatmentSite } & FieldTreatments)
+  | { ok: false; fieldId: number; season: string; reason: string; gaps: { key: string; tab: string; message: string }[] };
+
+/** GET /api/farms/:farmId/treatments answer: every field's options and its best one. */
+export type FarmTreatmentsAnswer = {
+  season: string;
+  currency: string;
+  fields: {
+    fieldId: number;
+    name: string;
+    areaHa: number;
+    /** The cheapest option under T, else the one saving the most soil per money; null when there is none. */
+    best: TreatmentOption | null;
+    answer: FieldTreatmentsAnswer;
+  }[];
+};
+
+/** POST /api/farms/:farmId/budget-plan answer. */
+export type BudgetPlan = {
+  season: string;
+  goal: 'most-soil' | 'most-fields-under-t';
+  currency: string;
+  budget: number;
+  spent: number;
+  tonnesSavedPerYr: number;
+  fieldsUnderT: number;
+  choices: {
+    fieldId: number;
+    fieldName: string;
+    optionId: string | null;
+    title: string | null;
+    cost: number;
+    tonnesSavedPerYr: number;
+    reachesT: boolean;
+  }[];
+  /** Why the plan is what it is, in sentences for a person. */
+  explanation: string[];
+  /** Soil saved against money for budgets from 0 to a little past what every field's best option costs. */
+  curve: { budget: number; tonnesSavedPerYr: number }[];
+};
