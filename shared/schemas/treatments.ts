@@ -1,6 +1,7 @@
 // Payloads of the treatments, prices and budget-plan API, shared by the client and the server's
 // validate() middleware. Money is in the farm's currency; soil in metric tonnes.
 import { z } from 'zod';
+import type { FieldTreatments, TreatmentOption, TreatmentSite } from '../erosion/treatments/types';
 import { SeasonLabel } from './season';
 
 /** What a farm pays for, one price per item, each in its own unit. */
@@ -71,7 +72,6 @@ export const BudgetPlanRequest = z.object({
 export type BudgetPlanRequest = z.input<typeof BudgetPlanRequest>;
 
 // ------------------------------------------------------------------ answers
-import type { FieldTreatments, TreatmentOption, TreatmentSite } from '../erosion/treatments/types';
 
 /** GET /api/fields/:fieldId/treatments answer. `site` lets the browser's what-if rerun the engine. */
 export type FieldTreatmentsAnswer =
