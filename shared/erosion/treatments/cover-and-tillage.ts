@@ -47,7 +47,8 @@ function tillagePlan(ctx: SiteContext, key: 'no-till' | 'reduced-till'): PlanRes
     modify: (inp) => {
       // The row's own typical residue replaces the old tillage's residue figure.
       const next = { ...(inp.c.from === 'table' ? inp.c : c), tillage: target } as typeof c;
-      delete next.residuePct;
+      if (residue == null) delete next.residuePct;
+      else next.residuePct = residue;
       return { ...inp, c: next };
     },
     whys: {
