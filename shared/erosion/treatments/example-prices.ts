@@ -3,7 +3,7 @@
 import pricesJson from '../../../data/reference/example-prices.json';
 import { PRICE_KEYS, type PriceKey, type Prices } from '../../schemas/treatments';
 
-type PriceRow = { key: PriceKey; price: number; rangeMet: [number, number]; note: string };
+type PriceRow = { key: PriceKey; price: number; rangeMet: [number, number]; source: string; flag: 'practice' };
 const table = pricesJson as unknown as { currency: string; source: string; rows: PriceRow[] };
 
 function pricesFrom(rows: PriceRow[]): Prices {

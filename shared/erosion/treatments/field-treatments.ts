@@ -65,7 +65,7 @@ export const COMBINATIONS: TreatmentKey[][] = [
 
 const unique = (xs: string[]) => [...new Set(xs)];
 
-type Applied = { plans: Plan[]; input: EstimateInputParsed; result: EstimateSuccess; changes: FactorChange[]; quantities: TreatmentQuantity[]; costLines: CostLine[]; effects: string[]; cautions: string[] };
+type Applied = { plans: Plan[]; input: EstimateInputParsed; result: EstimateSuccess; changes: FactorChange[]; notes: string[]; quantities: TreatmentQuantity[]; costLines: CostLine[]; effects: string[]; cautions: string[] };
 
 function applyPlans(ctx: SiteContext, plans: Plan[]): Result<Applied> {
   const run = runPlans(ctx, plans);
@@ -75,7 +75,7 @@ function applyPlans(ctx: SiteContext, plans: Plan[]): Result<Applied> {
     ...run.value,
     quantities: plans.flatMap((p) => p.quantities),
     costLines: plans.flatMap((p) => p.costLines),
-    effects: unique(plans.flatMap((p) => p.effects)),
+    effects: unique([...plans.flatMap((p) => p.effects), ...run.value.notes]),
     cautions: unique([...plans.flatMap((p) => p.cautions), CAUTION_PLANNING_AID]),
   });
 }

@@ -27,21 +27,24 @@ function cropping(inp: EstimateInputParsed): CroppingForCurveNumber | null {
   return { crop: c.crop, tillage: c.tillage ?? null, residuePct: c.residuePct ?? null, groundCoverPct: c.groundCoverPct ?? null, coverCrop: c.coverCrop, practice: inp.p.practice };
 }
 
-/** Moves the runoff row to the new cropping when the current row came from the current cropping. */
-function followRunoffRow(before: EstimateInputParsed, after: EstimateInputParsed): EstimateInputParsed {
-  const ro = after.runoff;
-  if (!ro || ro.cn !== undefined) return after;
-  const was = cropping(before);
-  const now = cropping(after);
-  if (!was || !now) return after;
+/** Is the current runoff row the one the current cropping gives (so it may follow a new cropping)? */
+function runoffRowFollowsCropping(inp: EstimateInputParsed): boolean {
+  const ro = inp.runoff;
+  const was = cropping(inp);
+  if (!ro || ro.cn !== undefined || !was) return false;
   const old = curveNumberCover(was);
-  const derived = ro.cover === old.cover && (ro.treatment ?? null) === old.treatment && (ro.condition ?? null) === old.condition;
-  if (!derived) return after;
-  const row = curveNumberCover(now);
-  return { ...after, runoff: { ...ro, cover: row.cover, treatment: row.treatment, condition: row.condition } };
+  return ro.cover === old.cover && (ro.treatment ?? null) === old.treatment && (ro.condition ?? null) === old.condition;
 }
 
-export type PlansRun = { input: EstimateInputParsed; result: EstimateSuccess; changes: FactorChange[] };
+/** Moves the runoff row to the new cropping and practice. */
+function followRunoffRow(after: EstimateInputParsed): EstimateInputParsed {
+  const now = cropping(after);
+  if (!after.runoff || !now) return after;
+  const row = curveNumberCover(now);
+  return { ...after, runoff: { ...after.runoff, cover: row.cover, treatment: row.treatment, condition: row.condition } };
+}
+
+export type PlansRun = { input: EstimateInputParsed; result: EstimateSuccess; changes: FactorChange[]; notes: string[] };
 
 const slopeLengthOf = (inp: EstimateInputParsed, r: EstimateSuccess) => r.practice?.effectiveSlopeLengthM ?? inp.slopeLengthM;
 
@@ -49,7 +52,8 @@ const slopeLengthOf = (inp: EstimateInputParsed, r: EstimateSuccess) => r.practi
 export function runPlans(ctx: SiteContext, plans: Plan[]): Result<PlansRun> {
   let input = ctx.input;
   for (const p of plans) if (p.modify) input = p.modify(input);
-  input = followRunoffRow(ctx.input, input);
+  const follows = runoffRowFollowsCropping(ctx.input);
+  if (follows) input = followRunoffRow(input);
   const result = estimate(input);
   if (!result.ok) return fail(`the engine could not run with ${plans.map((p) => p.key).join(' + ')}: ${result.reason}`);
   const base = ctx.base;
@@ -66,5 +70,15 @@ export function runPlans(ctx: SiteContext, plans: Plan[]): Result<PlansRun> {
     const why = plans.map((p) => p.whys[factor]).filter(Boolean).join('; ');
     changes.push({ factor, from, to, why: why || 'follows from the other changes' });
   }
-  return succeed({ input, result, changes });
+  const notes: string[] = [];
+  const wantsCn = plans.some((p) => p.whys['curve number']);
+  const ro = ctx.input.runoff;
+  if (wantsCn && ro && (ro.cn !== undefined || (!follows && !changes.some((x) => x.factor === 'curve number')))) {
+    notes.push(
+      ro.cn !== undefined
+        ? 'The curve number was typed in, so what this does to runoff cannot be predicted: runoff stays as typed.'
+        : "The runoff row was chosen by hand, not from the cropping, so it is left as it is: runoff is not predicted to change.",
+    );
+  }
+  return succeed({ input, result, changes, notes });
 }

@@ -168,6 +168,14 @@ describe('what the engine will not guess', () => {
       expect(ft.unavailable.find((u) => u.key === key)?.reason).toMatch(/typed in as a value/);
     }
   });
+  it('a typed curve number: runoff stays as typed, and the option says so', () => {
+    const site = demoLikeSite();
+    site.input = { ...site.input, runoff: { rainfallMm: 105, cn: 82 } };
+    const a = applyTreatments(site, ['cover-crop']);
+    if (!a.ok) throw new Error(a.reason);
+    expect(a.value.changes.map((x) => x.factor)).toEqual(['C']);
+    expect(a.value.effects.join(' ')).toMatch(/curve number was typed in/);
+  });
   it('a typed P: support practices cannot be predicted', () => {
     const site = demoLikeSite();
     site.input = { ...site.input, p: { from: 'value', value: 0.5 } };
