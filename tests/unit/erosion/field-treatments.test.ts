@@ -108,6 +108,16 @@ describe('each treatment changes what it changes, and no more', () => {
       expect(a.value.changes.map((x) => x.factor).sort()).toEqual(['C', 'curve number']);
     }
   });
+  it('contour farming on 5 % and 60 m: P 0.5 within its 90 m limit (AH-537 contouring table, recalled), combined with no-till and a cover crop', () => {
+    const site = demoLikeSite();
+    site.input = { ...site.input, slopePct: 5, slopeLengthM: 60 };
+    const ft = options(site);
+    const contour = ft.options.find((o) => o.id === 'contour-farming')!;
+    expect(contour.changes.find((x) => x.factor === 'P')).toMatchObject({ from: 1, to: 0.5 });
+    // TR-55 table 2-2b, row crops contoured + crop residue, group B: poor 78
+    expect(contour.changes.find((x) => x.factor === 'curve number')).toMatchObject({ from: 80, to: 78 });
+    expect(ft.options.map((o) => o.id)).toEqual(expect.arrayContaining(['contour-farming+no-till+cover-crop', 'strip-cropping+cover-crop']));
+  });
   it('terraces: slope length = interval by the spacing rule of thumb, P from the contour row, terrace metres = area / interval', () => {
     const a = applyTreatments(demoLikeSite(), ['terraces']);
     if (!a.ok) throw new Error(a.reason);
