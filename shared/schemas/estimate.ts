@@ -196,6 +196,8 @@ export type Provenance = {
   flag?: 'memory' | 'practice';
   /** The same figure in US customary units, where they differ. */
   us?: { value: number; unit: string };
+  /** Set when a person typed this figure for the field in place of the worked-out one. */
+  override?: { note: string; by: string | null };
 };
 
 export type EstimateSuccess = {
