@@ -184,6 +184,7 @@ function CroppingEditor({ cropping, season, saving, onSave }: FormProps) {
             <>
               <SelectField
                 label="What the strips grow, year by year"
+                className="sm:col-span-2"
                 error={plainMessage(e.stripRotation?.message)}
                 data-testid="cropping-strip-rotation"
                 {...register('stripRotation')}
