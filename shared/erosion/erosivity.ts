@@ -31,6 +31,11 @@ export function rFromAnnualPrecipitation(annualPrecipitationMm: number): number 
  */
 export const R_PRECIPITATION_FITTED_RANGE_MM = { min: 200, max: 1700, flag: 'memory' } as const;
 
+/** Beside the box where annual precipitation is typed. */
+export const R_PRECIPITATION_HINT =
+  `A regional fit to US stations with about ${R_PRECIPITATION_FITTED_RANGE_MM.min}–${R_PRECIPITATION_FITTED_RANGE_MM.max} mm a year; ` +
+  'outside that range, or where most rain falls in winter, type the local R instead.';
+
 /** Said wherever R comes from annual precipitation, inside the fitted range or not. */
 export const R_FROM_PRECIPITATION_NOTE =
   'R from annual precipitation is a regional fit to US stations; in winter-rain (Mediterranean) climates, where gentle winter rain ' +
