@@ -38,6 +38,10 @@ describe('overrides, strips and drainage in Chromium', () => {
     expect(await page.getByTestId('override-c').innerText()).toBe(`override: residue counted in May, by ${users.farmer.name}`);
     expect(await page.getByTestId('input-c').getByTestId('input-source').innerText()).toMatch(/typed by .*; residue counted in May/);
     await page.getByTestId('factor-table').screenshot({ path: 'test-results/risk-tab-override.png' });
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.getByTestId('override-open-p').click();
+    await page.getByTestId('override-form-p').screenshot({ path: 'test-results/risk-tab-override-form-phone.png' });
+    await page.setViewportSize({ width: 1280, height: 900 });
 
     await page.goto(`${app.baseUrl}/farms/${farm.id}/fields/${f.id}?tab=cropping&season=2027`);
     await page.getByTestId('cropping-practice').selectOption('strip cropping');
