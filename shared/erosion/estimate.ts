@@ -151,7 +151,12 @@ function run(inp: EstimateInputParsed): EstimateResult {
   const l = prov(ls.l, '', lsSource, lsMethod);
   const s = prov(ls.s, '', lsSource, lsMethod);
   let lsP = prov(ls.ls, '', lsSource, lsMethod);
-  if (inp.lsFromGrid) {
+  const terraced = practice?.practice === 'terraces' && practice.effective;
+  if (inp.lsFromGrid && terraced) {
+    // Terraces cut every flow path at each terrace (AH-537: slope length = terrace interval),
+    // which the elevation model's uninterrupted paths do not know.
+    warnings.push("Terraces cut the slope at each terrace: LS is taken on the terrace interval at the mean slope, not from the elevation model.");
+  } else if (inp.lsFromGrid) {
     // A field's LS from its elevation model (mean of the per-cell Desmet–Govers L × RUSLE S)
     // replaces the one-slope LS; L and S above stay as the mean-slope figures for reference.
     lsP = prov(inp.lsFromGrid.value, '', inp.lsFromGrid.source, inp.lsFromGrid.method);

@@ -99,13 +99,8 @@ export function terracesPlan(ctx: SiteContext): PlanResult {
   return offer({
     key,
     family: 'support-practice',
-    modify: (inp) => {
-      const next = { ...inp, p: { from: 'practice' as const, practice: 'terraces' as const, terraceIntervalM: interval } };
-      // The elevation model's LS follows uninterrupted flow paths; terraces cut them at each
-      // terrace, so LS is taken on the terrace interval at the mean slope instead.
-      delete next.lsFromGrid;
-      return next;
-    },
+    // estimate() takes LS on the terrace interval at the mean slope in place of the elevation model's.
+    modify: (inp) => ({ ...inp, p: { from: 'practice' as const, practice: 'terraces' as const, terraceIntervalM: interval } }),
     whys: {
       P: `terraces farmed on the contour at ${round1(slopePct)} %: P ${sp.p} (${sp.source})`,
       'slope length': `slope length becomes the terrace interval, ${round1(interval)} m (${round1(mToFt(interval))} ft), by ${TERRACE_SPACING_RULE.words}${grid ? "; LS on that length at the mean slope replaces the elevation model's LS" : ''}`,

@@ -131,3 +131,16 @@ describe('estimate(): a whole estimate from the shared schema', () => {
     expect(p.error?.issues[0].message).toBe('slopePct must be at most 100 %');
   });
 });
+
+describe('estimate(): terraces with an elevation model', () => {
+  it('takes LS on the terrace interval, not the elevation model’s uninterrupted paths (AH-537: slope length = terrace interval)', () => {
+    const input = { ...base, slopePct: 6, slopeLengthM: 120, lsFromGrid: { value: 3.2, source: 'elevation model', method: 'mean of cells' } };
+    const plain = estimate(input);
+    const terraced = estimate({ ...input, p: { from: 'practice', practice: 'terraces', terraceIntervalM: ftToM(100) } });
+    if (!plain.ok || !terraced.ok) throw new Error('estimate failed');
+    expect(plain.factors.ls.value).toBe(3.2);
+    // AH-703 LS table: 6 %, 100 ft, moderate ratio → 0.78
+    expect(terraced.factors.ls.value).toBeCloseTo(0.78, 2);
+    expect(terraced.warnings.join(' ')).toMatch(/Terraces cut the slope/);
+  });
+});
