@@ -23,16 +23,24 @@ import { FieldGround } from './field-ground.model';
 import { Assessment } from './assessment.model';
 import { FarmPrices } from './farm-prices.model';
 import { FieldFactorOverride } from './field-factor-override.model';
+import { UserSession } from './user-session.model';
+import { Invitation } from './invitation.model';
+import { PasswordReset } from './password-reset.model';
+import { OutgoingMail } from './outgoing-mail.model';
+import { DevMailboxMessage } from './dev-mailbox-message.model';
+import { NoticeSetting } from './notice-setting.model';
 
 export {
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
   Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride,
+  UserSession, Invitation, PasswordReset, OutgoingMail, DevMailboxMessage, NoticeSetting,
 };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
 const MODELS = [
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
   Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride,
+  UserSession, Invitation, PasswordReset, OutgoingMail, DevMailboxMessage, NoticeSetting,
 ];
 
 let initialised: Sequelize | null = null;
