@@ -72,7 +72,8 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/auth', authRoutes(sequelize, config));
   const people = peopleRoutes(sequelize, config);
   api.use('/invitations', people.invitations);
-  if (devMailbox) api.use('/dev', devMailboxRoutes());
+  // Without the fake there is no mailbox: 404 for everyone, signed in or not.
+  api.use('/dev', devMailbox ? devMailboxRoutes() : notFoundApi);
   api.use(requireUser(config));
   api.use('/farms', people.farms);
   api.use('/farms', farmsRoutes({ sequelize, jobs }));
