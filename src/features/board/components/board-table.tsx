@@ -19,8 +19,8 @@ import type { BoardRow } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
 import { paths } from '../../../lib/paths';
 import { formatArea } from '../../../lib/units';
-import { formatFigure } from '../../estimate/components/format-figure';
-import { lossFigure, runoffFigure, tonnesFigure, type Figure } from './loss-units';
+import { formatFigure } from '../../../lib/format-figure';
+import { lossFigure, runoffFigure, tonnesFigure, type Figure } from '../../../lib/loss-units';
 import { RiskBadge } from './risk-badge';
 
 export type RankedRow = BoardRow & { rank: number };

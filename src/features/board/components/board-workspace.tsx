@@ -11,7 +11,7 @@ import type { FieldFeature } from '../../../../shared/schemas/field';
 import { AVsTChart } from './a-vs-t-chart';
 import { BoardMap } from './board-map';
 import { BoardTable, type RankedRow } from './board-table';
-import { lossFigure } from './loss-units';
+import { lossFigure } from '../../../lib/loss-units';
 import { RiskBadge } from './risk-badge';
 import { RiskLegend } from './risk-legend';
 

@@ -2,7 +2,7 @@
 // it came from and how it was worked out; figures to check against the handbook and rules of
 // thumb are marked in plain words.
 import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
-import { formatFigure } from './format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 
 const FACTORS: { key: keyof EstimateSuccess['factors']; name: string }[] = [
   { key: 'r', name: 'R, rainfall erosivity' },

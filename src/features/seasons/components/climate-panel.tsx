@@ -11,7 +11,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { mmToIn } from '../../../../shared/erosion/units';
 import { ClimateUpdate, type Climate } from '../../../../shared/schemas/season';
 import type { Units } from '../../../../shared/schemas/auth';
-import { formatFigure } from '../../estimate/components/format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 import { useClimate } from '../api/get-climate';
 import { useUpdateClimate } from '../api/update-climate';
 import { plainMessage, toNumberOrNull } from './form-values';
