@@ -14,7 +14,7 @@ import type { Units } from '../../../../shared/schemas/auth';
 import { formatFigure } from '../../../lib/format-figure';
 import { useClimate } from '../api/get-climate';
 import { useUpdateClimate } from '../api/update-climate';
-import { plainMessage, toNumberOrNull } from './form-values';
+import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 import { saveErrorMessage } from './save-error-message';
 import { RainfallRecordUpload } from './rainfall-record-upload';
 
