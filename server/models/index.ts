@@ -21,16 +21,17 @@ import { FieldCropping } from './field-cropping.model';
 import { FarmClimate } from './farm-climate.model';
 import { FieldGround } from './field-ground.model';
 import { Assessment } from './assessment.model';
+import { FarmPrices } from './farm-prices.model';
 
 export {
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices,
 };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
 const MODELS = [
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices,
 ];
 
 let initialised: Sequelize | null = null;

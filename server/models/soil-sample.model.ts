@@ -24,6 +24,7 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
   declare organicMatterPct: number | null;
   declare ph: number | null;
   declare bufferPh: number | null;
+  declare bufferMethod: 'smp' | 'mehlich' | null;
   declare depthToGrayCm: number | null;
   declare describedToCm: number | null;
   declare bulkDensityMgM3: number | null;
@@ -64,6 +65,7 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
         organicMatterPct: double(),
         ph: double(),
         bufferPh: double(),
+        bufferMethod: DataTypes.TEXT,
         depthToGrayCm: double(),
         describedToCm: double(),
         bulkDensityMgM3: double(),

@@ -18,6 +18,7 @@ export function presentSample(s: SoilSample): SoilSampleBody {
     organicMatterPct: s.organicMatterPct,
     ph: s.ph,
     bufferPh: s.bufferPh,
+    bufferMethod: s.bufferMethod,
     depthToGrayCm: s.depthToGrayCm,
     describedToCm: s.describedToCm,
     bulkDensity: s.bulkDensityMgM3,

@@ -20,6 +20,10 @@ export const SEPARATES_TOLERANCE_PCT = 2;
 export const FeelGrit = z.enum(['gritty', 'smooth', 'neither'], { error: "feel must be 'gritty', 'smooth' or 'neither'" });
 export type FeelGrit = z.infer<typeof FeelGrit>;
 
+/** Buffer-pH methods the lime calculation knows: SMP (starts at pH 7.5) and Mehlich (starts at 6.6). */
+export const BufferMethod = z.enum(['smp', 'mehlich'], { error: "bufferMethod must be 'smp' or 'mehlich'" });
+export const BUFFER_METHOD_NAMES: Record<z.infer<typeof BufferMethod>, string> = { smp: 'SMP buffer', mehlich: 'Mehlich buffer' };
+
 const common = {
   label: opt(z.string().trim().max(120, 'label must be at most 120 characters')),
   sampledOn: opt(z.iso.date({ error: 'sampledOn must be a date written YYYY-MM-DD' })),
@@ -28,6 +32,8 @@ const common = {
   organicMatterPct: opt(num('organicMatterPct', 0, 100, ' %')),
   ph: opt(num('ph', 2, 11)),
   bufferPh: opt(num('bufferPh', 2, 11)),
+  /** Which buffer the lab used for bufferPh: each has its own starting pH and calibration. */
+  bufferMethod: opt(BufferMethod),
   /** Depth to gray (chroma ≤ 2) or mottled (redoximorphic) colours, cm; null when none was seen. */
   depthToGrayCm: opt(num('depthToGrayCm', 0, 500, ' cm')),
   /** How deep the profile was looked at, cm; lets "no gray seen" give a drainage class. */
@@ -128,6 +134,7 @@ export type SoilSample = {
   organicMatterPct: number | null;
   ph: number | null;
   bufferPh: number | null;
+  bufferMethod: 'smp' | 'mehlich' | null;
   depthToGrayCm: number | null;
   describedToCm: number | null;
   bulkDensity: number | null;
@@ -159,6 +166,7 @@ export const SOIL_CSV_COLUMNS = [
   'organic_matter_pct',
   'ph',
   'buffer_ph',
+  'buffer_method',
   'depth_to_gray_cm',
   'bulk_density',
   'cec',
@@ -242,6 +250,7 @@ export type FieldSoilSummary = {
   textureClass: string | null;
   ph: number | null;
   bufferPh: number | null;
+  bufferMethod: 'smp' | 'mehlich' | null;
   depthToGrayCm: number | null;
   drainageClass: string | null;
   notWorthAmending: boolean;

@@ -90,11 +90,21 @@ describe('uploading soil samples as CSV', () => {
     });
   }
 
+  it('reads the buffer method beside the buffer pH, and rejects a row with an unknown one by its column', async () => {
+    const { agent, fieldId } = await fieldWithAgent();
+    const csv = 'label,ph,buffer_ph,buffer_method\nA,5.6,6.4,smp\nB,5.5,6.3,woodruff\n';
+    const res = await agent.post(`/api/fields/${fieldId}/soil-samples/import`).field('acceptGoodRows', 'true').attach('file', Buffer.from(csv), 'lab.csv');
+    expect(res.status).toBe(201);
+    expect(res.body.created).toHaveLength(1);
+    expect(res.body.created[0]).toMatchObject({ label: 'A', bufferPh: 6.4, bufferMethod: 'smp' });
+    expect(res.body.rejected).toEqual([{ row: 3, reason: expect.stringMatching(/row 3, column buffer_method: buffer_method must be 'smp' or 'mehlich'/) }]);
+  });
+
   it('names the columns it reads when the header has an unknown one', async () => {
     const { agent, fieldId } = await fieldWithAgent();
     const res = await agent.post(`/api/fields/${fieldId}/soil-samples/import`).attach('file', Buffer.from('label,sand\nA,40\n'), 'x.csv');
     expect(res.body.message).toMatch(/\(sand\)/);
-    expect(res.body.message).toMatch(/label, sampled_on, depth_top_cm, depth_bottom_cm, sand_pct, silt_pct, clay_pct, organic_matter_pct, ph, buffer_ph, depth_to_gray_cm, bulk_density, cec, esp/);
+    expect(res.body.message).toMatch(/label, sampled_on, depth_top_cm, depth_bottom_cm, sand_pct, silt_pct, clay_pct, organic_matter_pct, ph, buffer_ph, buffer_method, depth_to_gray_cm, bulk_density, cec, esp/);
   });
 
   it('refuses a CSV larger than 1 MB with 413', async () => {

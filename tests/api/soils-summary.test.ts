@@ -101,11 +101,29 @@ describe('field soil summary', () => {
     expect(s).toMatchObject({ textureClass: 'silty clay', drainageClass: 'well drained', notWorthAmending: false, problemClay: true, problemClayReasons: ['texture class silty clay'] });
   });
 
+  it('never averages buffer pH across buffer methods: the newest named method and its readings', async () => {
+    const { agent, fieldId } = await fieldWithAgent();
+    await agent.post(`/api/fields/${fieldId}/soil-samples`).send({ kind: 'lab', ph: 5.6, bufferPh: 6.4, bufferMethod: 'smp' }).expect(201);
+    await agent.post(`/api/fields/${fieldId}/soil-samples`).send({ kind: 'lab', ph: 5.4, bufferPh: 6.2, bufferMethod: 'mehlich' }).expect(201);
+    await agent.post(`/api/fields/${fieldId}/soil-samples`).send({ kind: 'lab', ph: 5.5, bufferPh: 6.0, bufferMethod: 'mehlich' }).expect(201);
+    const s = (await agent.get(`/api/fields/${fieldId}/soil-summary`)).body;
+    expect(s.bufferMethod).toBe('mehlich');
+    expect(s.bufferPh).toBeCloseTo(6.1, 9);
+  });
+
+  it('refuses a buffer method it does not know, naming it', async () => {
+    const { agent, fieldId } = await fieldWithAgent();
+    const res = await agent.post(`/api/fields/${fieldId}/soil-samples`).send({ kind: 'lab', ph: 5.6, bufferPh: 6.4, bufferMethod: 'woodruff' });
+    expect(res.status).toBe(400);
+    expect(res.body.message).toMatch(/bufferMethod must be 'smp' or 'mehlich'/);
+    expect((await agent.get(`/api/fields/${fieldId}/soil-samples`)).body).toHaveLength(0);
+  });
+
   it('gives an empty field nulls, no problem clay and the default T', async () => {
     const { agent, fieldId } = await fieldWithAgent();
     const s = (await agent.get(`/api/fields/${fieldId}/soil-summary`)).body;
     expect(s).toEqual({
-      sampleCount: 0, sandPct: null, siltPct: null, clayPct: null, organicMatterPct: null, textureClass: null, ph: null, bufferPh: null,
+      sampleCount: 0, sandPct: null, siltPct: null, clayPct: null, organicMatterPct: null, textureClass: null, ph: null, bufferPh: null, bufferMethod: null,
       depthToGrayCm: null, drainageClass: null, notWorthAmending: false, kUs: null, kSource: null, tTonPerAcYr: 5, tSource: { kind: 'default', source: { title: expect.stringMatching(/deep-soil T/) } },
       hsg: null, hsgShares: [], bulkDensity: null, cecCmolPerKg: null, espPct: null, problemClay: false, problemClayReasons: [],
     });

@@ -25,6 +25,7 @@ const KEY_OF: Record<Column, string> = {
   organic_matter_pct: 'organicMatterPct',
   ph: 'ph',
   buffer_ph: 'bufferPh',
+  buffer_method: 'bufferMethod',
   depth_to_gray_cm: 'depthToGrayCm',
   bulk_density: 'bulkDensity',
   cec: 'cecCmolPerKg',
@@ -32,7 +33,7 @@ const KEY_OF: Record<Column, string> = {
   described_to_cm: 'describedToCm',
 };
 const COLUMN_OF = Object.fromEntries(Object.entries(KEY_OF).map(([c, k]) => [k, c])) as Record<string, Column>;
-const TEXT_COLUMNS = new Set<Column>(['label', 'sampled_on']);
+const TEXT_COLUMNS = new Set<Column>(['label', 'sampled_on', 'buffer_method']);
 
 export type CsvRow = { row: number; input: SoilSampleCreate };
 export type CsvParse =
@@ -113,7 +114,7 @@ export function parseSoilCsv(bytes: Uint8Array): CsvParse {
       const key = String(issue.path[0] ?? '');
       const column = key === 'sandPct' && /add up to/.test(issue.message) ? 'sand_pct, silt_pct, clay_pct' : (COLUMN_OF[key] ?? key);
       // The schema's messages name the payload key; in a CSV the column name is what the person sees.
-      const message = issue.message.replace(/\b(sandPct|siltPct|clayPct|depthTopCm|depthBottomCm|organicMatterPct|bufferPh|ph|depthToGrayCm|describedToCm|bulkDensity|cecCmolPerKg|espPct|sampledOn|label)\b/g, (k) => COLUMN_OF[k] ?? k);
+      const message = issue.message.replace(/\b(sandPct|siltPct|clayPct|depthTopCm|depthBottomCm|organicMatterPct|bufferPh|bufferMethod|ph|depthToGrayCm|describedToCm|bulkDensity|cecCmolPerKg|espPct|sampledOn|label)\b/g, (k) => COLUMN_OF[k] ?? k);
       rejected.push({ row, reason: `row ${row}, column ${column}: ${message}` });
       continue;
     }

@@ -45,6 +45,7 @@ function valuesOf(input: SoilSampleCreate) {
     organicMatterPct: input.organicMatterPct ?? null,
     ph: input.ph ?? null,
     bufferPh: input.bufferPh ?? null,
+    bufferMethod: input.bufferMethod ?? null,
     depthToGrayCm: input.depthToGrayCm ?? null,
     describedToCm: input.describedToCm ?? null,
     bulkDensityMgM3: input.bulkDensity ?? null,

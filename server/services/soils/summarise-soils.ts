@@ -22,7 +22,7 @@ import type { MapAggregate } from './field-soil-map';
 /** What the summary reads of each sample. */
 export type SampleFigures = Pick<
   SoilSample,
-  'kind' | 'sandPct' | 'siltPct' | 'clayPct' | 'organicMatterPct' | 'ph' | 'bufferPh' | 'depthToGrayCm' | 'describedToCm' | 'textureClass' | 'bulkDensityMgM3' | 'cecCmolKg' | 'espPct'
+  'kind' | 'sandPct' | 'siltPct' | 'clayPct' | 'organicMatterPct' | 'ph' | 'bufferPh' | 'bufferMethod' | 'depthToGrayCm' | 'describedToCm' | 'textureClass' | 'bulkDensityMgM3' | 'cecCmolKg' | 'espPct'
 >;
 
 /** Organic matter taken when no sample gives it, for the K table only (common practice). */
@@ -50,6 +50,18 @@ function feelClass(samples: SampleFigures[]): TextureClass | null {
     if (best === null || n >= (counts.get(best) ?? 0)) best = s.textureClass;
   }
   return isTexture(best) ? best : null;
+}
+
+/**
+ * Buffer pH readings of different buffers cannot be averaged (each starts at its own pH): the
+ * mean of the samples read with the method of the newest reading that names one; without any
+ * method, the mean of all readings and no method (lime then asks for it).
+ */
+function bufferReading(samples: SampleFigures[]): { bufferPh: number | null; bufferMethod: 'smp' | 'mehlich' | null } {
+  const named = samples.filter((s) => s.bufferPh !== null && s.bufferMethod !== null);
+  const method = named.length ? named[named.length - 1].bufferMethod : null;
+  if (!method) return { bufferPh: mean(samples.map((s) => s.bufferPh)), bufferMethod: null };
+  return { bufferPh: mean(named.filter((s) => s.bufferMethod === method).map((s) => s.bufferPh)), bufferMethod: method };
 }
 
 export function summariseSoils(samples: SampleFigures[], map: MapAggregate): FieldSoilSummary {
@@ -143,7 +155,7 @@ export function summariseSoils(samples: SampleFigures[], map: MapAggregate): Fie
     organicMatterPct,
     textureClass,
     ph: mean(samples.map((s) => s.ph)),
-    bufferPh: mean(samples.map((s) => s.bufferPh)),
+    ...bufferReading(samples),
     depthToGrayCm,
     drainageClass,
     notWorthAmending,

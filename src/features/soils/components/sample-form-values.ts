@@ -17,6 +17,7 @@ export type SampleFormValues = {
   organicMatterPct?: number;
   ph?: number;
   bufferPh?: number;
+  bufferMethod?: 'smp' | 'mehlich';
   depthToGrayCm?: number;
   describedToCm?: number;
   bulkDensity?: number;
@@ -41,6 +42,7 @@ export const FIELD_LABELS: Record<SampleField, string> = {
   organicMatterPct: 'Organic matter',
   ph: 'pH',
   bufferPh: 'Buffer pH',
+  bufferMethod: 'Buffer method',
   depthToGrayCm: 'Depth to gray or mottled colours',
   describedToCm: 'Profile looked at down to',
   bulkDensity: 'Bulk density',
@@ -54,7 +56,7 @@ export const FIELD_LABELS: Record<SampleField, string> = {
 /** The schema's messages name the payload keys ("sandPct must be …"): say the label instead. */
 export function plainMessage(message: string | undefined): string | undefined {
   if (!message) return message;
-  return message.replace(/\b(sandPct|siltPct|clayPct|organicMatterPct|bufferPh|ph|depthTopCm|depthBottomCm|depthToGrayCm|describedToCm|bulkDensity|cecCmolPerKg|espPct|ribbonCm|sampledOn|label|feel|balls)\b/g, (k) =>
+  return message.replace(/\b(sandPct|siltPct|clayPct|organicMatterPct|bufferPh|bufferMethod|ph|depthTopCm|depthBottomCm|depthToGrayCm|describedToCm|bulkDensity|cecCmolPerKg|espPct|ribbonCm|sampledOn|label|feel|balls)\b/g, (k) =>
     FIELD_LABELS[k as SampleField],
   );
 }
@@ -94,6 +96,7 @@ export function valuesOfSample(s: SoilSample): SampleFormValues {
     organicMatterPct: orUndefined(s.organicMatterPct),
     ph: orUndefined(s.ph),
     bufferPh: orUndefined(s.bufferPh),
+    bufferMethod: orUndefined(s.bufferMethod),
     depthToGrayCm: orUndefined(s.depthToGrayCm),
     describedToCm: orUndefined(s.describedToCm),
     bulkDensity: orUndefined(s.bulkDensity),
@@ -113,6 +116,7 @@ const COMMON_KEYS = [
   'organicMatterPct',
   'ph',
   'bufferPh',
+  'bufferMethod',
   'depthToGrayCm',
   'describedToCm',
   'bulkDensity',

@@ -2,7 +2,9 @@
 // (empty = not given) with its unit in the label and the schema's error beside it, and the
 // groups the lab form and the feel test share (where and when; colours and drainage; chemistry).
 import { useFormContext } from 'react-hook-form';
+import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
+import { BUFFER_METHOD_NAMES } from '../../../../shared/schemas/soils';
 import { FIELD_LABELS, toNumber, toText, type SampleField, type SampleFormValues } from './sample-form-values';
 
 type NumProps = { name: SampleField; unit?: string; hint?: string; optional?: boolean; className?: string };
@@ -66,6 +68,7 @@ export function ChemistryInputs({ full = true }: { full?: boolean }) {
       <NumInput name="organicMatterPct" unit="%" />
       <NumInput name="ph" unit="no unit" />
       <NumInput name="bufferPh" unit="no unit" />
+      <BufferMethodInput />
       {full ? (
         <>
           <NumInput name="bulkDensity" unit="Mg/m³" />
@@ -74,5 +77,26 @@ export function ChemistryInputs({ full = true }: { full?: boolean }) {
         </>
       ) : null}
     </div>
+  );
+}
+
+/** The lab's buffer: lime is worked out differently for each, so a buffer pH needs its method. */
+function BufferMethodInput() {
+  const { register, formState } = useFormContext<SampleFormValues>();
+  return (
+    <SelectField
+      label={FIELD_LABELS.bufferMethod}
+      data-testid="sample-bufferMethod"
+      hint="as printed on the lab report"
+      error={formState.errors.bufferMethod?.message}
+      {...register('bufferMethod', { setValueAs: (v: unknown) => (v === '' || v == null ? undefined : v) })}
+    >
+      <option value="">not given</option>
+      {Object.entries(BUFFER_METHOD_NAMES).map(([value, name]) => (
+        <option key={value} value={value}>
+          {name}
+        </option>
+      ))}
+    </SelectField>
   );
 }

@@ -4,7 +4,7 @@
 import { Fragment, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
-import type { SoilSample } from '../../../../shared/schemas/soils';
+import { BUFFER_METHOD_NAMES, type SoilSample } from '../../../../shared/schemas/soils';
 import { useDeleteSoilSample } from '../api/delete-soil-sample';
 import { depthRange, fmt, fmtCm, fmtPct, fmtPh, formatDay } from './format-soil';
 import { SampleForm } from './sample-form';
@@ -98,7 +98,7 @@ export function SoilSampleTable({ fieldId, samples, canEdit }: Props) {
                 <td className="num px-2 py-1.5">{s.organicMatterPct !== null ? fmtPct(s.organicMatterPct, 1) : dash}</td>
                 <td className="num px-2 py-1.5">
                   {s.ph !== null ? fmtPh(s.ph) : dash}
-                  {s.bufferPh !== null ? <span className="block text-xs text-ink-soft">buffer {fmtPh(s.bufferPh)}</span> : null}
+                  {s.bufferPh !== null ? <span className="block text-xs text-ink-soft">{s.bufferMethod ? BUFFER_METHOD_NAMES[s.bufferMethod] : 'buffer'} {fmtPh(s.bufferPh)}</span> : null}
                 </td>
                 <td className="px-2 py-1.5">
                   {s.drainageClass ?? dash}

@@ -3,7 +3,7 @@
 // counts as problem clay. Ground that amendments will not fix gets a calm notice.
 import { Notice } from '../../../components/ui/notice';
 import type { Units } from '../../../../shared/schemas/auth';
-import type { FieldSoilSummary } from '../../../../shared/schemas/soils';
+import { BUFFER_METHOD_NAMES, type FieldSoilSummary } from '../../../../shared/schemas/soils';
 import { originWords, type Origin } from '../../../../shared/schemas/provenance';
 import { useSoilSummary } from '../api/get-soil-summary';
 import { fmt, fmtCm, fmtPct, fmtPh, fmtShare, formatK, formatT } from './format-soil';
@@ -89,7 +89,7 @@ function Figures({ s, units }: { s: FieldSoilSummary; units: Units }) {
       </Row>
       <Row term="pH">
         {s.ph !== null ? <span className="num">{fmtPh(s.ph)}</span> : unknown}
-        {s.bufferPh !== null ? <span className="num text-ink-soft"> · buffer pH {fmtPh(s.bufferPh)}</span> : null}
+        {s.bufferPh !== null ? <span className="num text-ink-soft"> · {s.bufferMethod ? `${BUFFER_METHOD_NAMES[s.bufferMethod]} pH` : 'buffer pH'} {fmtPh(s.bufferPh)}</span> : null}
       </Row>
       {s.cecCmolPerKg !== null || s.espPct !== null || s.bulkDensity !== null ? (
         <Row term="Also measured">
