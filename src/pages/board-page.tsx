@@ -93,6 +93,7 @@ export function BoardPage() {
             season={season}
             tileUrl={config.data?.tileUrl ?? null}
             tileAttribution={config.data?.tileAttribution ?? null}
+            treatmentsFarmId={role === 'landowner' ? undefined : farmId}
           />
         )}
       </main>
