@@ -1,7 +1,7 @@
 // Risk: the field's assessment for the season. A in t/ha/yr and US t/ac/yr against T, A/T
 // with its risk class, tonnes a year, the design storm's runoff; how A builds up, every factor
-// with its source, what went in and what is missing, problem clay and what to do about it,
-// and the cautions.
+// with its source, what went in and what is missing, problem clay, what to do about it (the
+// treatments and the what-if, for farmers and advisors), and the cautions.
 import { Link } from 'react-router-dom';
 import { Notice } from '../../../components/ui/notice';
 import { paths } from '../../../lib/paths';
@@ -17,6 +17,7 @@ import { TERRACE_CAUTION } from '../../seasons/components/cropping-form';
 import { AssessmentInputs } from './assessment-inputs';
 import { FactorBuildUpChart } from './factor-build-up-chart';
 import type { FieldTab } from './field-tabs';
+import { WhatToDo } from './what-to-do';
 
 function Big({ label, figure, testId }: { label: string; figure: Figure | null; testId?: string }) {
   return (
@@ -103,9 +104,17 @@ function ProblemClay({ a }: { a: FieldAssessment }) {
   );
 }
 
-type Props = { farmId: number; fieldId: number; season: string; units: Units; onOpenTab?: (tab: FieldTab) => void };
+type Props = {
+  farmId: number;
+  fieldId: number;
+  season: string;
+  units: Units;
+  /** Farmers and advisors see the treatments and the what-if; a landowner does not. */
+  canPlan: boolean;
+  onOpenTab?: (tab: FieldTab) => void;
+};
 
-export function RiskTab({ farmId, fieldId, season, units, onOpenTab }: Props) {
+export function RiskTab({ farmId, fieldId, season, units, canPlan, onOpenTab }: Props) {
   const q = useAssessment(fieldId, season);
   if (q.isPending) return <p className="text-sm text-ink-soft">Working out the risk…</p>;
   if (q.isError) return <Notice tone="error" title="The risk could not be worked out">{q.error.message}</Notice>;
@@ -166,6 +175,7 @@ export function RiskTab({ farmId, fieldId, season, units, onOpenTab }: Props) {
 
       <Gaps gaps={a.gaps} farmId={farmId} onOpenTab={onOpenTab} />
       <ProblemClay a={a} />
+      {canPlan && e ? <WhatToDo farmId={farmId} fieldId={fieldId} season={season} units={units} onOpenTab={onOpenTab} /> : null}
       {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
       {e ? <FactorTable factors={e.factors} units={units === 'ac' ? 'us' : 'si'} extra={ro ? [{ name: 'CN, curve number', p: ro.cn }] : undefined} /> : null}
       <AssessmentInputs inputs={a.inputs} />
