@@ -35,7 +35,7 @@ describe('treatments and budget in Chromium', () => {
   });
 
   it('plans a typed budget and changes a price', async () => {
-    const { farm, users, season } = await makeDemoLikeFarm(app.sequelize);
+    const { farm, users } = await makeDemoLikeFarm(app.sequelize);
     const { page, errors } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
     await page.goto(`${app.baseUrl}/farms/${farm.id}`);
     await page.getByTestId('nav-budget').click();
