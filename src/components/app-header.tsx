@@ -38,7 +38,7 @@ export function AppHeader({ farmName, screen, role, menu }: Props) {
           </>
         ) : null}
       </nav>
-      <div className="ml-auto flex flex-wrap items-center gap-x-4 gap-y-2">
+      <div className="ml-auto flex flex-wrap items-center gap-x-2 gap-y-2">
         {farmId && /^\d+$/.test(farmId) ? (
           <>
             <NavLink to={paths.farmMap.getHref(farmId)} end data-testid="nav-farm-map" className={navClass}>

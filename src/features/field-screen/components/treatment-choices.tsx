@@ -1,6 +1,6 @@
 // The what-if's switches: one choice per family that excludes itself (tillage, support practice,
 // wet ground), a tick for each treatment that adds on. A treatment the field cannot take yet is
-// greyed out, with what it needs beside it.
+// greyed out; the list under the options says why and what it needs.
 import { useId } from 'react';
 import type { TreatmentKey, TreatmentSite, Unavailable } from '../../../../shared/erosion/treatments/types';
 
@@ -52,7 +52,11 @@ function Choice({ group, k, props, name }: { group: Group; k: TreatmentKey; prop
       />
       <span className="flex flex-col">
         <span className="font-medium">{props.titles[k]}</span>
-        {why ? <span className="text-xs text-ink-soft">{why.reason}</span> : null}
+        {why ? (
+          <span className="text-xs text-ink-soft" title={why.reason}>
+            not offered here: why is under “Not offered on this field”
+          </span>
+        ) : null}
       </span>
     </label>
   );
@@ -61,7 +65,7 @@ function Choice({ group, k, props, name }: { group: Group; k: TreatmentKey; prop
 export function TreatmentChoices(props: Props) {
   const base = useId();
   return (
-    <div className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3" data-testid="whatif-choices">
+    <div className="grid items-start gap-3 sm:grid-cols-2 xl:grid-cols-3" data-testid="whatif-choices">
       {GROUPS.map((g, i) => {
         const name = `${base}-${i}`;
         const noneOn = !g.keys.some((k) => props.chosen.includes(k));
