@@ -17,7 +17,7 @@ import { paths } from '../lib/paths';
 
 const SCREEN = 'Treatments and budget';
 const INTRO =
-  'Type what there is to spend this season and choose what matters most: one treatment is picked for each field the money reaches. Costs come from the prices below; the treatments and their figures are on each field’s Risk tab.';
+  'Type what there is to spend this season and choose what matters most: one treatment is picked for each field the money reaches. Costs come from the farm’s price list on this screen; every field’s options and their figures are on its Risk tab.';
 
 export function BudgetPage() {
   const farmId = Number(useParams().farmId);

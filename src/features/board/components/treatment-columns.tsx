@@ -1,6 +1,6 @@
 // The board's treatments view: for each field its best option (the cheapest that brings A under
-// T, else the one saving the most soil for the money), the A it would give, the soil it saves
-// and what it costs at the farm's prices.
+// T, else the one saving the most soil for the money), what it costs at the farm's prices, the A
+// it would give and the soil it saves.
 import { createColumnHelper } from '@tanstack/react-table';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FarmTreatmentsAnswer } from '../../../../shared/schemas/treatments';
@@ -42,6 +42,21 @@ export function treatmentColumns(treatments: BoardTreatments, lossUnits: Units) 
       sortUndefined: 'last',
       cell: (c) => <BestCell row={treatments.byField.get(c.row.original.fieldId)} />,
     }),
+    col.accessor((r) => best(r)?.cost.total ?? undefined, {
+      id: 'cost',
+      header: `Cost (${treatments.currency})`,
+      sortUndefined: 'last',
+      cell: (c) => {
+        const b = best(c.row.original);
+        return b ? (
+          <span className="num block whitespace-nowrap text-right font-semibold" data-testid="board-best-cost">
+            {formatMoney(b.cost.total, b.cost.currency)}
+          </span>
+        ) : (
+          dash
+        );
+      },
+    }),
     col.accessor((r) => best(r)?.soilLossTPerHaYr ?? undefined, {
       id: 'aAfter',
       header: lossUnits === 'ac' ? 'A after (US t/ac/yr)' : 'A after (t/ha/yr)',
@@ -70,21 +85,6 @@ export function treatmentColumns(treatments: BoardTreatments, lossUnits: Units) 
           <span className="num block whitespace-nowrap text-right" title={f.alt}>
             {f.main}
           </span>
-        );
-      },
-    }),
-    col.accessor((r) => best(r)?.cost.total ?? undefined, {
-      id: 'cost',
-      header: `Cost (${treatments.currency})`,
-      sortUndefined: 'last',
-      cell: (c) => {
-        const b = best(c.row.original);
-        return b ? (
-          <span className="num block whitespace-nowrap text-right font-semibold" data-testid="board-best-cost">
-            {formatMoney(b.cost.total, b.cost.currency)}
-          </span>
-        ) : (
-          dash
         );
       },
     }),

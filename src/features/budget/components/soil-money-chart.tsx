@@ -1,6 +1,6 @@
-// Soil saved against money spent (Recharts): for every budget from nothing to a little past what
-// every field's best option costs, the tonnes a year the best plan saves, as steps (money buys
-// whole treatments). The plan in view is marked, and the budget typed is a dashed line.
+// Soil saved against money spent (Recharts): the tonnes a year the best plan saves at budgets
+// from nothing to a little past what every field's best option costs, as the server worked them
+// out, with the plan in view among them (the marked point) and the budget typed as a dashed line.
 import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { tToShortTon } from '../../../../shared/erosion/units';
 import type { Units } from '../../../../shared/schemas/auth';
@@ -16,8 +16,10 @@ const CLAY = '#8e4f24';
 export function SoilMoneyChart({ plan, units }: { plan: BudgetPlan; units: Units }) {
   const conv = (t: number) => (units === 'ac' ? tToShortTon(t) : t);
   const unit = units === 'ac' ? 'US tons/yr' : 't/yr';
-  const data = plan.curve.map((p) => ({ budget: p.budget, saved: conv(p.tonnesSavedPerYr) }));
-  if (data.length < 2) return null;
+  const data = [...plan.curve, { budget: plan.spent, tonnesSavedPerYr: plan.tonnesSavedPerYr }]
+    .sort((a, b) => a.budget - b.budget)
+    .map((p) => ({ budget: p.budget, saved: conv(p.tonnesSavedPerYr) }));
+  if (plan.curve.length < 2) return null;
   const money = (v: number) => formatMoney(v, plan.currency);
   const maxBudget = data[data.length - 1].budget;
 
@@ -25,7 +27,8 @@ export function SoilMoneyChart({ plan, units }: { plan: BudgetPlan; units: Units
     <figure className="flex flex-col gap-1" data-testid="budget-chart">
       <figcaption className="font-serif text-lg font-semibold">Soil saved for the money</figcaption>
       <p className="text-sm text-ink-soft">
-        The most soil a plan saves, in {unit}, for each budget up to {money(maxBudget)}. Where the line flattens, more money buys little more.
+        The most soil a plan saves, in {unit}, worked out for {plan.curve.length} budgets up to {money(maxBudget)}; the marked point is
+        this plan. Where the line flattens, more money buys little more.
       </p>
       <div className="num h-64 w-full sm:h-72">
         <ResponsiveContainer width="100%" height="100%">
@@ -56,7 +59,7 @@ export function SoilMoneyChart({ plan, units }: { plan: BudgetPlan; units: Units
               contentStyle={{ background: '#f7f3ea', border: '1px solid #857a6c', borderRadius: 6, color: INK }}
             />
             <ReferenceLine x={Math.min(plan.budget, maxBudget)} stroke={INK_SOFT} strokeDasharray="4 3" label={{ value: 'your budget', position: 'insideTopLeft', fill: INK_SOFT, fontSize: 12 }} />
-            <Line type="stepAfter" dataKey="saved" stroke={CLAY} strokeWidth={2} dot={false} isAnimationActive={false} />
+            <Line type="linear" dataKey="saved" stroke={CLAY} strokeWidth={2} dot={{ r: 2.5, fill: CLAY }} isAnimationActive={false} />
             <ReferenceDot x={plan.spent} y={conv(plan.tonnesSavedPerYr)} r={5} fill={CLAY} stroke={INK} />
           </LineChart>
         </ResponsiveContainer>

@@ -90,7 +90,7 @@ export function WhatIfPanel({ site, current, titles, unavailable, chosen, onChan
         <h4 id="whatif-heading" className="font-serif text-lg font-semibold">
           Try treatments on this field
         </h4>
-        <p className="text-sm text-ink-soft">Switch treatments on and off; the figures on the right follow at once. Nothing is saved.</p>
+        <p className="text-sm text-ink-soft">Switch treatments on and off; the figures under “With the treatments ticked” follow at once. Nothing is saved.</p>
       </div>
       <TreatmentChoices site={site} titles={titles} unavailable={unavailable} chosen={chosen} onChange={onChange} />
       <div className="grid gap-4 border-t border-paper-edge pt-3 sm:grid-cols-2" aria-live="polite">
