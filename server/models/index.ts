@@ -22,16 +22,17 @@ import { FarmClimate } from './farm-climate.model';
 import { FieldGround } from './field-ground.model';
 import { Assessment } from './assessment.model';
 import { FarmPrices } from './farm-prices.model';
+import { FieldFactorOverride } from './field-factor-override.model';
 
 export {
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride,
 };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
 const MODELS = [
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride,
 ];
 
 let initialised: Sequelize | null = null;

@@ -9,6 +9,7 @@ import {
   ftToM,
   kFactorWilliams,
   organicCarbonFromOm,
+  rusleLS,
   terraceIntervalM,
   type TreatmentSite,
 } from '../../../shared/erosion';
@@ -136,7 +137,9 @@ describe('each treatment changes what it changes, and no more', () => {
     const site = demoLikeSite();
     site.input = { ...site.input, lsFromGrid: { value: 2.1, source: 'test grid', method: 'test' } };
     const a = applyTreatments(site, ['terraces']);
-    expect(a.ok && a.value.input.lsFromGrid).toBeUndefined();
+    if (!a.ok) throw new Error(a.reason);
+    // AH-703 LS (moderate ratio) on the terrace interval at the mean slope, not the grid's 2.1
+    expect(a.value.estimate.factors.ls.value).toBeCloseTo(rusleLS({ slopePct: 12, lengthM: terraceIntervalM(12) }).ls, 9);
     expect(a.ok && a.value.changes.find((x) => x.factor === 'slope length')!.why).toMatch(/replaces the elevation model's LS/);
   });
   it('grassed waterway: gully control, A unchanged, length from the flow path', () => {
@@ -233,5 +236,22 @@ describe('example prices', () => {
     expect(EXAMPLE_PRICES.currency).toBe('USD');
     expect(Object.keys(EXAMPLE_PRICES.prices).sort()).toEqual([...PRICE_KEYS].sort());
     expect(EXAMPLE_PRICES.source).toMatch(/example values — replace with your local figures/);
+  });
+});
+
+describe('strips and contouring as treatments', () => {
+  it('offers strips in the rotation of row crop and winter grain: AH-537 table 14, rotation C (recalled values)', () => {
+    // 7 % slope, 60 m (within the 400 ft strip limit): table 14 rotation C at 6–8 % gives P 0.50.
+    const ft = options(demoLikeSite({ input: { ...demoLikeSite().input, slopePct: 7, slopeLengthM: 60 } }));
+    const strips = ft.options.find((o) => o.id === 'strip-cropping')!;
+    expect(strips.changes).toContainEqual(expect.objectContaining({ factor: 'P', from: 1, to: 0.5 }));
+    expect(strips.effects.join(' ')).toMatch(/rotation C/);
+  });
+
+  it('offers no contouring or strips on pasture or hay, which are not tilled', () => {
+    const base = demoLikeSite().input;
+    const ft = options(demoLikeSite({ input: { ...base, slopePct: 7, slopeLengthM: 60, c: { from: 'table', crop: 'pasture', groundCoverPct: 60 } } }));
+    expect(ft.options.some((o) => o.treatments.includes('contour-farming') || o.treatments.includes('strip-cropping'))).toBe(false);
+    expect(ft.unavailable.find((u) => u.key === 'strip-cropping')!.reason).toMatch(/pasture already covers the ground/);
   });
 });
