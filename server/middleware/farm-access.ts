@@ -1,4 +1,4 @@
-// Every farm route checks the caller's role on that farm (DESIGN.md "Users and roles").
+// Every farm route checks the caller's role on that farm: rights are per farm, by membership.
 import type { Request, RequestHandler } from 'express';
 import { Membership } from '../models';
 import type { Role } from '../../shared/schemas/auth';

@@ -5,7 +5,7 @@ import type { Role } from '../../shared/schemas/auth';
 
 export type MembershipJson = { id: number; userId: number; farmId: number; role: Role; createdAt: string; updatedAt: string };
 
-/** A person's role on one farm: rights are per farm (DESIGN.md "Users and roles"). */
+/** A person's role on one farm: rights are per farm. */
 export class Membership extends Model<InferAttributes<Membership>, InferCreationAttributes<Membership>> {
   declare id: CreationOptional<number>;
   declare userId: number;

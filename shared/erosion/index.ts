@@ -1,5 +1,5 @@
 // The Fieldshed erosion and runoff engine: pure functions, SI units unless named otherwise.
-// Entry points (DESIGN.md): classifyTexture, kFactorNomograph, rusleLS, rFromAnnualPrecipitation,
+// Entry points: classifyTexture, kFactorNomograph, rusleLS, rFromAnnualPrecipitation,
 // soilLoss, curveNumberRunoff; estimate() runs a whole estimate.
 export * from './assert';
 export * from './units';

@@ -1,5 +1,5 @@
 // Every SI <-> US customary conversion of the engine, in one place.
-// Factors as given in REFERENCES.md ("Units"); AH-703 app. A for R and K.
+// Conversion factors: AH-703 app. A for R and K; the others by the definitions of the units.
 
 /** 1 short ton/acre = 2.2417 t/ha (907.18474 kg / 0.40468564 ha). */
 export const T_PER_HA_PER_TON_PER_AC = 2.2417;
@@ -11,7 +11,7 @@ export const K_SI_PER_US = 0.1317;
 export const M_PER_FT = 0.3048;
 /** Inch. */
 export const MM_PER_IN = 25.4;
-/** 1 in/h = 25400 µm / 3600 s = 7.0556 µm/s (REFERENCES.md rounds it to 7.056). */
+/** 1 in/h = 25400 µm / 3600 s = 7.0556 µm/s (often rounded to 7.056). */
 export const UM_PER_S_PER_IN_PER_H = 25400 / 3600;
 /** International acre = 0.40468564224 ha. */
 export const HA_PER_AC = 0.40468564224;

