@@ -17,6 +17,7 @@ import { terrainRoutes } from './routes/terrain.routes';
 import { estimateRoutes } from './routes/estimate.routes';
 import { soilsRoutes } from './routes/soils.routes';
 import { seasonsRoutes } from './routes/seasons.routes';
+import { plansRoutes } from './routes/plans.routes';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
 import { JSON_BODY_MAX_BYTES } from '../shared/limits';
@@ -74,6 +75,10 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/farms', seasons.farms);
   api.use('/fields', seasons.fields);
   api.use('/board', seasons.board);
+  const plans = plansRoutes(sequelize);
+  api.use('/farms', plans.farms);
+  api.use('/plans', plans.plans);
+  api.use('/plan-actions', plans.actions);
   api.use(notFoundApi);
   app.use('/api', api);
 
