@@ -23,11 +23,10 @@ async function peopleOf(ids: (number | null)[], transaction?: Transaction): Prom
 export async function livePlan(planId: number, transaction?: Transaction): Promise<PlanShape> {
   const plan = await Plan.findByPk(planId, { include: [{ model: Season, as: 'season', attributes: ['label'] }], transaction });
   if (!plan) throw notFound('That plan');
-  const [actions, comments, newest] = await Promise.all([
-    PlanAction.scope('inOrder').findAll({ where: { planId }, include: [{ model: Field, as: 'field', attributes: ['name'] }], transaction }),
-    PlanComment.scope('oldestFirst').findAll({ where: { planId }, transaction }),
-    PlanVersion.max<number, PlanVersion>('revision', { where: { planId }, transaction }),
-  ]);
+  // One after another: inside a transaction they share one connection.
+  const actions = await PlanAction.scope('inOrder').findAll({ where: { planId }, include: [{ model: Field, as: 'field', attributes: ['name'] }], transaction });
+  const comments = await PlanComment.scope('oldestFirst').findAll({ where: { planId }, transaction });
+  const newest = await PlanVersion.max<number, PlanVersion>('revision', { where: { planId }, transaction });
   const people = await peopleOf(
     [plan.createdBy, plan.submittedBy, plan.returnedBy, plan.approvedBy, ...actions.flatMap((a) => [a.createdBy, a.updatedBy]), ...comments.map((c) => c.authorId)],
     transaction,
