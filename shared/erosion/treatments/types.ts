@@ -3,6 +3,7 @@
 import type { EstimateInput } from '../../schemas/estimate';
 import type { Origin } from '../../schemas/provenance';
 import type { PriceKey, Prices } from '../../schemas/treatments';
+import type { BufferMethod, LimeProduct } from '../lime';
 
 /** Every treatment the engine knows. NRCS practice standard codes in comments where they apply. */
 export const TREATMENT_KEYS = [
@@ -23,8 +24,6 @@ export const TREATMENT_KEYS = [
 ] as const;
 export type TreatmentKey = (typeof TREATMENT_KEYS)[number];
 
-/** Buffer-pH methods the lime calculation knows. */
-export type BufferMethod = 'smp' | 'mehlich';
 
 /** One field as the treatment engine sees it. Numbers in SI unless named otherwise. */
 export type TreatmentSite = {
@@ -54,6 +53,17 @@ export type TreatmentSite = {
   };
   prices: Prices;
   currency: string;
+  /** The farm's own choices for amendments; the engine's stated example values when left out. */
+  amendments?: {
+    /** Target soil pH for lime, within the buffer method's calibration. */
+    limeTargetPh?: number;
+    /** The lime product's label: CCE and sieve analysis. */
+    limeProduct?: LimeProduct;
+    /** Gypsum (CaSO4·2H2O) in the product, %. */
+    gypsumPurityPct?: number;
+    /** Extra gypsum for incomplete exchange on sodic soils, 1.1–1.3 in practice. */
+    gypsumExchangeEfficiency?: number;
+  };
 };
 
 /** A factor a treatment can change. */

@@ -2,29 +2,10 @@ import { describe, expect, it } from 'vitest';
 import {
   compostQuantity,
   gypsumQuantity,
-  limeRequirement,
   lossToToleranceRatio,
   sodicGypsumRequirement,
   soilLossTolerance,
 } from '../../../shared/erosion';
-
-describe('lime from buffer pH (NCDA&CS method)', () => {
-  it('gives 0.75 t/ac to take pH 5.0 to 6.0 at buffer pH 6.3', () => {
-    const r = limeRequirement({ soilPh: 5.0, bufferPh: 6.3, targetPh: 6.0 });
-    expect(r.ok && r.value.tonPerAc).toBeCloseTo(0.75, 10);
-    expect(r.ok && r.value.tPerHa).toBeCloseTo(0.75 * 2.2417, 10);
-  });
-  it('divides by the product’s CCE/100', () => {
-    const r = limeRequirement({ soilPh: 5.0, bufferPh: 6.3, targetPh: 6.0, ccePct: 75 });
-    expect(r.ok && r.value.tonPerAc).toBeCloseTo(1, 10);
-  });
-  it('needs no lime when the soil is already at the target', () => {
-    expect(limeRequirement({ soilPh: 6.2, bufferPh: 6.5, targetPh: 6.0 })).toMatchObject({ ok: true, value: { tonPerAc: 0 } });
-  });
-  it('returns a reason for an impossible pH', () => {
-    expect(limeRequirement({ soilPh: 14, bufferPh: 6.3, targetPh: 6 })).toMatchObject({ ok: false });
-  });
-});
 
 describe('gypsum (NRCS practice standard 333)', () => {
   it('is rate × area, in tonnes and t/ha, with truckloads', () => {
@@ -33,10 +14,10 @@ describe('gypsum (NRCS practice standard 333)', () => {
     expect(q.tPerHa).toBe(4);
     expect(q.truckloads).toBe(2);
   });
-  it('defaults to 1 t/ac (NRCS 333 typical 1–2 t/ac)', () => {
+  it('defaults to 1 t/ac (the 1–2 t/ac rule of thumb met with NRCS 333)', () => {
     expect(gypsumQuantity({ areaHa: 1 }).tonPerAc).toBeCloseTo(1, 10);
   });
-  it('gives the sodic-soil requirement 0.0861·ΔNa·depth·BD [memory]', () => {
+  it('gives the sodic-soil requirement 0.0861·ΔNa·depth·BD (gypsum stoichiometry)', () => {
     // CEC 20, ESP 20 → 5: ΔNa 3 cmolc/kg; 15 cm; 1.3 Mg/m³
     expect(sodicGypsumRequirement({ cecCmolPerKg: 20, espInitialPct: 20, espTargetPct: 5, depthCm: 15, bulkDensityMgPerM3: 1.3 })).toBeCloseTo(0.0861 * 3 * 15 * 1.3, 10);
   });

@@ -19,9 +19,9 @@ function rowsOf(node: unknown, out: Record<string, unknown>[] = []): Record<stri
 
 describe('reference tables in data/reference', () => {
   const files = readdirSync(dir).filter((f) => f.endsWith('.json'));
-  it('has the eight tables the engine reads', () => {
+  it('has the ten tables the engine reads', () => {
     expect(files.sort()).toEqual(
-      ['contour-p.json', 'cover-c.json', 'curve-numbers.json', 'drainage-key.json', 'ei-distribution.json', 'feel-key.json', 'k-by-texture.json', 'slope-classes.json'].sort(),
+      ['contour-p.json', 'cover-c.json', 'curve-numbers.json', 'drainage-key.json', 'ei-distribution.json', 'example-prices.json', 'feel-key.json', 'k-by-texture.json', 'lime-smp.json', 'slope-classes.json'].sort(),
     );
   });
   it.each(files)('%s: every row carries a source and a pub/memory/practice flag', (file) => {
