@@ -14,24 +14,6 @@ export type ActionStatus = (typeof ACTION_STATUSES)[number];
 export const ACTION_TREATMENTS = [...TREATMENT_KEYS, 'other'] as const;
 export type ActionTreatment = TreatmentKey | 'other';
 
-/** The title an action gets when it is added from a treatment without one of its own. */
-export const TREATMENT_TITLES: Record<TreatmentKey, string> = {
-  'cover-crop': 'Cover crop',
-  'no-till': 'No-till',
-  'reduced-till': 'Reduced tillage',
-  'contour-farming': 'Contour farming',
-  'strip-cropping': 'Strip cropping',
-  terraces: 'Terraces',
-  'grassed-waterway': 'Grassed waterway',
-  'filter-strip': 'Filter strip',
-  gypsum: 'Gypsum',
-  lime: 'Lime',
-  'organic-matter': 'Organic matter worked in',
-  'raised-beds': 'Raised or no-dig beds',
-  drainage: 'Drainage',
-  'permanent-cover': 'Permanent cover',
-};
-
 const date = (f: string) => z.iso.date({ error: `${f} must be a date written YYYY-MM-DD` });
 const amount = (f: string, max: number) =>
   z

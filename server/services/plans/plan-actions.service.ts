@@ -2,7 +2,8 @@
 // the action's version checked on change and removal (409 when stale), an audit event, and the
 // whole plan in the answer (its version, state and revision move with every action change).
 import type { Sequelize, Transaction } from 'sequelize';
-import { PlanActionCreate, TREATMENT_TITLES, type PlanAction as PlanActionShape, type Plan as PlanShape, type PlanActionUpdate } from '../../../shared/schemas/plans';
+import { TREATMENT_TITLES } from '../../../shared/erosion/treatments/field-treatments';
+import { PlanActionCreate, type PlanAction as PlanActionShape, type Plan as PlanShape, type PlanActionUpdate } from '../../../shared/schemas/plans';
 import { badRequest, conflict, notFound } from '../../lib/http-error';
 import { describeIssues } from '../../middleware/validate';
 import { Field, PlanAction, type Plan } from '../../models';

@@ -4,6 +4,7 @@
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type { Plan as PlanShape } from '../../../shared/schemas/plans';
 import { conflict, invalid, notFound } from '../../lib/http-error';
+import { EXAMPLE_PRICES } from '../../../shared/erosion/treatments/example-prices';
 import { FarmPrices, Plan } from '../../models';
 import { recordEvent } from '../audit';
 import { createSeason } from '../seasons.service';
@@ -11,10 +12,11 @@ import { livePlan } from './plan-read.service';
 
 export type Actor = { userId: number };
 
-/** A plan's money is in the farm's price-list currency; without a price list, US dollars. */
-const DEFAULT_CURRENCY = 'USD';
 
-/** POST /api/farms/:farmId/plans: the season's plan, made (with the season) when missing. */
+/**
+ * POST /api/farms/:farmId/plans: the season's plan, made (with the season) when missing. Its money
+ * is in the farm's price-list currency (the example list's while the farm has none).
+ */
 export async function createPlan(sequelize: Sequelize, actor: Actor, farmId: number, seasonLabel: string): Promise<{ plan: PlanShape; created: boolean }> {
   const { season } = await createSeason(sequelize, actor, farmId, seasonLabel);
   const existing = await Plan.findOne({ where: { seasonId: season.id }, attributes: ['id'] });
@@ -22,7 +24,7 @@ export async function createPlan(sequelize: Sequelize, actor: Actor, farmId: num
   try {
     const id = await sequelize.transaction(async (t) => {
       const prices = await FarmPrices.findByPk(farmId, { attributes: ['currency'], transaction: t });
-      const plan = await Plan.create({ farmId, seasonId: season.id, currency: prices?.currency ?? DEFAULT_CURRENCY, createdBy: actor.userId }, { transaction: t });
+      const plan = await Plan.create({ farmId, seasonId: season.id, currency: prices?.currency ?? EXAMPLE_PRICES.currency, createdBy: actor.userId }, { transaction: t });
       await recordEvent({ userId: actor.userId, farmId, entity: 'plan', entityId: plan.id, action: 'created', detail: { season: season.label } }, t);
       return plan.id;
     });
