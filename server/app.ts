@@ -17,6 +17,7 @@ import { terrainRoutes } from './routes/terrain.routes';
 import { estimateRoutes } from './routes/estimate.routes';
 import { soilsRoutes } from './routes/soils.routes';
 import { seasonsRoutes } from './routes/seasons.routes';
+import { treatmentsRoutes } from './routes/treatments.routes';
 import { plansRoutes } from './routes/plans.routes';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
@@ -75,6 +76,9 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/farms', seasons.farms);
   api.use('/fields', seasons.fields);
   api.use('/board', seasons.board);
+  const treatments = treatmentsRoutes(sequelize);
+  api.use('/farms', treatments.farms);
+  api.use('/fields', treatments.fields);
   const plans = plansRoutes(sequelize);
   api.use('/farms', plans.farms);
   api.use('/plans', plans.plans);

@@ -93,6 +93,23 @@ describe('the demo farm', () => {
     expect(t.concentratedFlow.cellCount).toBeGreaterThan(50);
   });
 
+  it('offers the worst field options that bring its loss under T, with quantities and costs', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const board = (await farmer.get(`/api/farms/${farm.id}/board?season=2027`)).body;
+    const worst = board.rows[0];
+    const t = (await farmer.get(`/api/fields/${worst.fieldId}/treatments?season=2027`)).body;
+    expect(t.ok).toBe(true);
+    expect(t.current.aOverT).toBeGreaterThan(1);
+    type Option = { reachesT: boolean; cheapestUnderT: boolean; soilLossTPerHaYr: number; quantities: unknown[]; cost: { total: number } };
+    const under = (t.options as Option[]).filter((o) => o.reachesT);
+    expect(under.length).toBeGreaterThan(0);
+    const cheapest = under.find((o) => o.cheapestUnderT)!;
+    expect(cheapest.soilLossTPerHaYr).toBeLessThan(t.current.soilLossTPerHaYr / t.current.aOverT + 1e-9);
+    expect(cheapest.quantities.length).toBeGreaterThan(0);
+    expect(cheapest.cost.total).toBeGreaterThan(0);
+  });
+
   it('gives the advisor one board across both client farms', async () => {
     const advisor = await signedIn(app, (await User.findOne({ where: { email: DEMO_ACCOUNTS[1].email } }))!, DEMO_PASSWORD);
     const farms = (await advisor.get('/api/farms')).body;

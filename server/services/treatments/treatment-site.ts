@@ -1,0 +1,52 @@
+// One field as the treatment engine sees it, from what the server stores: the assessment's
+// engine input, the soil summary, the terrain figures and the farm's prices. Pure.
+import type { TreatmentSite } from '../../../shared/erosion/treatments/types';
+import type { EstimateInput } from '../../../shared/schemas/estimate';
+import type { FieldSoilSummary } from '../../../shared/schemas/soils';
+import type { PriceList } from '../../../shared/schemas/treatments';
+import type { StoredTerrainStats } from '../../models/field-terrain.model';
+
+/**
+ * The edge toward water is taken as a quarter of the perimeter: one side of a compact field
+ * (rule of thumb; the farmer knows which side drains to the ditch or stream).
+ */
+const DOWNSLOPE_EDGE_SHARE_OF_PERIMETER = 0.25;
+
+export type SiteParts = {
+  estimateInput: EstimateInput;
+  areaHa: number;
+  perimeterM: number;
+  soil: FieldSoilSummary;
+  terrain: StoredTerrainStats | null;
+  prices: PriceList;
+};
+
+export function treatmentSiteOf(p: SiteParts): TreatmentSite {
+  const flow = p.terrain?.concentratedFlow;
+  return {
+    input: p.estimateInput,
+    areaHa: p.areaHa,
+    soil: {
+      ph: p.soil.ph,
+      bufferPh: p.soil.bufferPh,
+      bufferMethod: p.soil.bufferMethod,
+      organicMatterPct: p.soil.organicMatterPct,
+      sandPct: p.soil.sandPct,
+      siltPct: p.soil.siltPct,
+      clayPct: p.soil.clayPct,
+      cecCmolPerKg: p.soil.cecCmolPerKg,
+      espPct: p.soil.espPct,
+      bulkDensityMgPerM3: p.soil.bulkDensity,
+      notWorthAmending: p.soil.notWorthAmending,
+      problemClay: p.soil.problemClay,
+    },
+    water: {
+      // Cells where flow gathers, end to end: a path's length along grid steps (diagonal steps
+      // make the true path up to √2 longer, so this is on the short side).
+      concentratedFlowLengthM: p.terrain ? (flow?.cellCount ?? 0) * p.terrain.cellSizeM : null,
+      downslopeEdgeLengthM: p.perimeterM * DOWNSLOPE_EDGE_SHARE_OF_PERIMETER,
+    },
+    prices: p.prices.prices,
+    currency: p.prices.currency,
+  };
+}
