@@ -1,6 +1,6 @@
 // Season plans as the API shows them. Pure: rows and the names of the people in them in,
 // shapes out; the landowner's view is the same shape cut down to their own fields.
-import type { Plan as PlanShape, PlanAction as PlanActionShape, PlanComment as PlanCommentShape, PlanFieldTotal, PlanPerson } from '../../shared/schemas/plans';
+import type { Plan as PlanShape, PlanAction as PlanActionShape, PlanComment as PlanCommentShape, PlanFieldPrediction, PlanFieldTotal, PlanPerson } from '../../shared/schemas/plans';
 import type { Plan, PlanAction, PlanComment, PlanVersion } from '../models';
 
 /** Names of the people a plan mentions, by user id. */
@@ -68,7 +68,11 @@ export type PlanRows = {
   people: People;
 };
 
-export function presentPlan({ plan, season, actions, comments, approvedRevision, people }: PlanRows): PlanShape {
+/** Tonnes a year saved over the fields whose prediction could be made. */
+export const sumSaved = (fields: PlanFieldPrediction[]) => fields.reduce((s, f) => s + (f.ok ? f.tonnesSavedPerYr : 0), 0);
+
+/** The plan without its prediction, which needs the treatment engine (plan-prediction service). */
+export function presentPlan({ plan, season, actions, comments, approvedRevision, people }: PlanRows): Omit<PlanShape, 'prediction'> {
   const shown = actions.map(({ action, fieldName }) => presentAction(action, fieldName, people));
   return {
     id: plan.id,
@@ -96,8 +100,9 @@ export function presentPlan({ plan, season, actions, comments, approvedRevision,
 /** A frozen approved revision as stored (the plan as it was, comments left with the live plan). */
 export const presentFrozen = (v: PlanVersion): PlanShape => ({ ...v.snapshot, frozen: true });
 
-/** A plan cut down to the fields a landowner owns: their actions and totals, no review conversation. */
+/** A plan cut down to the fields a landowner owns: their actions, totals and predictions, no review conversation. */
 export function forLandowner(plan: PlanShape, ownedFieldIds: Set<number>): PlanShape {
   const actions = plan.actions.filter((a) => ownedFieldIds.has(a.fieldId));
-  return { ...plan, actions, totals: planTotals(actions), comments: [] };
+  const fields = plan.prediction.fields.filter((f) => ownedFieldIds.has(f.fieldId));
+  return { ...plan, actions, totals: planTotals(actions), prediction: { fields, tonnesSavedPerYr: sumSaved(fields) }, comments: [] };
 }

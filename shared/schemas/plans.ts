@@ -125,6 +125,26 @@ export type PlanComment = {
 
 export type PlanFieldTotal = { fieldId: number; fieldName: string; actions: number; cost: number };
 
+/** Soil loss of a field: A in t/ha/yr, A/T, and tonnes a year over the field. */
+export type SoilLossFigures = { soilLossTPerHaYr: number; aOverT: number; tonnesPerYr: number };
+
+/** A field's soil loss now and after the treatments its actions plan (typed work is not modelled). */
+export type PlanFieldPrediction = { fieldId: number; fieldName: string; treatments: TreatmentKey[] } & (
+  | {
+      ok: true;
+      current: SoilLossFigures;
+      planned: SoilLossFigures;
+      tonnesSavedPerYr: number;
+      reachesT: boolean;
+      /** What the treatments do that A does not show (a waterway against gullies, a strip trapping sediment …). */
+      effects: string[];
+    }
+  | { ok: false; reason: string }
+);
+
+/** What the plan's treatments would do, field by field, from the season's assessments. */
+export type PlanPrediction = { fields: PlanFieldPrediction[]; tonnesSavedPerYr: number };
+
 export type Plan = {
   id: number;
   farmId: number;
@@ -148,6 +168,8 @@ export type Plan = {
   approvedAt: string | null;
   actions: PlanAction[];
   totals: { cost: number; fields: PlanFieldTotal[] };
+  /** Predicted A and A/T per field after its planned treatments, and the tonnes a year the farm saves. */
+  prediction: PlanPrediction;
   /** The review conversation; empty for a landowner. */
   comments: PlanComment[];
 };

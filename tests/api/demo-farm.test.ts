@@ -141,6 +141,15 @@ describe('the demo farm', () => {
       expect.arrayContaining(['Long Slope: no-till', 'Long Slope: cover-crop', 'Swale Field: grassed-waterway']),
     );
     expect(plan.totals.cost).toBeGreaterThan(0);
+    // No-till and a cover crop lower C, so Long Slope loses less (AH-703 ch. 5); the farm saves soil.
+    const longSlope = plan.prediction.fields.find((f: { fieldName: string }) => f.fieldName === 'Long Slope');
+    expect(longSlope.ok).toBe(true);
+    expect(longSlope.planned.soilLossTPerHaYr).toBeLessThan(longSlope.current.soilLossTPerHaYr);
+    expect(plan.prediction.tonnesSavedPerYr).toBeGreaterThan(0);
+    // A waterway changes no RUSLE factor; the prediction says what it does instead.
+    const swale = plan.prediction.fields.find((f: { fieldName: string }) => f.fieldName === 'Swale Field');
+    expect(swale.tonnesSavedPerYr).toBe(0);
+    expect(swale.effects.length).toBeGreaterThan(0);
     const landowner = await signedIn(app, (await User.findOne({ where: { email: DEMO_ACCOUNTS[2].email } }))!, DEMO_PASSWORD);
     expect((await landowner.get(`/api/farms/${farmId}/plans?season=2027`)).status).toBe(404);
   });

@@ -8,6 +8,7 @@ import { HttpError, notFound } from '../../lib/http-error';
 import { Field, Plan, PlanAction, PlanComment, PlanVersion, Season, User } from '../../models';
 import { forLandowner, presentFrozen, presentPlan, type People } from '../../presenters/plan.presenter';
 import { resolveSeason } from '../seasons.service';
+import { predictPlan } from './plan-prediction';
 
 /** Who reads: their farm, membership and role. */
 export type PlanViewer = { farmId: number; membershipId: number; role: 'farmer' | 'advisor' | 'landowner' };
@@ -19,7 +20,10 @@ async function peopleOf(ids: (number | null)[], transaction?: Transaction): Prom
   return new Map(users.map((u) => [u.id, u.name]));
 }
 
-/** The live plan as the API shows it (read inside the caller's transaction when given). */
+/**
+ * The live plan as the API shows it (read inside the caller's transaction when given), with the
+ * prediction of its treatments from the season's stored assessments.
+ */
 export async function livePlan(planId: number, transaction?: Transaction): Promise<PlanShape> {
   const plan = await Plan.findByPk(planId, { include: [{ model: Season, as: 'season', attributes: ['label'] }], transaction });
   if (!plan) throw notFound('That plan');
@@ -31,7 +35,7 @@ export async function livePlan(planId: number, transaction?: Transaction): Promi
     [plan.createdBy, plan.submittedBy, plan.returnedBy, plan.approvedBy, ...actions.flatMap((a) => [a.createdBy, a.updatedBy]), ...comments.map((c) => c.authorId)],
     transaction,
   );
-  return presentPlan({
+  const shown = presentPlan({
     plan,
     season: plan.season!.label,
     actions: actions.map((action) => ({ action, fieldName: action.field!.name })),
@@ -39,6 +43,7 @@ export async function livePlan(planId: number, transaction?: Transaction): Promi
     approvedRevision: newest ?? null,
     people,
   });
+  return { ...shown, prediction: await predictPlan(shown) };
 }
 
 async function ownedFieldIds(viewer: PlanViewer): Promise<Set<number>> {
