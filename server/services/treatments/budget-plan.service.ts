@@ -10,7 +10,7 @@ import { farmTreatments } from './farm-treatments.service';
 type Goal = BudgetPlan['goal'];
 
 /** Points on the soil-saved-against-money curve. */
-const CURVE_POINTS = 12;
+const CURVE_POINTS = 16;
 
 const money = (x: number, currency: string) => `${Math.round(x).toLocaleString('en-US')} ${currency}`;
 const tonnes = (x: number) => `${x >= 100 ? Math.round(x) : x.toFixed(1)} t`;
@@ -53,15 +53,21 @@ function explain(farm: FarmTreatmentsAnswer, plan: BudgetPlan, candidates: Budge
   return lines;
 }
 
-function curveOf(candidates: BudgetField[], goal: Goal): BudgetPlan['curve'] {
+/**
+ * Soil saved at budgets from the cheapest option to what every field's dearest option costs,
+ * spaced by equal ratios so the cheap end (where most soil is saved per money) shows, and the
+ * asked budget among them.
+ */
+function curveOf(candidates: BudgetField[], goal: Goal, asked: number): BudgetPlan['curve'] {
+  const costs = candidates.flatMap((f) => f.options.map((o) => o.cost)).filter((c) => c > 0);
   const top = candidates.reduce((s, f) => s + Math.max(...f.options.map((o) => o.cost)), 0);
-  if (top <= 0) return [{ budget: 0, tonnesSavedPerYr: 0 }];
-  const out: BudgetPlan['curve'] = [];
-  for (let i = 0; i <= CURVE_POINTS; i++) {
-    const budget = Math.round((top * i) / CURVE_POINTS);
-    out.push({ budget, tonnesSavedPerYr: planBudget({ budget, fields: candidates, goal }).tonnesSaved });
+  const budgets = new Set<number>([0]);
+  if (costs.length && top > 0) {
+    const low = Math.max(1, Math.min(...costs));
+    for (let i = 0; i < CURVE_POINTS; i++) budgets.add(Math.round(low * (top / low) ** (i / (CURVE_POINTS - 1))));
+    if (asked <= top) budgets.add(Math.round(asked));
   }
-  return out;
+  return [...budgets].sort((a, b) => a - b).map((budget) => ({ budget, tonnesSavedPerYr: planBudget({ budget, fields: candidates, goal }).tonnesSaved }));
 }
 
 export async function budgetPlan(sequelize: Sequelize, farmId: number, request: BudgetPlanRequest): Promise<BudgetPlan> {
@@ -94,7 +100,7 @@ export async function budgetPlan(sequelize: Sequelize, farmId: number, request: 
       };
     }),
     explanation: [],
-    curve: curveOf(candidates, goal),
+    curve: curveOf(candidates, goal, request.budget),
   };
   plan.explanation = explain(farm, plan, candidates);
   return plan;

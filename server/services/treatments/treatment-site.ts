@@ -12,6 +12,15 @@ import type { StoredTerrainStats } from '../../models/field-terrain.model';
  */
 const DOWNSLOPE_EDGE_SHARE_OF_PERIMETER = 0.25;
 
+/**
+ * Where water gathers, as the length of one waterway: the flow cells end to end, but no longer
+ * than the way across the field (half its perimeter), since neighbouring cells of a wide or
+ * branching flow line would be one waterway (rule of thumb).
+ */
+function concentratedFlowLengthM(cellsLengthM: number, perimeterM: number): number {
+  return Math.min(cellsLengthM, perimeterM / 2);
+}
+
 export type SiteParts = {
   estimateInput: EstimateInput;
   areaHa: number;
@@ -41,9 +50,7 @@ export function treatmentSiteOf(p: SiteParts): TreatmentSite {
       problemClay: p.soil.problemClay,
     },
     water: {
-      // Cells where flow gathers, end to end: a path's length along grid steps (diagonal steps
-      // make the true path up to √2 longer, so this is on the short side).
-      concentratedFlowLengthM: p.terrain ? (flow?.cellCount ?? 0) * p.terrain.cellSizeM : null,
+      concentratedFlowLengthM: p.terrain ? concentratedFlowLengthM((flow?.cellCount ?? 0) * p.terrain.cellSizeM, p.perimeterM) : null,
       downslopeEdgeLengthM: p.perimeterM * DOWNSLOPE_EDGE_SHARE_OF_PERIMETER,
     },
     prices: p.prices.prices,
