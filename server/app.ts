@@ -18,6 +18,7 @@ import { estimateRoutes } from './routes/estimate.routes';
 import { soilsRoutes } from './routes/soils.routes';
 import { seasonsRoutes } from './routes/seasons.routes';
 import { treatmentsRoutes } from './routes/treatments.routes';
+import { factorOverridesRoutes } from './routes/factor-overrides.routes';
 import { plansRoutes } from './routes/plans.routes';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
@@ -75,6 +76,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   const seasons = seasonsRoutes(sequelize, jobs);
   api.use('/farms', seasons.farms);
   api.use('/fields', seasons.fields);
+  api.use('/fields', factorOverridesRoutes(sequelize));
   api.use('/board', seasons.board);
   const treatments = treatmentsRoutes(sequelize);
   api.use('/farms', treatments.farms);

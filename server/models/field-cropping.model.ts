@@ -16,6 +16,8 @@ export class FieldCropping extends Model<InferAttributes<FieldCropping>, InferCr
   declare coverCrop: Cropping['coverCrop'];
   declare practice: Cropping['practice'];
   declare terraceIntervalM: number | null;
+  declare stripRotation: Cropping['stripRotation'];
+  declare stripWidthM: number | null;
   declare version: CreationOptional<number>;
   declare updatedBy: number | null;
   declare updatedAt: CreationOptional<Date>;
@@ -33,6 +35,8 @@ export class FieldCropping extends Model<InferAttributes<FieldCropping>, InferCr
         coverCrop: DataTypes.JSONB,
         practice: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'none' },
         terraceIntervalM: DataTypes.REAL,
+        stripRotation: DataTypes.TEXT,
+        stripWidthM: DataTypes.REAL,
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         updatedBy: DataTypes.INTEGER,
         updatedAt: DataTypes.DATE,

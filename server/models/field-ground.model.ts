@@ -2,11 +2,13 @@ import { Field } from './field.model';
 import { User } from './user.model';
 import { DataTypes, Model, Op, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
 
-/** A field's typed slope and slope length, for where no elevation model covers it; versioned. */
+/** A field's typed slope and slope length (where no elevation model covers it) and its drainage; versioned. */
 export class FieldGround extends Model<InferAttributes<FieldGround>, InferCreationAttributes<FieldGround>> {
   declare fieldId: number;
   declare slopePct: number | null;
   declare slopeLengthM: number | null;
+  declare drained: CreationOptional<boolean>;
+  declare drainedWaterTableDepthCm: number | null;
   declare version: CreationOptional<number>;
   declare updatedBy: number | null;
   declare updatedAt: CreationOptional<Date>;
@@ -17,6 +19,8 @@ export class FieldGround extends Model<InferAttributes<FieldGround>, InferCreati
         fieldId: { type: DataTypes.INTEGER, primaryKey: true },
         slopePct: DataTypes.REAL,
         slopeLengthM: DataTypes.REAL,
+        drained: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        drainedWaterTableDepthCm: DataTypes.REAL,
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         updatedBy: DataTypes.INTEGER,
         updatedAt: DataTypes.DATE,

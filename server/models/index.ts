@@ -22,6 +22,7 @@ import { FarmClimate } from './farm-climate.model';
 import { FieldGround } from './field-ground.model';
 import { Assessment } from './assessment.model';
 import { FarmPrices } from './farm-prices.model';
+import { FieldFactorOverride } from './field-factor-override.model';
 import { Plan } from './plan.model';
 import { PlanAction } from './plan-action.model';
 import { PlanComment } from './plan-comment.model';
@@ -29,13 +30,13 @@ import { PlanVersion } from './plan-version.model';
 
 export {
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, Plan, PlanAction, PlanComment, PlanVersion,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride, Plan, PlanAction, PlanComment, PlanVersion,
 };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
 const MODELS = [
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, Plan, PlanAction, PlanComment, PlanVersion,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride, Plan, PlanAction, PlanComment, PlanVersion,
 ];
 
 let initialised: Sequelize | null = null;

@@ -14,6 +14,8 @@ export const presentCropping = (c: FieldCropping, seasonLabel: string): Cropping
   coverCrop: c.coverCrop,
   practice: c.practice,
   terraceIntervalM: c.terraceIntervalM,
+  stripRotation: c.stripRotation,
+  stripWidthM: c.stripWidthM,
   version: c.version,
   updatedAt: new Date(c.updatedAt).toISOString(),
 });
@@ -27,7 +29,13 @@ export const presentClimate = (c: FarmClimate): Climate => ({
   version: c.version,
 });
 
-export const presentGround = (g: FieldGround): Ground => ({ slopePct: g.slopePct, slopeLengthM: g.slopeLengthM, version: g.version });
+export const presentGround = (g: FieldGround): Ground => ({
+  slopePct: g.slopePct,
+  slopeLengthM: g.slopeLengthM,
+  drained: g.drained,
+  drainedWaterTableDepthCm: g.drainedWaterTableDepthCm,
+  version: g.version,
+});
 
 /** GET ground of a field nobody has typed a slope for yet. */
-export const NO_GROUND = { slopePct: null, slopeLengthM: null, version: null } as const;
+export const NO_GROUND = { slopePct: null, slopeLengthM: null, drained: false, drainedWaterTableDepthCm: null, version: null } as const;

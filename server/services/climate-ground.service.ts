@@ -2,7 +2,7 @@
 // length where no elevation model covers it). Both versioned: 409 when stale. Every change
 // refreshes the stored assessments it touches.
 import { UniqueConstraintError, type Sequelize } from 'sequelize';
-import type { Climate, ClimateUpdate, Ground, RainfallRecordFields, RainfallRecordSummary } from '../../shared/schemas/season';
+import type { Climate, ClimateUpdate, Ground, GroundUpdate, RainfallRecordFields, RainfallRecordSummary } from '../../shared/schemas/season';
 import { badRequest, conflict, HttpError, invalid } from '../lib/http-error';
 import { FarmClimate, FieldGround } from '../models';
 import { NO_GROUND, presentClimate, presentGround } from '../presenters/seasons.presenter';
@@ -76,14 +76,21 @@ export async function putGround(
   sequelize: Sequelize,
   actor: { userId: number },
   field: { id: number; farmId: number },
-  input: { version?: number; slopePct: number | null; slopeLengthM: number | null },
+  input: GroundUpdate,
   jobs?: JobQueue,
 ): Promise<Ground> {
   const { ground, slopeLengthChanged } = await sequelize.transaction(async (t) => {
     const cur = await FieldGround.findByPk(field.id, { transaction: t, lock: t.LOCK.UPDATE });
-    staleCheck("field's slope", cur ? presentGround(cur) : null, input.version);
+    staleCheck("field's ground", cur ? presentGround(cur) : null, input.version);
     const lengthBefore = cur?.slopeLengthM ?? null;
-    const next = { slopePct: input.slopePct, slopeLengthM: input.slopeLengthM, updatedBy: actor.userId };
+    const drained = input.drained ?? false;
+    const next = {
+      slopePct: input.slopePct,
+      slopeLengthM: input.slopeLengthM,
+      drained,
+      drainedWaterTableDepthCm: drained ? (input.drainedWaterTableDepthCm ?? null) : null,
+      updatedBy: actor.userId,
+    };
     const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("field's slope", () => FieldGround.create({ fieldId: field.id, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'ground', entityId: field.id, action: cur ? 'updated' : 'created' }, t);
     await row.reload({ transaction: t });

@@ -19,6 +19,8 @@ export type InputChange =
   | { kind: 'terrain'; farmId: number }
   | { kind: 'soils'; farmId: number; fieldIds?: number[] }
   | { kind: 'cropping'; farmId: number; fieldIds: number[] }
+  /** R, K, C or P typed for a field in place of the worked-out figure, or such a figure removed. */
+  | { kind: 'overrides'; farmId: number; fieldIds: number[] }
   | { kind: 'climate'; farmId: number }
   | { kind: 'season'; farmId: number };
 

@@ -77,6 +77,9 @@ export async function putCropping(sequelize: Sequelize, actor: { userId: number 
       coverCrop: input.coverCrop ?? null,
       practice: input.practice ?? 'none',
       terraceIntervalM: input.terraceIntervalM ?? null,
+      // The rotation and width mean something only for strips.
+      stripRotation: input.practice === 'strip cropping' ? (input.stripRotation ?? null) : null,
+      stripWidthM: input.practice === 'strip cropping' ? (input.stripWidthM ?? null) : null,
       updatedBy: actor.userId,
     };
     let row: FieldCropping;

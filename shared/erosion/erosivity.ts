@@ -11,7 +11,8 @@ export function rFromValue(value: number, units: 'si' | 'us' = 'si'): number {
 
 /**
  * Entry point: R from mean annual precipitation P in mm (Renard & Freimund 1994,
- * J. Hydrol. 157:287) [memory].
+ * J. Hydrol. 157:287) [memory]. Says nothing about where the fit holds: see
+ * rFromAnnualPrecipitationChecked.
  */
 export function rFromAnnualPrecipitation(annualPrecipitationMm: number): number {
   assertNonNegative('annualPrecipitationMm', annualPrecipitationMm);
@@ -20,6 +21,49 @@ export function rFromAnnualPrecipitation(annualPrecipitationMm: number): number 
   if (p < 850) return 0.0483 * Math.pow(p, 1.61);
   // Renard & Freimund 1994 eq. 14: R = 587.8 − 1.219 P + 0.004105 P², P ≥ 850 mm
   return 587.8 - 1.219 * p + 0.004105 * p * p;
+}
+
+/**
+ * Mean annual precipitation of the stations the Renard & Freimund (1994) regression was fitted
+ * to: weather stations of the conterminous United States. The limits are recalled, not re-read
+ * in the paper [memory]: about 200 mm (the dry western stations) to about 1700 mm (the wettest
+ * Gulf Coast stations). Outside them the fit is an extrapolation.
+ */
+export const R_PRECIPITATION_FITTED_RANGE_MM = { min: 200, max: 1700, flag: 'memory' } as const;
+
+/** Beside the box where annual precipitation is typed. */
+export const R_PRECIPITATION_HINT =
+  `A regional fit to US stations with about ${R_PRECIPITATION_FITTED_RANGE_MM.min}–${R_PRECIPITATION_FITTED_RANGE_MM.max} mm a year; ` +
+  'outside that range, or where most rain falls in winter, type the local R instead.';
+
+/** Said wherever R comes from annual precipitation, inside the fitted range or not. */
+export const R_FROM_PRECIPITATION_NOTE =
+  'R from annual precipitation is a regional fit to US stations; in winter-rain (Mediterranean) climates, where gentle winter rain ' +
+  'carries little erosive energy, it can be several times too high. A published local R, or one from a rainfall record, is better.';
+
+export type CheckedR = {
+  /** R, MJ·mm/(ha·h·yr). */
+  r: number;
+  withinFittedRange: boolean;
+  /** Why this R is doubtful, for a person; only outside the fitted range. */
+  warning?: string;
+};
+
+/**
+ * R from mean annual precipitation, with whether P lies in the range the regression was fitted
+ * to (Renard & Freimund 1994). Outside it the figure comes with a warning rather than a refusal:
+ * it may be all a person has, and the warning says that a local R is preferred.
+ */
+export function rFromAnnualPrecipitationChecked(annualPrecipitationMm: number): CheckedR {
+  const r = rFromAnnualPrecipitation(annualPrecipitationMm);
+  const { min, max } = R_PRECIPITATION_FITTED_RANGE_MM;
+  if (annualPrecipitationMm >= min && annualPrecipitationMm <= max) return { r, withinFittedRange: true };
+  const side = annualPrecipitationMm < min ? 'below' : 'above';
+  const warning =
+    `${Math.round(annualPrecipitationMm)} mm a year is ${side} the ${min}–${max} mm of the US stations the Renard & Freimund (1994) ` +
+    'fit was made from: R here is an extrapolation and can be several times off (in winter-rain climates too). Type the local R ' +
+    '(published, or from a rainfall record) instead.';
+  return { r, withinFittedRange: false, warning };
 }
 
 /** Unit rainfall energy e, MJ/(ha·mm), at intensity i mm/h (Brown & Foster 1987; AH-703 eq. 2-3 SI). */

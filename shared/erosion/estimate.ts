@@ -9,9 +9,9 @@ import {
   type Provenance,
 } from '../schemas/estimate';
 import { annualCFromSubfactors, coverFromTable, DEFAULT_EI_DISTRIBUTION, type Flag } from './cover';
-import { rFromAnnualPrecipitation } from './erosivity';
+import { R_FROM_PRECIPITATION_NOTE, rFromAnnualPrecipitationChecked } from './erosivity';
 import { kFactorWilliams, kFromTextureTable, organicCarbonFromOm, permeabilityClassFromKsat, tryKFactorNomograph, type PermeabilityCode, type StructureCode } from './k-factor';
-import { antecedentCurveNumber, curveNumberFromTable, curveNumberRunoff, runoffVolumeM3 } from './runoff';
+import { ADEQUATELY_DRAINED_MIN_DEPTH_CM, antecedentCurveNumber, curveNumberFromTable, curveNumberRunoff, runoffVolumeM3 } from './runoff';
 import { tryRusleLS, usleLS, type LsResult } from './slope-length';
 import { soilGroupFromTexture } from './soil-group';
 import { soilLoss, soilLossTonnesPerYr } from './soil-loss';
@@ -65,9 +65,11 @@ function run(inp: EstimateInputParsed): EstimateResult {
     const si = inp.r.units === 'us' ? rUsToSi(inp.r.value) : inp.r.value;
     r = prov(si, R_UNIT, 'typed in', `R typed in ${inp.r.units === 'us' ? 'US' : 'SI'} units`, undefined, { value: rSiToUs(si), unit: R_UNIT_US });
   } else {
-    const si = rFromAnnualPrecipitation(inp.r.annualPrecipitationMm);
-    r = prov(si, R_UNIT, 'Renard & Freimund 1994, J. Hydrol. 157:287', `from mean annual precipitation ${inp.r.annualPrecipitationMm} mm`, 'memory', { value: rSiToUs(si), unit: R_UNIT_US });
-    warnings.push('R from annual precipitation is a rough regional fit; use the local R where it is published');
+    const checked = rFromAnnualPrecipitationChecked(inp.r.annualPrecipitationMm);
+    const si = checked.r;
+    const range = checked.withinFittedRange ? '' : ' (outside the range the fit was made from)';
+    r = prov(si, R_UNIT, 'Renard & Freimund 1994, J. Hydrol. 157:287', `from mean annual precipitation ${inp.r.annualPrecipitationMm} mm${range}`, 'memory', { value: rSiToUs(si), unit: R_UNIT_US });
+    warnings.push(checked.warning ?? R_FROM_PRECIPITATION_NOTE);
   }
 
   // ---- K
@@ -114,13 +116,21 @@ function run(inp: EstimateInputParsed): EstimateResult {
   if (inp.p.from === 'value') {
     p = prov(inp.p.value, '', 'typed in', 'P typed in');
   } else {
-    const sp = supportPractice({ practice: inp.p.practice, slopePct: inp.slopePct, slopeLengthM: inp.slopeLengthM, terraceIntervalM: inp.p.terraceIntervalM });
+    const sp = supportPractice({
+      practice: inp.p.practice,
+      slopePct: inp.slopePct,
+      slopeLengthM: inp.slopeLengthM,
+      terraceIntervalM: inp.p.terraceIntervalM,
+      stripRotation: inp.p.stripRotation,
+      stripWidthM: inp.p.stripWidthM,
+    });
     if (!sp.ok) return failAt('p', sp.reason);
     const v = sp.value;
     lengthForLsM = v.effectiveSlopeLengthM;
     practice = { practice: v.practice, effective: v.effective, effectiveSlopeLengthM: v.effectiveSlopeLengthM, notes: v.notes };
-    p = prov(v.p, '', v.source, v.practice === 'none' ? 'no support practice' : `${v.practice}${v.effective ? '' : ' (no effect here)'}`, v.flag);
+    p = prov(v.p, '', v.source, v.practice === 'none' ? 'no support practice' : `${v.practice}${inp.p.stripRotation && v.practice === 'strip cropping' ? `, rotation ${inp.p.stripRotation}` : ''}${v.effective ? '' : ' (no effect here)'}`, v.flag);
     if (!v.effective) warnings.push(...v.notes.filter((n) => n.includes('loses its effect')));
+    if (v.stripWidthWarning) warnings.push(v.stripWidthWarning);
     if (v.practice === 'terraces') cautions.push(CAUTION_TERRACES);
   }
 
@@ -141,7 +151,12 @@ function run(inp: EstimateInputParsed): EstimateResult {
   const l = prov(ls.l, '', lsSource, lsMethod);
   const s = prov(ls.s, '', lsSource, lsMethod);
   let lsP = prov(ls.ls, '', lsSource, lsMethod);
-  if (inp.lsFromGrid) {
+  const terraced = practice?.practice === 'terraces' && practice.effective;
+  if (inp.lsFromGrid && terraced) {
+    // Terraces cut every flow path at each terrace (AH-537: slope length = terrace interval),
+    // which the elevation model's uninterrupted paths do not know.
+    warnings.push("Terraces cut the slope at each terrace: LS is taken on the terrace interval at the mean slope, not from the elevation model.");
+  } else if (inp.lsFromGrid) {
     // A field's LS from its elevation model (mean of the per-cell Desmet–Govers L × RUSLE S)
     // replaces the one-slope LS; L and S above stay as the mean-slope figures for reference.
     lsP = prov(inp.lsFromGrid.value, '', inp.lsFromGrid.source, inp.lsFromGrid.method);
@@ -191,11 +206,20 @@ function run(inp: EstimateInputParsed): EstimateResult {
         hsgFlag = g.flag;
         warnings.push(`hydrologic soil group ${g.hsg} taken from the texture (${textureClass}) by a rule of thumb; the soil survey's group wins`);
       }
-      const res = curveNumberFromTable({ cover: ro.cover as string, treatment: ro.treatment ?? null, condition: ro.condition ?? null, hsg: hsg as never, drained: ro.drained });
+      const res = curveNumberFromTable({
+        cover: ro.cover as string,
+        treatment: ro.treatment ?? null,
+        condition: ro.condition ?? null,
+        hsg: hsg as never,
+        drained: ro.drained,
+        drainedWaterTableDepthCm: ro.drainedWaterTableDepthCm,
+      });
       if (!res.ok) return failAt('runoff', res.reason);
       const row = res.value.row;
       const desc = [row.cover, row.treatment, row.condition ? `${row.condition} condition` : null].filter(Boolean).join(', ');
-      cnP = prov(res.value.cn, '', res.value.source, `${desc}, group ${res.value.group}${hsg.includes('/') ? ` (dual ${hsg}, ${ro.drained ? 'drained' : 'undrained'})` : ''}`, hsgFlag ?? res.value.flag);
+      const dual = hsg.includes('/');
+      if (dual && ro.drained && res.value.group === 'D') warnings.push(drainedAsDWarning(hsg, ro.drainedWaterTableDepthCm));
+      cnP = prov(res.value.cn, '', res.value.source, `${desc}, group ${res.value.group}${dual ? ` (dual ${hsg}, ${dualWords(ro.drained, ro.drainedWaterTableDepthCm)})` : ''}`, hsgFlag ?? res.value.flag);
     }
     if (ro.antecedent !== 'II') {
       const adj = antecedentCurveNumber(cnP.value, ro.antecedent);
@@ -224,6 +248,20 @@ function run(inp: EstimateInputParsed): EstimateResult {
     cautions,
     warnings,
   };
+}
+
+/** Why a drained soil of a dual group still takes D (NEH 630 ch. 7). */
+function drainedAsDWarning(hsg: string, depthCm: number | undefined): string {
+  const why =
+    depthCm === undefined
+      ? 'the depth the drainage keeps the water table at is not given'
+      : `the drainage keeps the water table at ${depthCm} cm, shallower than ${ADEQUATELY_DRAINED_MIN_DEPTH_CM} cm`;
+  return `group ${hsg} taken as D although the field is drained: ${why}. NEH 630 ch. 7 gives the first letter only when drainage keeps the seasonal high water table at least ${ADEQUATELY_DRAINED_MIN_DEPTH_CM} cm down.`;
+}
+
+function dualWords(drained: boolean, depthCm: number | undefined): string {
+  if (!drained) return 'undrained';
+  return depthCm === undefined ? 'drained, water-table depth not given' : `drained, water table kept at ${depthCm} cm`;
 }
 
 const round = (x: number, d: number) => Math.round(x * 10 ** d) / 10 ** d;

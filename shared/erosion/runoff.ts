@@ -26,14 +26,29 @@ export type CnLookup = {
   /** Hydrologic condition: poor, fair or good (not all rows have one). */
   condition?: string | null;
   hsg: HydrologicSoilGroup;
-  /** For a dual group: drained uses the first letter, undrained D (TR-55 ch. 2). Default false. */
+  /** Is the field drained (tile or ditches)? Default false. */
   drained?: boolean;
+  /** Depth the drainage keeps the seasonal high water table at, cm, where known. */
+  drainedWaterTableDepthCm?: number;
 };
 
-/** The single group a dual group stands for, drained or not. */
-export function effectiveGroup(hsg: HydrologicSoilGroup, drained = false): SingleGroup {
-  if (hsg.includes('/')) return drained ? (hsg[0] as SingleGroup) : 'D';
-  return hsg as SingleGroup;
+/**
+ * NEH 630 ch. 7: a soil counts as adequately drained when the seasonal high water table is kept
+ * at least 60 cm below the surface [memory for the wording].
+ */
+export const ADEQUATELY_DRAINED_MIN_DEPTH_CM = 60;
+
+/**
+ * The single group a dual group (A/D, B/D, C/D) stands for. NEH 630 ch. 7: the first letter is
+ * for the adequately drained soil, D for the undrained one. A drained soil whose water-table depth
+ * is not known takes the conservative D; so does drainage that leaves the water table shallower
+ * than 60 cm. Single groups pass through.
+ */
+export function effectiveGroup(hsg: HydrologicSoilGroup, drainage: { drained?: boolean; drainedWaterTableDepthCm?: number } = {}): SingleGroup {
+  if (!hsg.includes('/')) return hsg as SingleGroup;
+  const depth = drainage.drainedWaterTableDepthCm;
+  // NEH 630 ch. 7: dual groups, first letter when drained to ≥ 60 cm, else D
+  return drainage.drained && depth !== undefined && depth >= ADEQUATELY_DRAINED_MIN_DEPTH_CM ? (hsg[0] as SingleGroup) : 'D';
 }
 
 /** CN (antecedent condition II) from the tables. Unknown combinations fail with the choices. */
@@ -52,7 +67,7 @@ export function curveNumberFromTable(
   if (!row) {
     return fail(`no curve number for ${lookup.cover}${lookup.treatment ? `, ${lookup.treatment}` : ''} in condition '${lookup.condition ?? '(none)'}'; choose one of: ${byTreatment.map((r) => r.condition ?? '(none)').join(', ')}`);
   }
-  const group = effectiveGroup(lookup.hsg, lookup.drained);
+  const group = effectiveGroup(lookup.hsg, { drained: lookup.drained, drainedWaterTableDepthCm: lookup.drainedWaterTableDepthCm });
   return succeed({ cn: row.cn[group], row, group, source: row.source, flag: row.flag });
 }
 

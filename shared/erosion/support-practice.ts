@@ -1,22 +1,38 @@
 // Support-practice factor P: contouring, contour strip cropping and terraces by slope, with the
-// slope-length limits beyond which a practice loses its effect (AH-537 [memory]; NRCS 330).
+// slope-length limits beyond which a practice loses its effect (AH-537 tables 13 and 14 [memory];
+// NRCS 330). Strip cropping P depends on the rotation in the strips (AH-537 table 14).
 import contourJson from '../../data/reference/contour-p.json';
 import { assertNonNegative, fail, succeed, type Result } from './assert';
 import type { Flag } from './cover';
+import { ftToM } from './units';
+
+/** The rotation columns of AH-537 table 14. */
+export type StripRotation = 'A' | 'B' | 'C';
+export const STRIP_ROTATIONS: readonly StripRotation[] = ['A', 'B', 'C'];
+/** Each rotation column of AH-537 table 14 in plain words (the table's own footnotes, reworded). */
+export const STRIP_ROTATION_WORDS: Record<StripRotation, string> = {
+  A: '4-year rotation: row crop, small grain sown with meadow, then 2 years of meadow',
+  B: '4-year rotation: 2 years of row crop, winter grain sown with meadow, then 1 year of meadow',
+  C: 'strips of row crop alternating with strips of winter grain',
+};
 
 export type ContourRow = {
   minSlopePct: number;
   maxSlopePct: number;
   contourP: number;
   contourMaxLengthM: number;
-  stripP: number;
-  stripMaxLengthM: number;
+  /** AH-537 table 14: P by the rotation in the strips. */
+  stripP: Record<StripRotation, number>;
+  /** AH-537 table 14: widest strip and longest slope, in feet as printed. */
+  stripMaxWidthFt: number;
+  stripMaxLengthFt: number;
   source: string;
   flag: Flag;
 };
 export type ContourTable = {
   rows: ContourRow[];
   stripSource: string;
+  stripFlag: Flag;
   mostEffective: { minSlopePct: number; maxSlopePct: number; source: string };
 };
 export const DEFAULT_CONTOUR_TABLE = contourJson as unknown as ContourTable;
@@ -31,6 +47,10 @@ export type SupportPracticeInput = {
   slopeLengthM: number;
   /** Horizontal distance between terraces, m (terraces only). */
   terraceIntervalM?: number;
+  /** The rotation in the strips (strip cropping only; required there). */
+  stripRotation?: StripRotation;
+  /** Width of each strip, m (strip cropping only; checked against the table's widest strip). */
+  stripWidthM?: number;
 };
 
 export type SupportPracticeResult = {
@@ -41,6 +61,10 @@ export type SupportPracticeResult = {
   /** Slope length the LS factor should use: the terrace interval for terraces, else the input. */
   effectiveSlopeLengthM: number;
   maxLengthM?: number;
+  /** Strip cropping: the widest strip the table's P holds for, m. */
+  maxStripWidthM?: number;
+  /** Strip cropping: set when the strips are wider than the table allows. */
+  stripWidthWarning?: string;
   notes: string[];
   cautions: string[];
   source: string;
@@ -65,11 +89,16 @@ export function supportPractice(
   const { practice, slopePct, slopeLengthM } = input;
   if (!Number.isFinite(slopePct) || slopePct < 0) return fail('slopePct must be a number >= 0');
   if (!Number.isFinite(slopeLengthM) || slopeLengthM <= 0) return fail('slopeLengthM must be a number > 0');
-  const base = { practice, effectiveSlopeLengthM: slopeLengthM, notes: [] as string[], cautions: [] as string[] };
+  const base: Pick<SupportPracticeResult, 'practice' | 'effectiveSlopeLengthM' | 'notes' | 'cautions' | 'maxStripWidthM' | 'stripWidthWarning'> = { practice, effectiveSlopeLengthM: slopeLengthM, notes: [], cautions: [] };
   if (practice === 'none') {
     return succeed({ ...base, p: 1, effective: true, source: 'no support practice: P = 1 (AH-703 ch. 6)', flag: 'pub' });
   }
   if (!PRACTICES.includes(practice)) return fail(`practice must be one of: ${PRACTICES.join(', ')}`);
+  const strip = practice === 'strip cropping';
+  if (strip && (input.stripRotation === undefined || !STRIP_ROTATIONS.includes(input.stripRotation))) {
+    return fail(`stripRotation is needed for strip cropping: A (${STRIP_ROTATION_WORDS.A}), B (${STRIP_ROTATION_WORDS.B}) or C (${STRIP_ROTATION_WORDS.C})`);
+  }
+  if (strip && input.stripWidthM !== undefined && (!Number.isFinite(input.stripWidthM) || input.stripWidthM <= 0)) return fail('stripWidthM must be a number > 0');
 
   let lengthForLimitM = slopeLengthM;
   if (practice === 'terraces') {
@@ -96,10 +125,21 @@ export function supportPractice(
       flag: last.flag,
     });
   }
-  const strip = practice === 'strip cropping';
-  const p = strip ? row.stripP : row.contourP;
-  const maxLengthM = strip ? row.stripMaxLengthM : row.contourMaxLengthM;
+  const rotation = input.stripRotation as StripRotation;
+  // AH-537 table 14: strip-cropping P by the rotation column; table 13: contouring P
+  const p = strip ? row.stripP[rotation] : row.contourP;
+  const maxLengthM = strip ? round(ftToM(row.stripMaxLengthFt)) : row.contourMaxLengthM;
   const source = strip ? table.stripSource : row.source;
+  const flag = strip ? table.stripFlag : row.flag;
+  if (strip) {
+    const maxStripWidthM = round(ftToM(row.stripMaxWidthFt));
+    base.notes.push(`strip cropping with rotation ${rotation}: ${STRIP_ROTATION_WORDS[rotation]}`);
+    base.maxStripWidthM = maxStripWidthM;
+    if (input.stripWidthM !== undefined && input.stripWidthM > maxStripWidthM) {
+      base.stripWidthWarning = `strips ${round(input.stripWidthM)} m wide are wider than the ${maxStripWidthM} m AH-537 table 14 allows at ${round(slopePct)} %: its P assumes strips no wider, so narrow them`;
+      base.notes.push(base.stripWidthWarning);
+    }
+  }
   const { minSlopePct, maxSlopePct } = table.mostEffective;
   if (practice !== 'terraces' && (slopePct < minSlopePct || slopePct > maxSlopePct)) {
     base.notes.push(`contour farming is most effective on ${minSlopePct}–${maxSlopePct} % slopes (${table.mostEffective.source})`);
@@ -112,13 +152,13 @@ export function supportPractice(
       maxLengthM,
       notes: [
         ...base.notes,
-        `slope length ${round(lengthForLimitM)} m is beyond the ${maxLengthM} m limit for ${practice} at ${slopePct} %: the practice loses its effect, P = 1${practice === 'terraces' ? '; narrow the terrace interval' : '; shorten the slope (terraces, diversions) for it to work'}`,
+        `slope length ${round(lengthForLimitM)} m is beyond the ${maxLengthM} m limit for ${practice} at ${round(slopePct)} %: the practice loses its effect, P = 1${practice === 'terraces' ? '; narrow the terrace interval' : '; shorten the slope (terraces, diversions) for it to work'}`,
       ],
       source,
-      flag: row.flag,
+      flag,
     });
   }
-  return succeed({ ...base, p, effective: true, maxLengthM, source, flag: row.flag });
+  return succeed({ ...base, p, effective: true, maxLengthM, source, flag });
 }
 
 const round = (x: number) => Math.round(x * 10) / 10;

@@ -3,7 +3,7 @@ import type { EstimateSuccess } from './estimate';
 import type { RiskClass } from '../erosion/risk-class';
 import type { Origin } from './provenance';
 
-export type InputKey = 'r' | 'k' | 'slope' | 'length' | 'crop' | 'practice' | 't' | 'storm' | 'hsg';
+export type InputKey = 'r' | 'k' | 'slope' | 'length' | 'crop' | 'practice' | 'c' | 'p' | 't' | 'storm' | 'hsg' | 'drainage';
 /** One input of an assessment: its value in words and where it came from. */
 export type AssessmentInput = { key: InputKey; label: string; value: string; origin: Origin; note?: string };
 

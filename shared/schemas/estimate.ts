@@ -114,11 +114,26 @@ export const CInput = z.discriminatedUnion(
 export const Practice = z.enum(['none', 'contouring', 'strip cropping', 'terraces'], {
   error: 'p.practice must be one of: none, contouring, strip cropping, terraces',
 });
+/** The rotation in contour strips: the columns of AH-537 table 14. */
+export const StripRotation = z.enum(['A', 'B', 'C'], { error: "p.stripRotation must be 'A', 'B' or 'C'" });
 export const PInput = z.discriminatedUnion(
   'from',
   [
     z.object({ from: z.literal('value'), value: num('p.value', 0, 1) }),
-    z.object({ from: z.literal('practice'), practice: Practice, terraceIntervalM: num('p.terraceIntervalM', 1, 1000, ' m').optional() }),
+    z
+      .object({
+        from: z.literal('practice'),
+        practice: Practice,
+        terraceIntervalM: num('p.terraceIntervalM', 1, 1000, ' m').optional(),
+        /** Strip cropping: the rotation column of AH-537 table 14 (A, B or C); required there. */
+        stripRotation: StripRotation.optional(),
+        /** Strip cropping: width of each strip, m; checked against the table's widest strip. */
+        stripWidthM: num('p.stripWidthM', 1, 500, ' m').optional(),
+      })
+      .refine((p) => p.practice !== 'strip cropping' || p.stripRotation !== undefined, {
+        message: 'p.stripRotation is required with strip cropping (A, B or C: the rotation in the strips)',
+        path: ['stripRotation'],
+      }),
   ],
   { error: "p.from must be 'value' or 'practice'" },
 );
@@ -139,6 +154,8 @@ export const RunoffInput = z
     treatment: z.string().min(1).nullable().optional(),
     condition: z.enum(['poor', 'fair', 'good'], { error: "runoff.condition must be 'poor', 'fair' or 'good'" }).nullable().optional(),
     drained: z.boolean({ error: 'runoff.drained must be true or false' }).default(false),
+    /** How deep the drainage keeps the seasonal high water table, cm; a dual group takes its first letter only from 60 cm (NEH 630 ch. 7). */
+    drainedWaterTableDepthCm: num('runoff.drainedWaterTableDepthCm', 0, 500, ' cm').optional(),
     antecedent: z.enum(['I', 'II', 'III'], { error: "runoff.antecedent must be 'I', 'II' or 'III'" }).default('II'),
   })
   .refine((r) => r.cn !== undefined || r.cover !== undefined, { message: 'runoff.cn or runoff.cover is required', path: ['cover'] });
@@ -179,6 +196,8 @@ export type Provenance = {
   flag?: 'memory' | 'practice';
   /** The same figure in US customary units, where they differ. */
   us?: { value: number; unit: string };
+  /** Set when a person typed this figure for the field in place of the worked-out one. */
+  override?: { note: string; by: string | null };
 };
 
 export type EstimateSuccess = {

@@ -1,6 +1,6 @@
 // Seasons, cropping and practices per field per season, farm climate and typed ground.
 import { z } from 'zod';
-import { Crop, Tillage, Practice } from './estimate';
+import { Crop, Tillage, Practice, StripRotation } from './estimate';
 import { plainText } from './plain-text';
 
 export const SeasonLabel = plainText('season', 40);
@@ -29,10 +29,18 @@ export const CroppingUpdate = z
     coverCrop: CoverCropInput.nullable().optional(),
     practice: Practice.default('none'),
     terraceIntervalM: z.number().min(1, 'terraceIntervalM must be at least 1 m').max(1000).nullable().optional(),
+    /** Strip cropping: the rotation in the strips, a column of AH-537 table 14; required with strip cropping. */
+    stripRotation: StripRotation.nullable().optional(),
+    /** Strip cropping: width of each strip, m. */
+    stripWidthM: z.number({ error: 'stripWidthM must be a number' }).min(1, 'stripWidthM must be at least 1 m').max(500, 'stripWidthM must be at most 500 m').nullable().optional(),
   })
   .refine((c) => c.crop === 'pasture' || c.crop === 'hay or meadow' || c.tillage != null, { message: 'tillage is required for this crop', path: ['tillage'] })
   .refine((c) => c.crop !== 'pasture' || c.groundCoverPct != null, { message: 'groundCoverPct is required for pasture', path: ['groundCoverPct'] })
-  .refine((c) => c.practice !== 'terraces' || c.terraceIntervalM != null, { message: 'terraceIntervalM is required with terraces', path: ['terraceIntervalM'] });
+  .refine((c) => c.practice !== 'terraces' || c.terraceIntervalM != null, { message: 'terraceIntervalM is required with terraces', path: ['terraceIntervalM'] })
+  .refine((c) => c.practice !== 'strip cropping' || c.stripRotation != null, {
+    message: 'stripRotation is required with strip cropping (A, B or C: the rotation in the strips)',
+    path: ['stripRotation'],
+  });
 export type CroppingUpdate = z.input<typeof CroppingUpdate>;
 
 export type Cropping = {
@@ -45,6 +53,8 @@ export type Cropping = {
   coverCrop: z.infer<typeof CoverCropInput> | null;
   practice: z.infer<typeof Practice>;
   terraceIntervalM: number | null;
+  stripRotation: z.infer<typeof StripRotation> | null;
+  stripWidthM: number | null;
   version: number;
   updatedAt: string;
 };
@@ -74,12 +84,27 @@ export type Climate = {
   version: number;
 };
 
-export const GroundUpdate = z.object({
-  version: z.number().int().nonnegative().optional(),
-  slopePct: z.number().min(0, 'slopePct must be at least 0 %').max(100, 'slopePct must be at most 100 %').nullable(),
-  slopeLengthM: z.number().min(1, 'slopeLengthM must be at least 1 m').max(2000, 'slopeLengthM must be at most 2000 m').nullable(),
-});
-export type Ground = { slopePct: number | null; slopeLengthM: number | null; version: number };
+export const GroundUpdate = z
+  .object({
+    version: z.number().int().nonnegative().optional(),
+    slopePct: z.number().min(0, 'slopePct must be at least 0 %').max(100, 'slopePct must be at most 100 %').nullable(),
+    slopeLengthM: z.number().min(1, 'slopeLengthM must be at least 1 m').max(2000, 'slopeLengthM must be at most 2000 m').nullable(),
+    /** Is the field drained (tile or ditches)? */
+    drained: z.boolean({ error: 'drained must be true or false' }).default(false),
+    /** How deep the drainage keeps the seasonal high water table, cm (NEH 630 ch. 7 reads dual groups by it). */
+    drainedWaterTableDepthCm: z
+      .number({ error: 'drainedWaterTableDepthCm must be a number' })
+      .min(0, 'drainedWaterTableDepthCm must be at least 0 cm')
+      .max(500, 'drainedWaterTableDepthCm must be at most 500 cm')
+      .nullable()
+      .optional(),
+  })
+  .refine((g) => g.drained || g.drainedWaterTableDepthCm == null, {
+    message: 'drainedWaterTableDepthCm is only for a drained field (set drained to true)',
+    path: ['drainedWaterTableDepthCm'],
+  });
+export type GroundUpdate = z.input<typeof GroundUpdate>;
+export type Ground = { slopePct: number | null; slopeLengthM: number | null; drained: boolean; drainedWaterTableDepthCm: number | null; version: number };
 
 /** The text parts of a rainfall-record upload (multipart): both optional, numbers as text. */
 const formNumber = (min: number, max: number) => {

@@ -3,6 +3,7 @@
 import { estimate, riskClassOf, ENGINE_VERSION } from '../../../shared/erosion';
 import type { FieldAssessment, StoredBoardFigures } from '../../../shared/schemas/assessment';
 import type { EstimateInput, EstimateSuccess, Provenance } from '../../../shared/schemas/estimate';
+import { OVERRIDE_FACTORS } from '../../../shared/schemas/overrides';
 import { originWords, type Origin } from '../../../shared/schemas/provenance';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
 import { buildEstimateInput } from './build-estimate-input';
@@ -30,6 +31,19 @@ function withSoilSources(e: EstimateSuccess, soil: FieldSoilSummary): EstimateSu
   return { ...e, factors: { ...e.factors, k, t } };
 }
 
+/** A factor typed for the field replaces the engine's "typed in": who typed it and the note why. */
+function withOverrides(e: EstimateSuccess, overrides: GatheredInputs['overrides']): EstimateSuccess {
+  const factors = { ...e.factors };
+  for (const f of OVERRIDE_FACTORS) {
+    const o = overrides[f];
+    if (!o) continue;
+    const { flag: _engineFlag, ...rest } = factors[f];
+    const by: Origin = o.setBy ? { kind: 'typed', typedBy: o.setBy } : { kind: 'typed' };
+    factors[f] = { ...rest, source: originWords(by), method: `override: ${o.note}`, override: { note: o.note, by: o.setBy } };
+  }
+  return { ...e, factors };
+}
+
 /** Words beside a rank: rules of thumb for what drives the loss (common practice, no single source). */
 function reasonsFor(a: FieldAssessment): string[] {
   const out: string[] = [];
@@ -52,7 +66,7 @@ type AssessedField = { estimateInput: EstimateInput | null; results: FieldAssess
 export function assessField(g: GatheredInputs, computedAt: Date): AssessedField {
   const { input, gaps, lines } = buildEstimateInput(g);
   const result = input ? estimate(input) : null;
-  const ok = result && result.ok ? withSoilSources(result, g.soil) : null;
+  const ok = result && result.ok ? withOverrides(withSoilSources(result, g.soil), g.overrides) : null;
   const soil = g.soil;
   const results: FieldAssessment = {
     fieldId: g.field.id,

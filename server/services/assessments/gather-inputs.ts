@@ -1,8 +1,9 @@
 // Gathers the inputs of every field in scope for every season of its farm at once: one query
 // per input table for the whole scope (seasons, fields, climate, typed ground, cropping,
-// terrain figures), and the soil summary of each field.
+// terrain figures, factor overrides), and the soil summary of each field.
 import { Op, type Sequelize, type Transaction } from 'sequelize';
-import { FarmClimate, Field, FieldCropping, FieldGround, FieldTerrain, Season, User } from '../../models';
+import { FarmClimate, Field, FieldCropping, FieldFactorOverride, FieldGround, FieldTerrain, Season, User } from '../../models';
+import { presentFactorOverride } from '../../presenters/factor-override.presenter';
 import { presentClimate, presentCropping, presentGround } from '../../presenters/seasons.presenter';
 import { fieldSoilSummaries } from '../soils/field-soil-summary';
 import type { GatheredInputs, TerrainFigures } from './gathered-inputs';
@@ -28,10 +29,13 @@ export async function gatherInputs(sequelize: Sequelize, scope: AssessmentScope,
   const grounds = await FieldGround.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, include: [withEditor], transaction });
   const croppings = await FieldCropping.findAll({ where: { fieldId: { [Op.in]: fieldIds }, seasonId: { [Op.in]: seasons.map((s) => s.id) } }, include: [withEditor], transaction });
   const terrain = await FieldTerrain.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, transaction });
+  const overrides = await FieldFactorOverride.findAll({ where: { fieldId: { [Op.in]: fieldIds } }, include: [{ model: User, as: 'setter', attributes: ['name'] }], transaction });
   const soilBy = await fieldSoilSummaries(sequelize, { farmId: scope.farmId, fieldIds }, transaction);
   const groundBy = new Map(grounds.map((g) => [g.fieldId, g]));
   const croppingBy = new Map(croppings.map((c) => [`${c.fieldId}:${c.seasonId}`, c]));
   const terrainBy = new Map(terrain.map((t) => [t.fieldId, t]));
+  const overridesBy = new Map<number, GatheredInputs['overrides']>();
+  for (const o of overrides) overridesBy.set(o.fieldId, { ...overridesBy.get(o.fieldId), [o.factor]: presentFactorOverride(o) });
   const climateShown = climate ? { ...presentClimate(climate), typedBy: editorName(climate as Edited) } : null;
 
   const out: GatheredInputs[] = [];
@@ -58,6 +62,7 @@ export async function gatherInputs(sequelize: Sequelize, scope: AssessmentScope,
         terrain: terrainFigures,
         soil: soilBy.get(f.id)!,
         cropping: cropping ? { ...presentCropping(cropping, s.label), typedBy: editorName(cropping as Edited) } : null,
+        overrides: overridesBy.get(f.id) ?? {},
       });
     }
   }

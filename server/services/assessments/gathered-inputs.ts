@@ -1,6 +1,7 @@
 // What one field's assessment for one season is made from, as gathered for a whole scope at
 // once by gather-inputs.ts. Plain data: the pure steps (build-estimate-input, assess-field) read it.
 import type { Climate, Cropping, Ground } from '../../../shared/schemas/season';
+import type { FactorOverride, OverrideFactor } from '../../../shared/schemas/overrides';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
 
 export type TerrainFigures = { meanSlopePct: number; meanLS: number | null; cellCount: number; cellSizeM?: number; upToDate: boolean; concentratedFlowCells: number };
@@ -16,4 +17,6 @@ export type GatheredInputs = {
   terrain: TerrainFigures | null;
   soil: FieldSoilSummary;
   cropping: Typed<Cropping> | null;
+  /** Figures typed for this field in place of the worked-out R, K, C or P. */
+  overrides: Partial<Record<OverrideFactor, FactorOverride>>;
 };

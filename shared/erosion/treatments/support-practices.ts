@@ -2,7 +2,7 @@
 // through supportPractice, with the slope-length limits beyond which it stops working; terraces
 // also cut the slope length to the terrace interval. The curve number follows the TR-55 row
 // (contoured; contoured and terraced).
-import { supportPractice, type Practice } from '../support-practice';
+import { STRIP_ROTATION_WORDS, supportPractice, type Practice, type StripRotation } from '../support-practice';
 import { ftToM, mToFt } from '../units';
 import { CAUTIONS } from './cautions';
 import { cannot, costLine, isPlanResult, offer, practiceP, round1, type PlanResult, type SiteContext } from './plan';
@@ -22,12 +22,27 @@ const INCLUDES: Record<Practice, Practice[]> = {
   terraces: ['contouring', 'terraces'],
 };
 
+/**
+ * Strips offered in the rotation that changes the farm's cropping least: row crop alternating
+ * with winter grain, the least favourable column of AH-537 table 14. A rotation with meadow
+ * lowers P further; the farmer chooses it on the Cropping tab.
+ */
+const OFFERED_STRIP_ROTATION: StripRotation = 'C';
+
+/** Crops that cover the ground all year: contour tillage and strips of crops do not apply. */
+const PERMANENT_COVER_CROPS = ['pasture', 'hay or meadow'];
+
 function checkPractice(ctx: SiteContext, key: keyof typeof PRACTICE_OF, terraceIntervalM?: number) {
   const p = practiceP(ctx, key);
   if (isPlanResult(p)) return p;
   const practice = PRACTICE_OF[key];
   if (INCLUDES[p.practice].includes(practice)) return cannot(key, `the field already has ${p.practice}`);
-  const sp = supportPractice({ practice, slopePct: ctx.input.slopePct, slopeLengthM: ctx.input.slopeLengthM, terraceIntervalM });
+  const c = ctx.input.c;
+  if (key !== 'terraces' && c.from === 'table' && PERMANENT_COVER_CROPS.includes(c.crop)) {
+    return cannot(key, `${practice} is for tilled crops; ${c.crop} already covers the ground all year`);
+  }
+  const stripRotation = key === 'strip-cropping' ? OFFERED_STRIP_ROTATION : undefined;
+  const sp = supportPractice({ practice, slopePct: ctx.input.slopePct, slopeLengthM: ctx.input.slopeLengthM, terraceIntervalM, ...(stripRotation ? { stripRotation } : {}) });
   if (!sp.ok) return cannot(key, sp.reason);
   if (!sp.value.effective) return cannot(key, sp.value.notes.join('; '));
   return sp.value;
@@ -40,7 +55,7 @@ function layoutPlan(ctx: SiteContext, key: 'contour-farming' | 'strip-cropping')
   return offer({
     key,
     family: 'support-practice',
-    modify: (inp) => ({ ...inp, p: { from: 'practice', practice: sp.practice } }),
+    modify: (inp) => ({ ...inp, p: { from: 'practice', practice: sp.practice, ...(strips ? { stripRotation: OFFERED_STRIP_ROTATION } : {}) } }),
     whys: {
       P: `${sp.practice} at ${round1(ctx.input.slopePct)} % slope: P ${sp.p} (${sp.source}), within its ${sp.maxLengthM} m slope-length limit`,
       'curve number': 'TR-55 row for contoured row crops',
@@ -49,7 +64,9 @@ function layoutPlan(ctx: SiteContext, key: 'contour-farming' | 'strip-cropping')
     costLines: [costLine(ctx.site, strips ? 'strip-layout-per-ha' : 'contour-layout-per-ha', ctx.site.areaHa, 'ha')],
     effects: [
       ...sp.notes,
-      ...(strips ? ["Strip-cropping P depends on the rotation in the strips; the figure here is the table's approximation and may change once the strips' rotation is given."] : []),
+      ...(strips
+        ? [`P is for strips of ${STRIP_ROTATION_WORDS[OFFERED_STRIP_ROTATION]} (AH-537 table 14, rotation ${OFFERED_STRIP_ROTATION}); a rotation with meadow in it (A or B) lowers P further.`]
+        : []),
       'It does not change C, K or the slope length.',
     ],
     cautions: [],
@@ -82,13 +99,8 @@ export function terracesPlan(ctx: SiteContext): PlanResult {
   return offer({
     key,
     family: 'support-practice',
-    modify: (inp) => {
-      const next = { ...inp, p: { from: 'practice' as const, practice: 'terraces' as const, terraceIntervalM: interval } };
-      // The elevation model's LS follows uninterrupted flow paths; terraces cut them at each
-      // terrace, so LS is taken on the terrace interval at the mean slope instead.
-      delete next.lsFromGrid;
-      return next;
-    },
+    // estimate() takes LS on the terrace interval at the mean slope in place of the elevation model's.
+    modify: (inp) => ({ ...inp, p: { from: 'practice' as const, practice: 'terraces' as const, terraceIntervalM: interval } }),
     whys: {
       P: `terraces farmed on the contour at ${round1(slopePct)} %: P ${sp.p} (${sp.source})`,
       'slope length': `slope length becomes the terrace interval, ${round1(interval)} m (${round1(mToFt(interval))} ft), by ${TERRACE_SPACING_RULE.words}${grid ? "; LS on that length at the mean slope replaces the elevation model's LS" : ''}`,

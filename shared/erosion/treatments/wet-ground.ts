@@ -1,6 +1,7 @@
 // Ground with shallow gray or mottled subsoil (a high water table): raised or no-dig beds,
 // designed subsurface drainage (NRCS 606) or permanent cover (NRCS 327) instead of amendments.
 // Offered only on such ground.
+import { ADEQUATELY_DRAINED_MIN_DEPTH_CM } from '../runoff';
 import { CAUTIONS } from './cautions';
 import { cannot, costLine, isPlanResult, offer, tableC, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
@@ -24,6 +25,12 @@ export function raisedBedsPlan(ctx: SiteContext): PlanResult {
   });
 }
 
+/**
+ * The water-table depth a drainage design is asked to hold: the depth from which NEH 630 ch. 7
+ * lets a drained dual group take its first letter. A design deeper or shallower changes it.
+ */
+const DESIGN_DRAINED_DEPTH_CM = ADEQUATELY_DRAINED_MIN_DEPTH_CM;
+
 export function drainagePlan(ctx: SiteContext): PlanResult {
   const no = onlyWet(ctx, 'drainage');
   if (no) return no;
@@ -32,8 +39,8 @@ export function drainagePlan(ctx: SiteContext): PlanResult {
   return offer({
     key: 'drainage',
     family: 'drainage',
-    ...(dual ? { modify: (inp) => ({ ...inp, ...(inp.runoff ? { runoff: { ...inp.runoff, drained: true } } : {}) }) } : {}),
-    whys: dual ? { 'curve number': `soil group ${ro!.hsg} drained takes its first letter's curve number (TR-55 ch. 2)` } : {},
+    ...(dual ? { modify: (inp) => ({ ...inp, ...(inp.runoff ? { runoff: { ...inp.runoff, drained: true, drainedWaterTableDepthCm: DESIGN_DRAINED_DEPTH_CM } } : {}) }) } : {}),
+    whys: dual ? { 'curve number': `soil group ${ro!.hsg} drained to keep the water table ${DESIGN_DRAINED_DEPTH_CM} cm or more below the surface takes its first letter's curve number (NEH 630 ch. 7; TR-55 ch. 2)` } : {},
     quantities: area(ctx),
     costLines: [costLine(ctx.site, 'drainage-per-ha', ctx.site.areaHa, 'ha')],
     effects: [

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   rFromAnnualPrecipitation,
+  rFromAnnualPrecipitationChecked,
   rFromBreakpointRecord,
   rFromValue,
   stormsFromBreakpoints,
@@ -25,6 +26,22 @@ describe('R from mean annual precipitation (Renard & Freimund 1994) [memory]', (
       expect(r).toBeGreaterThan(last);
       last = r;
     }
+  });
+  // The fitted range (about 200–1700 mm of the conterminous US stations) is recalled, not re-read in the paper.
+  it.each([200, 850, 1000, 1700])('finds %s mm inside the range the regression was fitted to [memory]', (mm) => {
+    expect(rFromAnnualPrecipitationChecked(mm)).toEqual({ r: rFromAnnualPrecipitation(mm), withinFittedRange: true });
+  });
+  it.each([
+    [150, 'below'],
+    [1800, 'above'],
+    [4000, 'above'],
+  ])('warns at %s mm, %s the fitted range, naming winter-rain climates and the local R [memory]', (mm, side) => {
+    const c = rFromAnnualPrecipitationChecked(mm);
+    expect(c.r).toBe(rFromAnnualPrecipitation(mm));
+    expect(c.withinFittedRange).toBe(false);
+    expect(c.warning).toMatch(new RegExp(`${side} the 200–1700 mm`));
+    expect(c.warning).toMatch(/winter-rain/);
+    expect(c.warning).toMatch(/local R/);
   });
   it('converts a typed US R to SI (17.02, AH-703)', () => {
     expect(rFromValue(100, 'us')).toBeCloseTo(1702, 10);

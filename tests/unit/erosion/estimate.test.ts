@@ -29,6 +29,40 @@ describe('estimate(): a whole estimate from the shared schema', () => {
     const r = estimate({ ...base, r: { from: 'precipitation', annualPrecipitationMm: 1000 } });
     expect(r).toMatchObject({ ok: true, factors: { r: { value: 3473.8, flag: 'memory' } } });
   });
+  it('warns, and says why, when the precipitation lies outside the fit (Renard & Freimund 1994; range recalled)', () => {
+    const inside = estimate({ ...base, r: { from: 'precipitation', annualPrecipitationMm: 1000 } });
+    const outside = estimate({ ...base, r: { from: 'precipitation', annualPrecipitationMm: 2500 } });
+    if (!inside.ok || !outside.ok) throw new Error('estimate failed');
+    expect(inside.warnings.join(' ')).toMatch(/winter-rain/);
+    expect(outside.warnings.join(' ')).toMatch(/above the 200–1700 mm.*several times off.*winter-rain.*local R/);
+    expect(outside.factors.r.method).toMatch(/outside the range/);
+  });
+  it('gives strip cropping the P of its rotation column (AH-537, table 14; values recalled)', () => {
+    const pOf = (stripRotation: 'A' | 'B' | 'C') => {
+      const r = estimate({ ...base, p: { from: 'practice', practice: 'strip cropping', stripRotation } });
+      if (!r.ok) throw new Error(r.reason);
+      return r.factors.p.value;
+    };
+    // 6 %: the 6–8 % row of table 14
+    expect([pOf('A'), pOf('B'), pOf('C')]).toEqual([0.25, 0.38, 0.5]);
+  });
+  it('refuses strip cropping without its rotation, naming the field', () => {
+    expect(estimate({ ...base, p: { from: 'practice', practice: 'strip cropping' } })).toMatchObject({ ok: false, field: 'p.stripRotation' });
+  });
+  it('warns when strips are wider than table 14 allows (AH-537: 100 ft at 6–8 %)', () => {
+    const r = estimate({ ...base, p: { from: 'practice', practice: 'strip cropping', stripRotation: 'A', stripWidthM: 40 } });
+    expect(r.ok && r.warnings.join(' ')).toMatch(/wider than the 30\.5 m/);
+  });
+  it('takes D for a drained dual-group soil without its water-table depth, and says why (NEH 630 ch. 7)', () => {
+    const runoff = { rainfallMm: 75, hsg: 'B/D', cover: 'row crops', treatment: 'straight row', condition: 'good', drained: true } as const;
+    const noDepth = estimate({ ...base, runoff });
+    const deep = estimate({ ...base, runoff: { ...runoff, drainedWaterTableDepthCm: 90 } });
+    if (!noDepth.ok || !deep.ok) throw new Error('estimate failed');
+    expect(noDepth.runoff?.cn.value).toBe(89); // TR-55 Table 2-2b, row crops straight row good, D
+    expect(noDepth.warnings.join(' ')).toMatch(/taken as D although the field is drained: the depth .* is not given/);
+    expect(deep.runoff?.cn.value).toBe(78); // same row, B
+    expect(deep.warnings.join(' ')).not.toMatch(/taken as D/);
+  });
   it('takes K from texture (Williams) and names the class', () => {
     const r = estimate({ ...base, k: { from: 'texture', sandPct: 40, siltPct: 40, clayPct: 20, organicMatterPct: 1.5 * 1.724 } });
     if (!r.ok) throw new Error(r.reason);
@@ -95,5 +129,18 @@ describe('estimate(): a whole estimate from the shared schema', () => {
     const p = EstimateInput.safeParse({ ...base, slopePct: 150 });
     expect(p.success).toBe(false);
     expect(p.error?.issues[0].message).toBe('slopePct must be at most 100 %');
+  });
+});
+
+describe('estimate(): terraces with an elevation model', () => {
+  it('takes LS on the terrace interval, not the elevation model’s uninterrupted paths (AH-537: slope length = terrace interval)', () => {
+    const input = { ...base, slopePct: 6, slopeLengthM: 120, lsFromGrid: { value: 3.2, source: 'elevation model', method: 'mean of cells' } };
+    const plain = estimate(input);
+    const terraced = estimate({ ...input, p: { from: 'practice', practice: 'terraces', terraceIntervalM: ftToM(100) } });
+    if (!plain.ok || !terraced.ok) throw new Error('estimate failed');
+    expect(plain.factors.ls.value).toBe(3.2);
+    // AH-703 LS table: 6 %, 100 ft, moderate ratio → 0.78
+    expect(terraced.factors.ls.value).toBeCloseTo(0.78, 2);
+    expect(terraced.warnings.join(' ')).toMatch(/Terraces cut the slope/);
   });
 });

@@ -235,3 +235,20 @@ describe('example prices', () => {
     expect(EXAMPLE_PRICES.source).toMatch(/example values — replace with your local figures/);
   });
 });
+
+describe('strips and contouring as treatments', () => {
+  it('offers strips in the rotation of row crop and winter grain: AH-537 table 14, rotation C (recalled values)', () => {
+    // 7 % slope, 60 m (within the 400 ft strip limit): table 14 rotation C at 6–8 % gives P 0.50.
+    const ft = options(demoLikeSite({ input: { ...demoLikeSite().input, slopePct: 7, slopeLengthM: 60 } }));
+    const strips = ft.options.find((o) => o.id === 'strip-cropping')!;
+    expect(strips.changes).toContainEqual(expect.objectContaining({ factor: 'P', from: 1, to: 0.5 }));
+    expect(strips.effects.join(' ')).toMatch(/rotation C/);
+  });
+
+  it('offers no contouring or strips on pasture or hay, which are not tilled', () => {
+    const base = demoLikeSite().input;
+    const ft = options(demoLikeSite({ input: { ...base, slopePct: 7, slopeLengthM: 60, c: { from: 'table', crop: 'pasture', groundCoverPct: 60 } } }));
+    expect(ft.options.some((o) => o.treatments.includes('contour-farming') || o.treatments.includes('strip-cropping'))).toBe(false);
+    expect(ft.unavailable.find((u) => u.key === 'strip-cropping')!.reason).toMatch(/pasture already covers the ground/);
+  });
+});

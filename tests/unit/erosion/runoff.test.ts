@@ -5,6 +5,7 @@ import {
   curveNumberFromTable,
   curveNumberRunoff,
   DEFAULT_CN_TABLE,
+  effectiveGroup,
   inToMm,
   mmToIn,
   runoffVolumeM3,
@@ -78,11 +79,25 @@ describe('curve numbers from TR-55 Tables 2-2b and 2-2c', () => {
       expect(row.cn.A).toBeLessThanOrEqual(row.cn.D);
     }
   });
-  it('takes the first letter of a dual group when drained and D when not (TR-55 ch. 2)', () => {
-    const drained = curveNumberFromTable({ cover: 'row crops', treatment: 'straight row', condition: 'good', hsg: 'B/D', drained: true });
-    const undrained = curveNumberFromTable({ cover: 'row crops', treatment: 'straight row', condition: 'good', hsg: 'B/D' });
-    expect(drained.ok && drained.value.cn).toBe(78);
-    expect(undrained.ok && undrained.value.cn).toBe(89);
+  // NEH 630 ch. 7: dual groups A/D, B/D, C/D — the first letter for a soil adequately drained (seasonal
+  // high water table kept at least 60 cm down [memory for the wording]), D otherwise.
+  const rowCrops = { cover: 'row crops', treatment: 'straight row', condition: 'good', hsg: 'B/D' } as const;
+  it('takes the first letter of a dual group when drained to 60 cm or deeper (NEH 630 ch. 7; CN from TR-55 Table 2-2b)', () => {
+    const deep = curveNumberFromTable({ ...rowCrops, drained: true, drainedWaterTableDepthCm: 90 });
+    const atLimit = curveNumberFromTable({ ...rowCrops, drained: true, drainedWaterTableDepthCm: 60 });
+    expect(deep.ok && deep.value).toMatchObject({ cn: 78, group: 'B' });
+    expect(atLimit.ok && atLimit.value).toMatchObject({ cn: 78, group: 'B' });
+  });
+  it('takes D for a dual group that is undrained, drained to under 60 cm, or drained to a depth not given (NEH 630 ch. 7)', () => {
+    for (const drainage of [{}, { drained: true, drainedWaterTableDepthCm: 59 }, { drained: true }, { drained: false, drainedWaterTableDepthCm: 90 }]) {
+      const r = curveNumberFromTable({ ...rowCrops, ...drainage });
+      expect(r.ok && r.value, JSON.stringify(drainage)).toMatchObject({ cn: 89, group: 'D' });
+    }
+  });
+  it('leaves a single group alone whatever the drainage (NEH 630 ch. 7)', () => {
+    expect(effectiveGroup('C', { drained: true })).toBe('C');
+    expect(effectiveGroup('A', {})).toBe('A');
+    expect(effectiveGroup('C/D', { drained: true, drainedWaterTableDepthCm: 75 })).toBe('C');
   });
   it('names the choices for an unknown condition', () => {
     const r = curveNumberFromTable({ cover: 'pasture', condition: 'excellent', hsg: 'B' });

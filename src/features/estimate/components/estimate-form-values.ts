@@ -13,7 +13,7 @@ import {
   type Practice,
   type Tillage,
 } from '../../../../shared/schemas/estimate';
-import { curveNumberChoices, DEFAULT_COVER_TABLE } from '../../../../shared/erosion';
+import { curveNumberChoices, DEFAULT_COVER_TABLE, type StripRotation } from '../../../../shared/erosion';
 import type { z } from 'zod';
 
 type UnitsChoice = 'si' | 'us';
@@ -45,7 +45,7 @@ export type EstimateFormValues = {
     coverCrop: boolean;
     groundCoverPct?: number;
   };
-  p: { from: 'value' | 'practice'; value?: number; practice: z.infer<typeof Practice>; terraceIntervalM?: number };
+  p: { from: 'value' | 'practice'; value?: number; practice: z.infer<typeof Practice>; terraceIntervalM?: number; stripRotation: StripRotation; stripWidthM?: number };
   tTonPerAcYr?: number;
   areaHa?: number;
   runoffOn: boolean;
@@ -58,6 +58,7 @@ export type EstimateFormValues = {
     /** Index into CN_CHOICES. */
     cnRow: string;
     drained: boolean;
+    drainedWaterTableDepthCm?: number;
     antecedent: 'I' | 'II' | 'III';
   };
 };
@@ -99,7 +100,7 @@ export const DEFAULT_VALUES: EstimateFormValues = {
   slopeLengthM: 90,
   rillRatio: 'moderate',
   c: { from: 'table', value: 0.2, crop: 'corn', tillage: 'chisel or mulch-till', residuePct: undefined, coverCrop: false, groundCoverPct: 80 },
-  p: { from: 'practice', value: 1, practice: 'none', terraceIntervalM: 40 },
+  p: { from: 'practice', value: 1, practice: 'none', terraceIntervalM: 40, stripRotation: 'B', stripWidthM: undefined },
   tTonPerAcYr: undefined,
   areaHa: 12,
   runoffOn: true,
@@ -153,7 +154,12 @@ export function toEstimateInput(v: EstimateFormValues): EstimateInput {
   const p: EstimateInput['p'] =
     v.p.from === 'value'
       ? { from: 'value', value: v.p.value as number }
-      : { from: 'practice', practice: v.p.practice, ...(v.p.practice === 'terraces' ? { terraceIntervalM: v.p.terraceIntervalM } : {}) };
+      : {
+          from: 'practice',
+          practice: v.p.practice,
+          ...(v.p.practice === 'terraces' ? { terraceIntervalM: v.p.terraceIntervalM } : {}),
+          ...(v.p.practice === 'strip cropping' ? { stripRotation: v.p.stripRotation, ...(v.p.stripWidthM !== undefined ? { stripWidthM: v.p.stripWidthM } : {}) } : {}),
+        };
 
   let runoff: EstimateInput['runoff'];
   if (v.runoffOn) {
@@ -168,6 +174,7 @@ export function toEstimateInput(v: EstimateFormValues): EstimateInput {
         condition: row.condition as 'poor' | 'fair' | 'good' | null,
         ...(ro.hsg ? { hsg: ro.hsg } : {}),
         drained: ro.drained,
+        ...(ro.drained && ro.drainedWaterTableDepthCm !== undefined ? { drainedWaterTableDepthCm: ro.drainedWaterTableDepthCm } : {}),
         antecedent: ro.antecedent,
       };
     }
@@ -225,6 +232,9 @@ const FIELD_LABELS: Record<string, string> = {
   'c.groundCoverPct': 'Ground cover',
   'p.value': 'P',
   'p.terraceIntervalM': 'Distance between terraces',
+  'p.stripRotation': 'Rotation in the strips',
+  'p.stripWidthM': 'Strip width',
+  'runoff.drainedWaterTableDepthCm': 'Water-table depth kept by the drains',
   tTonPerAcYr: 'Soil-loss tolerance T',
   areaHa: 'Field area',
   'runoff.rainfallMm': 'Storm rainfall',

@@ -1,6 +1,8 @@
 // Every factor of the estimate: its value and unit (SI, or US where the units differ), where
 // it came from and how it was worked out; figures to check against the handbook and rules of
-// thumb are marked in plain words.
+// thumb are marked in plain words, and a figure typed for the field in place of the worked-out
+// one says so with its note. A screen may add a control per factor (the field's override).
+import type { ReactNode } from 'react';
 import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
 import { formatFigure } from './format-figure';
 
@@ -30,8 +32,17 @@ export function FlagBadge({ flag }: { flag: Provenance['flag'] }) {
   );
 }
 
-export function FactorTable({ factors, units, extra }: { factors: EstimateSuccess['factors']; units: 'si' | 'us'; extra?: { name: string; p: Provenance }[] }) {
-  const rows = [...FACTORS.map((f) => ({ name: f.name, p: factors[f.key] })), ...(extra ?? [])];
+type FactorKey = keyof EstimateSuccess['factors'];
+type Props = {
+  factors: EstimateSuccess['factors'];
+  units: 'si' | 'us';
+  extra?: { name: string; p: Provenance }[];
+  /** A control beside a factor (e.g. to override it for a field); rows without one get none. */
+  control?: (key: FactorKey) => ReactNode;
+};
+
+export function FactorTable({ factors, units, extra, control }: Props) {
+  const rows: { name: string; p: Provenance; key?: FactorKey }[] = [...FACTORS.map((f) => ({ name: f.name, p: factors[f.key], key: f.key })), ...(extra ?? [])];
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-left text-sm" data-testid="factor-table">
@@ -43,10 +54,15 @@ export function FactorTable({ factors, units, extra }: { factors: EstimateSucces
             <th scope="col" className="py-1 pr-2 font-medium">Unit</th>
             <th scope="col" className="py-1 pr-2 font-medium">Source</th>
             <th scope="col" className="py-1 font-medium">Method</th>
+            {control ? (
+              <th scope="col" className="py-1 pl-2 font-medium">
+                <span className="sr-only">Change</span>
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody>
-          {rows.map(({ name, p }) => {
+          {rows.map(({ name, p, key }) => {
             const shown = units === 'us' && p.us ? p.us : { value: p.value, unit: p.unit };
             return (
               <tr key={name} className="border-b border-paper-edge align-top">
@@ -54,10 +70,20 @@ export function FactorTable({ factors, units, extra }: { factors: EstimateSucces
                 <td className="num py-1.5 pr-2 text-right whitespace-nowrap">{formatFigure(shown.value)}</td>
                 <td className="py-1.5 pr-2 text-xs text-ink-soft">{shown.unit || 'no unit'}</td>
                 <td className="py-1.5 pr-2">
-                  {p.source}
-                  <FlagBadge flag={p.flag} />
+                  {p.override ? (
+                    <span data-testid={`override-${key}`} className="font-medium text-clay-dark">
+                      override: {p.override.note}
+                      {p.override.by ? `, by ${p.override.by}` : ''}
+                    </span>
+                  ) : (
+                    <>
+                      {p.source}
+                      <FlagBadge flag={p.flag} />
+                    </>
+                  )}
                 </td>
-                <td className="py-1.5 text-xs text-ink-soft">{p.method}</td>
+                <td className="py-1.5 text-xs text-ink-soft">{p.override ? 'typed for this field in place of the worked-out figure' : p.method}</td>
+                {control ? <td className="py-1.5 pl-2 align-top">{key ? control(key) : null}</td> : null}
               </tr>
             );
           })}

@@ -2,7 +2,7 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import { ChoiceGroup } from '../../../components/ui/choice-group';
 import { SelectField } from '../../../components/ui/select-field';
-import { tonPerAcToTPerHa } from '../../../../shared/erosion';
+import { STRIP_ROTATION_WORDS, STRIP_ROTATIONS, tonPerAcToTPerHa } from '../../../../shared/erosion';
 import type { EstimateFormValues } from './estimate-form-values';
 import { FormGroup, NumField } from './form-bits';
 
@@ -32,6 +32,18 @@ export function PracticeSection() {
           </SelectField>
           {practice === 'terraces' ? (
             <NumField name="p.terraceIntervalM" label="Distance between terraces" unit="m" testId="input-p-terrace-interval" />
+          ) : null}
+          {practice === 'strip cropping' ? (
+            <>
+              <SelectField label="Rotation in the strips" data-testid="input-p-strip-rotation" {...register('p.stripRotation')}>
+                {STRIP_ROTATIONS.map((r) => (
+                  <option key={r} value={r}>
+                    {STRIP_ROTATION_WORDS[r]}
+                  </option>
+                ))}
+              </SelectField>
+              <NumField name="p.stripWidthM" label="Strip width" unit="m" optional hint="Checked against the widest strip the P table allows on this slope." testId="input-p-strip-width" />
+            </>
           ) : null}
         </>
       )}

@@ -2,7 +2,7 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import { ChoiceGroup } from '../../../components/ui/choice-group';
 import { SelectField } from '../../../components/ui/select-field';
-import { R_UNIT, R_UNIT_US } from '../../../../shared/erosion';
+import { R_PRECIPITATION_HINT, R_UNIT, R_UNIT_US } from '../../../../shared/erosion';
 import type { EstimateFormValues } from './estimate-form-values';
 import { FormGroup, NumField } from './form-bits';
 
@@ -34,7 +34,7 @@ export function RainSection() {
           label="Mean annual precipitation"
           unit="mm"
           testId="input-r-precip"
-          hint="A rough regional fit: use the published local R when there is one."
+          hint={R_PRECIPITATION_HINT}
         />
       )}
     </FormGroup>

@@ -14,6 +14,7 @@ export function RunoffSection({ kFromSoil }: { kFromSoil: boolean }) {
   const on = useWatch({ control, name: 'runoffOn' });
   const cnFrom = useWatch({ control, name: 'runoff.cnFrom' });
   const hsg = useWatch({ control, name: 'runoff.hsg' });
+  const drained = useWatch({ control, name: 'runoff.drained' });
   return (
     <FormGroup title="Runoff from a design storm" testId="estimate-runoff">
       <label className="flex items-center gap-2 text-sm">
@@ -57,10 +58,22 @@ export function RunoffSection({ kFromSoil }: { kFromSoil: boolean }) {
                 ))}
               </SelectField>
               {hsg.includes('/') ? (
-                <label className="flex items-center gap-2 text-sm">
-                  <input type="checkbox" className="h-4 w-4 accent-clay" {...register('runoff.drained')} />
-                  The field is drained (tile or ditches)
-                </label>
+                <>
+                  <label className="flex items-center gap-2 text-sm">
+                    <input type="checkbox" className="h-4 w-4 accent-clay" {...register('runoff.drained')} />
+                    The field is drained (tile or ditches)
+                  </label>
+                  {drained ? (
+                    <NumField
+                      name="runoff.drainedWaterTableDepthCm"
+                      label="Depth the drains keep the water table at"
+                      unit="cm"
+                      optional
+                      hint="The first letter of the group counts only from 60 cm down; without a depth the group is taken as D."
+                      testId="input-runoff-drained-depth"
+                    />
+                  ) : null}
+                </>
               ) : null}
               <SelectField label="Cover and treatment" data-testid="input-runoff-cover" {...register('runoff.cnRow')}>
                 {CN_CHOICES.map((c, i) => (

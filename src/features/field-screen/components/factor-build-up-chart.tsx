@@ -3,7 +3,7 @@
 // times P for its practice, which is A; T is drawn across as the line not to pass.
 import { Bar, BarChart, CartesianGrid, Cell, LabelList, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { tPerHaToTonPerAc } from '../../../../shared/erosion/units';
-import type { EstimateSuccess } from '../../../../shared/schemas/estimate';
+import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
 import type { Units } from '../../../../shared/schemas/auth';
 import { formatFigure } from '../../estimate/components/format-figure';
 
@@ -28,11 +28,13 @@ export function FactorBuildUpChart({ estimate, riskColour, units }: { estimate: 
   const unit = units === 'ac' ? 'US t/ac/yr' : 't/ha/yr';
   // AH-703 eq. 1-1: A = R·K·LS·C·P (SI R and K give t/ha/yr).
   const unitPlot = f.r.value * f.k.value;
+  // A figure typed for the field says so here too; its note is in the factor table.
+  const shown = (name: 'R' | 'K' | 'C' | 'P', p: Provenance) => `${name} ${formatFigure(p.value)}${p.override ? ' (override)' : ''}`;
   const steps: Step[] = [
-    { step: 'Bare unit plot: R × K', value: conv(unitPlot), factor: `R ${formatFigure(f.r.value)} × K ${formatFigure(f.k.value)}` },
+    { step: 'Bare unit plot: R × K', value: conv(unitPlot), factor: `${shown('R', f.r)} × ${shown('K', f.k)}` },
     { step: '× LS, this slope', value: conv(unitPlot * f.ls.value), factor: `LS ${formatFigure(f.ls.value)}` },
-    { step: '× C, this cover', value: conv(unitPlot * f.ls.value * f.c.value), factor: `C ${formatFigure(f.c.value)}` },
-    { step: '× P, this practice = A', value: conv(unitPlot * f.ls.value * f.c.value * f.p.value), factor: `P ${formatFigure(f.p.value)}` },
+    { step: '× C, this cover', value: conv(unitPlot * f.ls.value * f.c.value), factor: shown('C', f.c) },
+    { step: '× P, this practice = A', value: conv(unitPlot * f.ls.value * f.c.value * f.p.value), factor: shown('P', f.p) },
   ];
   const t = conv(f.t.value);
   const { max, ticks } = niceAxis(Math.max(t, ...steps.map((s) => s.value)) * 1.05);

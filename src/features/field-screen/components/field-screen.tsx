@@ -115,7 +115,7 @@ export function FieldScreen({ farm, fieldId, units }: Props) {
           ) : tab === 'cropping' ? (
             <CroppingPanel fieldId={f.id} season={season!} canEdit={canEdit} units={units} />
           ) : (
-            <RiskTab farmId={farm.id} fieldId={f.id} season={season!} units={units} onOpenTab={setTab} />
+            <RiskTab farmId={farm.id} fieldId={f.id} season={season!} units={units} canEdit={canEdit} onOpenTab={setTab} />
           )}
         </div>
       </main>

@@ -13,6 +13,9 @@ import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } fro
 import { FactorTable } from '../../estimate/components/factor-table';
 import { formatFigure } from '../../estimate/components/format-figure';
 import { useAssessment } from '../../seasons/api/get-assessment';
+import { useFactorOverrides } from '../../seasons/api/get-factor-overrides';
+import { OVERRIDE_FACTORS, type OverrideFactor } from '../../../../shared/schemas/overrides';
+import { FactorOverrideControl } from './factor-override-control';
 import { TERRACE_CAUTION } from '../../seasons/components/cropping-form';
 import { AssessmentInputs } from './assessment-inputs';
 import { FactorBuildUpChart } from './factor-build-up-chart';
@@ -103,10 +106,13 @@ function ProblemClay({ a }: { a: FieldAssessment }) {
   );
 }
 
-type Props = { farmId: number; fieldId: number; season: string; units: Units; onOpenTab?: (tab: FieldTab) => void };
+type Props = { farmId: number; fieldId: number; season: string; units: Units; canEdit: boolean; onOpenTab?: (tab: FieldTab) => void };
 
-export function RiskTab({ farmId, fieldId, season, units, onOpenTab }: Props) {
+const isOverridable = (key: string): key is OverrideFactor => (OVERRIDE_FACTORS as readonly string[]).includes(key);
+
+export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: Props) {
   const q = useAssessment(fieldId, season);
+  const overrides = useFactorOverrides(fieldId);
   if (q.isPending) return <p className="text-sm text-ink-soft">Working out the risk…</p>;
   if (q.isError) return <Notice tone="error" title="The risk could not be worked out">{q.error.message}</Notice>;
   const a = q.data;
@@ -167,7 +173,21 @@ export function RiskTab({ farmId, fieldId, season, units, onOpenTab }: Props) {
       <Gaps gaps={a.gaps} farmId={farmId} onOpenTab={onOpenTab} />
       <ProblemClay a={a} />
       {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
-      {e ? <FactorTable factors={e.factors} units={units === 'ac' ? 'us' : 'si'} extra={ro ? [{ name: 'CN, curve number', p: ro.cn }] : undefined} /> : null}
+      {e ? (
+        <FactorTable
+          factors={e.factors}
+          units={units === 'ac' ? 'us' : 'si'}
+          extra={ro ? [{ name: 'CN, curve number', p: ro.cn }] : undefined}
+          control={
+            canEdit
+              ? (key) =>
+                  isOverridable(key) ? (
+                    <FactorOverrideControl fieldId={fieldId} factor={key} current={overrides.data?.find((o) => o.factor === key)} />
+                  ) : null
+              : undefined
+          }
+        />
+      ) : null}
       <AssessmentInputs inputs={a.inputs} />
 
       {e?.practice && e.practice.notes.length > 0 ? (

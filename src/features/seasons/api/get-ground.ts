@@ -2,7 +2,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 
-export type GroundRecord = { slopePct: number | null; slopeLengthM: number | null; version: number | null };
+export type GroundRecord = { slopePct: number | null; slopeLengthM: number | null; drained: boolean; drainedWaterTableDepthCm: number | null; version: number | null };
 
 export const getGround = (fieldId: number) => api.get<GroundRecord>(`/api/fields/${fieldId}/ground`);
 

@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { ChoiceGroup } from '../../../components/ui/choice-group';
 import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
+import { R_PRECIPITATION_HINT } from '../../../../shared/erosion/erosivity';
 import { mmToIn } from '../../../../shared/erosion/units';
 import { ClimateUpdate, type Climate } from '../../../../shared/schemas/season';
 import type { Units } from '../../../../shared/schemas/auth';
@@ -103,7 +104,7 @@ function ClimateForm({ climate, units, onSave, saving }: { climate: Climate | nu
           inputMode="decimal"
           className="num"
           error={err('annualPrecipitationMm')}
-          hint="A rough regional fit: use the local R where it is published."
+          hint={R_PRECIPITATION_HINT}
           data-testid="climate-precipitation"
           {...register('annualPrecipitationMm', num)}
         />

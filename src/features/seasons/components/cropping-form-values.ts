@@ -6,6 +6,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { Resolver } from 'react-hook-form';
 import type { z } from 'zod';
+import type { StripRotation } from '../../../../shared/erosion';
 import { Crop, Practice, Tillage } from '../../../../shared/schemas/estimate';
 import { CroppingUpdate, type Cropping } from '../../../../shared/schemas/season';
 
@@ -36,6 +37,8 @@ export type CroppingFormValues = {
   coverCrop: { species: string; seededOn: string; terminatedOn: string };
   practice: PracticeName;
   terraceIntervalM: number | null;
+  stripRotation: StripRotation | '';
+  stripWidthM: number | null;
 };
 
 export type CroppingPayload = z.output<typeof CroppingUpdate>;
@@ -54,6 +57,8 @@ export function formValuesOf(c: Cropping | null): CroppingFormValues {
     },
     practice: c?.practice ?? 'none',
     terraceIntervalM: c?.terraceIntervalM ?? null,
+    stripRotation: c?.stripRotation ?? '',
+    stripWidthM: c?.stripWidthM ?? null,
   };
 }
 
@@ -71,6 +76,8 @@ export function toCroppingUpdate(v: CroppingFormValues, season: string, version:
       : null,
     practice: v.practice,
     terraceIntervalM: v.practice === 'terraces' ? v.terraceIntervalM : null,
+    stripRotation: v.practice === 'strip cropping' ? v.stripRotation || null : null,
+    stripWidthM: v.practice === 'strip cropping' ? v.stripWidthM : null,
   };
 }
 

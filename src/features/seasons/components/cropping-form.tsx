@@ -8,6 +8,7 @@ import { Notice } from '../../../components/ui/notice';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { formatLength } from '../../../lib/units';
+import { STRIP_ROTATION_WORDS, STRIP_ROTATIONS } from '../../../../shared/erosion';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { Cropping } from '../../../../shared/schemas/season';
 import { useCropping } from '../api/get-cropping';
@@ -62,6 +63,8 @@ function CroppingSummary({ cropping, units }: { cropping: Cropping; units: Units
       <dd className="num">
         {PRACTICE_LABELS[cropping.practice]}
         {cropping.practice === 'terraces' && cropping.terraceIntervalM !== null ? `, ${formatLength(cropping.terraceIntervalM, units)} apart` : ''}
+        {cropping.practice === 'strip cropping' && cropping.stripRotation ? `: ${STRIP_ROTATION_WORDS[cropping.stripRotation]}` : ''}
+        {cropping.practice === 'strip cropping' && cropping.stripWidthM !== null ? `, strips ${formatLength(cropping.stripWidthM, units)} wide` : ''}
       </dd>
     </dl>
   );
@@ -177,6 +180,33 @@ function CroppingEditor({ cropping, season, saving, onSave }: FormProps) {
               </option>
             ))}
           </SelectField>
+          {practice === 'strip cropping' ? (
+            <>
+              <SelectField
+                label="What the strips grow, year by year"
+                className="sm:col-span-2"
+                error={plainMessage(e.stripRotation?.message)}
+                data-testid="cropping-strip-rotation"
+                {...register('stripRotation')}
+              >
+                <option value="">Pick one</option>
+                {STRIP_ROTATIONS.map((r) => (
+                  <option key={r} value={r}>
+                    {STRIP_ROTATION_WORDS[r]}
+                  </option>
+                ))}
+              </SelectField>
+              <TextField
+                label="Width of each strip (m), optional"
+                inputMode="decimal"
+                className="num"
+                hint="Checked against the widest strip the P table allows on this slope."
+                error={plainMessage(e.stripWidthM?.message)}
+                data-testid="cropping-strip-width"
+                {...register('stripWidthM', num)}
+              />
+            </>
+          ) : null}
           {practice === 'terraces' ? (
             <TextField
               label="Distance between terraces (m)"

@@ -1,8 +1,9 @@
-// Typed ground of a field: slope % and slope length m. Without an elevation model both are
-// needed; with one, the model gives the slope and LS, and the typed length only limits what a
-// support practice can do. Farmers and advisors edit (version read; 409 shows theirs).
+// Typed ground of a field: slope % and slope length m, and whether it is drained and how deep
+// the drains keep the water table. Without an elevation model slope and length are needed; with
+// one, the model gives the slope and LS, and the typed length only limits what a support
+// practice can do. Farmers and advisors edit (version read; 409 shows theirs).
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
@@ -21,15 +22,18 @@ const num = { setValueAs: toNumberOrNull };
 function GroundEditor({ ground, hasTerrain, saving, onSave }: { ground: GroundRecord; hasTerrain: boolean; saving: boolean; onSave: (v: Values) => void }) {
   const form = useForm<Values, unknown, z.output<typeof GroundUpdate>>({
     resolver: zodResolver(GroundUpdate),
-    defaultValues: { slopePct: ground.slopePct, slopeLengthM: ground.slopeLengthM },
+    defaultValues: { slopePct: ground.slopePct, slopeLengthM: ground.slopeLengthM, drained: ground.drained, drainedWaterTableDepthCm: ground.drainedWaterTableDepthCm },
   });
-  const { register, handleSubmit, formState } = form;
+  const { register, handleSubmit, formState, control } = form;
+  const drained = useWatch({ control, name: 'drained' });
   return (
     <form
       className="flex flex-col gap-3"
       data-testid="ground-form"
       noValidate
-      onSubmit={handleSubmit((v) => onSave({ ...v, ...(ground.version !== null ? { version: ground.version } : {}) }))}
+      onSubmit={handleSubmit((v) =>
+        onSave({ ...v, drainedWaterTableDepthCm: v.drained ? v.drainedWaterTableDepthCm : null, ...(ground.version !== null ? { version: ground.version } : {}) }),
+      )}
     >
       <div className="grid gap-3 sm:grid-cols-2">
         {hasTerrain ? null : (
@@ -57,8 +61,23 @@ function GroundEditor({ ground, hasTerrain, saving, onSave }: { ground: GroundRe
           {...register('slopeLengthM', num)}
         />
       </div>
+      <label className="flex items-center gap-2 text-sm font-medium">
+        <input type="checkbox" data-testid="ground-drained" {...register('drained')} />
+        The field is drained (tile or ditches)
+      </label>
+      {drained ? (
+        <TextField
+          label="Depth the drains keep the water table at (cm), optional"
+          inputMode="decimal"
+          className="num max-w-sm"
+          hint="On a soil with a dual group (A/D, B/D, C/D) the first letter counts only from 60 cm down; without a depth the group is taken as D."
+          error={plainMessage(formState.errors.drainedWaterTableDepthCm?.message)}
+          data-testid="ground-drained-depth"
+          {...register('drainedWaterTableDepthCm', num)}
+        />
+      ) : null}
       <Button type="submit" size="sm" className="self-start" disabled={saving} data-testid="ground-save">
-        {saving ? 'Saving…' : 'Save the slope'}
+        {saving ? 'Saving…' : 'Save the ground'}
       </Button>
     </form>
   );
@@ -76,7 +95,7 @@ export function GroundPanel({ fieldId, hasTerrain, canEdit, units }: Props) {
   return (
     <section className="flex flex-col gap-3" data-testid="ground-panel" aria-labelledby="ground-typed-heading">
       <h3 id="ground-typed-heading" className="text-base font-semibold">
-        {hasTerrain ? 'Typed slope length' : 'Typed slope'}
+        {hasTerrain ? 'Typed slope length and drainage' : 'Typed slope and drainage'}
       </h3>
       {!hasTerrain && (g.slopePct === null || g.slopeLengthM === null) ? (
         <Notice tone="caution" testId="ground-missing">
@@ -95,6 +114,10 @@ export function GroundPanel({ fieldId, hasTerrain, canEdit, units }: Props) {
           ) : null}
           <dt className="text-ink-soft">Slope length</dt>
           <dd className="num">{g.slopeLengthM === null ? 'not given' : formatLength(g.slopeLengthM, units)}</dd>
+          <dt className="text-ink-soft">Drainage</dt>
+          <dd className="num">
+            {!g.drained ? 'not drained' : g.drainedWaterTableDepthCm === null ? 'drained, water-table depth not given' : `drained, water table kept at ${g.drainedWaterTableDepthCm} cm`}
+          </dd>
         </dl>
       )}
       {update.isError ? (
@@ -104,7 +127,7 @@ export function GroundPanel({ fieldId, hasTerrain, canEdit, units }: Props) {
       ) : null}
       {update.isSuccess && !update.isPending ? (
         <p role="status" className="text-sm text-ink-soft">
-          Saved. The Risk tab now uses this slope.
+          Saved. The Risk tab now uses this slope and drainage.
         </p>
       ) : null}
     </section>
