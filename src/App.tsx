@@ -37,6 +37,10 @@ const router = createBrowserRouter([
         lazy: async () => ({ Component: (await import('./pages/board-page')).BoardPage }),
       },
       {
+        path: paths.budget.path,
+        lazy: async () => ({ Component: (await import('./pages/budget-page')).BudgetPage }),
+      },
+      {
         path: paths.clientBoard.path,
         lazy: async () => ({ Component: (await import('./pages/board-page')).ClientBoardPage }),
       },

@@ -17,6 +17,8 @@ export function gypsumQuantity(args: { areaHa: number; rateTPerHa?: number; truc
 
 /** ESP at and above which a soil is sodic (USDA Handbook 60). */
 export const SODIC_ESP_PCT = 15;
+/** Gypsum in a typical agricultural gypsum product, % (example value — replace with the product's label). */
+export const GYPSUM_EXAMPLE_PURITY_PCT = 90;
 /** Exchange efficiency: field exchange is incomplete, so more gypsum than the stoichiometry (1.1–1.3 used in practice). */
 export const GYPSUM_EXCHANGE_EFFICIENCY = { default: 1.2, low: 1.1, high: 1.3 } as const;
 /** Bulk density behind USDA Handbook 60's "acre-foot", Mg/m³ (about 4 million lb per acre-foot). */
@@ -72,7 +74,7 @@ export function sodicGypsumOrder(input: SodicGypsumInput): Result<SodicGypsumRes
   const depthCm = input.depthCm ?? 15;
   const bulkDensityMgPerM3 = input.bulkDensityMgPerM3 ?? HANDBOOK_60_BULK_DENSITY;
   const exchangeEfficiency = input.exchangeEfficiency ?? GYPSUM_EXCHANGE_EFFICIENCY.default;
-  const purityPct = input.purityPct ?? 90;
+  const purityPct = input.purityPct ?? GYPSUM_EXAMPLE_PURITY_PCT;
   const checks: [string, number, number, number][] = [
     ['CEC (cmolc/kg)', input.cecCmolPerKg, 0, 200],
     ['ESP (%)', input.espInitialPct, 0, 100],

@@ -37,12 +37,41 @@ export type Prices = z.infer<typeof Prices>;
 
 export const Currency = z.string().regex(/^[A-Z]{3}$/, 'currency must be a three-letter code such as USD');
 
+const bounded = (key: string, min: number, max: number, unit = '') =>
+  z
+    .number({ error: `${key} must be a number` })
+    .refine(Number.isFinite, `${key} must be a finite number`)
+    .pipe(z.number().min(min, `${key} must be at least ${min}${unit}`).max(max, `${key} must be at most ${max}${unit}`));
+
+/**
+ * The farm's lime and gypsum products and aims: the lime's label (CCE and sieve analysis), the
+ * target pH (null: the buffer method's usual target), the gypsum's purity and the extra allowed
+ * for incomplete exchange on sodic soils.
+ */
+export const AmendmentChoices = z
+  .object({
+    limeTargetPh: bounded('limeTargetPh', 5, 7.5).nullable(),
+    limeCcePct: bounded('limeCcePct', 40, 120, ' %'),
+    limePassing20MeshPct: bounded('limePassing20MeshPct', 0, 100, ' %'),
+    limePassing60MeshPct: bounded('limePassing60MeshPct', 0, 100, ' %'),
+    limePassing100MeshPct: bounded('limePassing100MeshPct', 0, 100, ' %'),
+    gypsumPurityPct: bounded('gypsumPurityPct', 30, 100, ' %'),
+    gypsumExchangeEfficiency: bounded('gypsumExchangeEfficiency', 1, 2),
+  })
+  .refine((a) => a.limePassing20MeshPct >= a.limePassing60MeshPct && a.limePassing60MeshPct >= a.limePassing100MeshPct, {
+    message: 'a finer sieve cannot pass more than a coarser one: % passing 20 mesh ≥ 60 mesh ≥ 100 mesh',
+    path: ['limePassing60MeshPct'],
+  });
+export type AmendmentChoices = z.infer<typeof AmendmentChoices>;
+
 /** PUT /api/farms/:farmId/prices */
 export const PricesUpdate = z.object({
   /** The version read (0 when the farm still has the example list). */
   version: z.number().int().nonnegative(),
   currency: Currency,
   prices: Prices,
+  /** Left out: the ones stored stay (the examples for a new list). */
+  amendments: AmendmentChoices.optional(),
 });
 export type PricesUpdate = z.input<typeof PricesUpdate>;
 
@@ -54,6 +83,9 @@ export type PriceList = {
   examples: boolean;
   /** Items still at their example figure. */
   exampleKeys: PriceKey[];
+  amendments: AmendmentChoices;
+  /** True while the amendment products are the example ones. */
+  amendmentExamples: boolean;
   version: number;
   updatedBy: string | null;
   updatedAt: string | null;

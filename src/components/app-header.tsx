@@ -1,6 +1,7 @@
 // The bar across every signed-in screen: product name, the farm in view, the quick-estimate
 // link and a slot for the user menu.
 import type { ReactNode } from 'react';
+import type { Role } from '../../shared/schemas/auth';
 import { Link, NavLink, useMatch } from 'react-router-dom';
 import { paths } from '../lib/paths';
 
@@ -9,8 +10,16 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
     isActive ? 'bg-clay-light text-clay-dark' : 'text-clay-dark'
   }`;
 
-export function AppHeader({ farmName, screen, menu }: { farmName?: string; screen: string; menu?: ReactNode }) {
-  // On a farm's screens, links to the farm's map and its priority board.
+type Props = {
+  farmName?: string;
+  screen: string;
+  /** The caller's role on the farm in view: farmers and advisors also get Treatments and budget. */
+  role?: Role;
+  menu?: ReactNode;
+};
+
+export function AppHeader({ farmName, screen, role, menu }: Props) {
+  // On a farm's screens, links to the farm's map, its priority board and (not for a landowner) its budget.
   const farmId = useMatch('/farms/:farmId/*')?.params.farmId;
   return (
     <header className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-paper-edge bg-paper px-4 py-2">
@@ -29,7 +38,7 @@ export function AppHeader({ farmName, screen, menu }: { farmName?: string; scree
           </>
         ) : null}
       </nav>
-      <div className="ml-auto flex flex-wrap items-center gap-x-4 gap-y-2">
+      <div className="ml-auto flex flex-wrap items-center gap-x-2 gap-y-2">
         {farmId && /^\d+$/.test(farmId) ? (
           <>
             <NavLink to={paths.farmMap.getHref(farmId)} end data-testid="nav-farm-map" className={navClass}>
@@ -38,6 +47,11 @@ export function AppHeader({ farmName, screen, menu }: { farmName?: string; scree
             <NavLink to={paths.board.getHref(farmId)} data-testid="nav-board" className={navClass}>
               Priority board
             </NavLink>
+            {role === 'farmer' || role === 'advisor' ? (
+              <NavLink to={paths.budget.getHref(farmId)} data-testid="nav-budget" className={navClass}>
+                Treatments and budget
+              </NavLink>
+            ) : null}
           </>
         ) : null}
         <NavLink

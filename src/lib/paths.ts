@@ -26,4 +26,9 @@ export const paths = {
       `/farms/${farmId}/board${season ? `?season=${encodeURIComponent(season)}` : ''}`,
   },
   clientBoard: { path: '/board', getHref: () => '/board' },
+  budget: {
+    path: '/farms/:farmId/budget',
+    getHref: (farmId: number | string, season?: string | null) =>
+      `/farms/${farmId}/budget${season ? `?season=${encodeURIComponent(season)}` : ''}`,
+  },
 } as const;

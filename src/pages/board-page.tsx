@@ -34,7 +34,7 @@ export function BoardPage() {
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
   const board = useBoard(farmId, season);
   const fields = useFields(farmId);
-  const header = <AppHeader screen="Priority board" farmName={farm.data?.name} menu={<UserMenu />} />;
+  const header = <AppHeader screen="Priority board" farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
     return <CannotOpen header={header} title="This board cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
@@ -93,6 +93,7 @@ export function BoardPage() {
             season={season}
             tileUrl={config.data?.tileUrl ?? null}
             tileAttribution={config.data?.tileAttribution ?? null}
+            treatmentsFarmId={role === 'landowner' ? undefined : farmId}
           />
         )}
       </main>

@@ -37,7 +37,7 @@ export function FarmMapPage() {
   const config = useConfig();
 
   const header = (
-    <AppHeader screen={farm.data?.role === 'landowner' ? 'Landowner view' : 'Farm map'} farmName={farm.data?.name} menu={<UserMenu />} />
+    <AppHeader screen={farm.data?.role === 'landowner' ? 'Landowner view' : 'Farm map'} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />
   );
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError) {

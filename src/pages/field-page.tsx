@@ -15,7 +15,7 @@ export function FieldPage() {
   const fieldId = Number(params.fieldId);
   const farm = useFarm(farmId);
   const me = useMe();
-  const header = <AppHeader screen="Field" farmName={farm.data?.name} menu={<UserMenu />} />;
+  const header = <AppHeader screen="Field" farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
   const bad = !Number.isInteger(farmId) || farmId <= 0 || !Number.isInteger(fieldId) || fieldId <= 0;
 
   if (bad || farm.isError)

@@ -169,3 +169,31 @@ describe('the budget planner', () => {
     expect([b.status, b.body.message]).toEqual([400, expect.stringMatching(/goal must be/)]);
   });
 });
+
+describe('the farm’s lime and gypsum products', () => {
+  it('start as examples and, once typed, set the lime to order: product rate = pure rate ÷ effective CCE', async () => {
+    const { farmer, farmId, field } = await setUp();
+    const id = await field('Acid corn', ploughedCorn);
+    const list = (await farmer.get(`/api/farms/${farmId}/prices`)).body;
+    expect(list.amendmentExamples).toBe(true);
+    const limeT = async () => ((await farmer.get(`/api/fields/${id}/treatments?season=2027`)).body.options as Option[]).find((o) => o.treatments.join() === 'lime')!.quantities.find((q) => q.unit === 't')!.amount;
+    const before = await limeT();
+    // All finer than 100 mesh: fineness efficiency 1 by the New York rule; CCE 100 % vs the example's.
+    const fine = { ...list.amendments, limeCcePct: 100, limePassing20MeshPct: 100, limePassing60MeshPct: 100, limePassing100MeshPct: 100 };
+    const saved = await farmer.put(`/api/farms/${farmId}/prices`).send({ version: 0, currency: 'USD', prices: list.prices, amendments: fine });
+    expect(saved.status).toBe(200);
+    expect(saved.body).toMatchObject({ amendmentExamples: false, amendments: fine });
+    const ex = list.amendments;
+    const exampleEcce = (ex.limeCcePct / 100) * (((ex.limePassing20MeshPct - ex.limePassing60MeshPct) * 0.4 + (ex.limePassing60MeshPct - ex.limePassing100MeshPct) * 0.8 + ex.limePassing100MeshPct) / 100);
+    expect(await limeT()).toBeCloseTo(before * exampleEcce, 1);
+  });
+
+  it('refuses a sieve analysis where a finer sieve passes more, by name, and keeps the list', async () => {
+    const { farmer, farmId } = await setUp();
+    const list = (await farmer.get(`/api/farms/${farmId}/prices`)).body;
+    const bad = await farmer.put(`/api/farms/${farmId}/prices`).send({ version: 0, currency: 'USD', prices: list.prices, amendments: { ...list.amendments, limePassing100MeshPct: 99 } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.message).toMatch(/finer sieve/);
+    expect((await farmer.get(`/api/farms/${farmId}/prices`)).body.version).toBe(0);
+  });
+});

@@ -26,7 +26,7 @@ export async function putPrices(sequelize: Sequelize, actor: Actor, farmId: numb
         { current: await readPrices(farmId, t) },
       );
     }
-    const values = { currency: update.currency, prices: update.prices, updatedBy: actor.userId, updatedAt: new Date() };
+    const values = { currency: update.currency, prices: update.prices, amendments: update.amendments ?? row?.amendments ?? null, updatedBy: actor.userId, updatedAt: new Date() };
     if (row) await row.update({ ...values, version: row.version + 1 }, { transaction: t });
     else await FarmPrices.create({ farmId, ...values, version: 1 }, { transaction: t });
     await recordEvent({ userId: actor.userId, farmId, entity: 'farm_prices', entityId: farmId, action: 'updated', detail: { currency: update.currency } }, t);

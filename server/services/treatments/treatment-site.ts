@@ -3,7 +3,7 @@
 import type { TreatmentSite } from '../../../shared/erosion/treatments/types';
 import type { EstimateInput } from '../../../shared/schemas/estimate';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
-import type { PriceList } from '../../../shared/schemas/treatments';
+import type { AmendmentChoices, PriceList } from '../../../shared/schemas/treatments';
 import type { StoredTerrainStats } from '../../models/field-terrain.model';
 
 /**
@@ -19,6 +19,18 @@ const DOWNSLOPE_EDGE_SHARE_OF_PERIMETER = 0.25;
  */
 function concentratedFlowLengthM(cellsLengthM: number, perimeterM: number): number {
   return Math.min(cellsLengthM, perimeterM / 2);
+}
+
+function amendmentsOf(a: AmendmentChoices): NonNullable<TreatmentSite['amendments']> {
+  return {
+    ...(a.limeTargetPh !== null ? { limeTargetPh: a.limeTargetPh } : {}),
+    limeProduct: {
+      ccePct: a.limeCcePct,
+      fineness: { passing20MeshPct: a.limePassing20MeshPct, passing60MeshPct: a.limePassing60MeshPct, passing100MeshPct: a.limePassing100MeshPct },
+    },
+    gypsumPurityPct: a.gypsumPurityPct,
+    gypsumExchangeEfficiency: a.gypsumExchangeEfficiency,
+  };
 }
 
 export type SiteParts = {
@@ -55,5 +67,6 @@ export function treatmentSiteOf(p: SiteParts): TreatmentSite {
     },
     prices: p.prices.prices,
     currency: p.prices.currency,
+    amendments: amendmentsOf(p.prices.amendments),
   };
 }

@@ -9,6 +9,7 @@ import {
   ftToM,
   kFactorWilliams,
   organicCarbonFromOm,
+  rusleLS,
   terraceIntervalM,
   type TreatmentSite,
 } from '../../../shared/erosion';
@@ -136,7 +137,9 @@ describe('each treatment changes what it changes, and no more', () => {
     const site = demoLikeSite();
     site.input = { ...site.input, lsFromGrid: { value: 2.1, source: 'test grid', method: 'test' } };
     const a = applyTreatments(site, ['terraces']);
-    expect(a.ok && a.value.input.lsFromGrid).toBeUndefined();
+    if (!a.ok) throw new Error(a.reason);
+    // AH-703 LS (moderate ratio) on the terrace interval at the mean slope, not the grid's 2.1
+    expect(a.value.estimate.factors.ls.value).toBeCloseTo(rusleLS({ slopePct: 12, lengthM: terraceIntervalM(12) }).ls, 9);
     expect(a.ok && a.value.changes.find((x) => x.factor === 'slope length')!.why).toMatch(/replaces the elevation model's LS/);
   });
   it('grassed waterway: gully control, A unchanged, length from the flow path', () => {

@@ -5,7 +5,7 @@ import { Bar, BarChart, CartesianGrid, Cell, Legend, ResponsiveContainer, Toolti
 import { tPerHaToTonPerAc } from '../../../../shared/erosion/units';
 import type { BoardRow } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
-import { formatFigure } from '../../estimate/components/format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 
 const T_FILL = '#857a6c';
 const ROW_H = 34;

@@ -19,9 +19,10 @@ import type { BoardRow } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
 import { paths } from '../../../lib/paths';
 import { formatArea } from '../../../lib/units';
-import { formatFigure } from '../../estimate/components/format-figure';
-import { lossFigure, runoffFigure, tonnesFigure, type Figure } from './loss-units';
+import { formatFigure } from '../../../lib/format-figure';
+import { lossFigure, runoffFigure, tonnesFigure, type Figure } from '../../../lib/loss-units';
 import { RiskBadge } from './risk-badge';
+import { HIDDEN_IN_TREATMENTS_VIEW, treatmentColumns, type BoardTreatments } from './treatment-columns';
 
 export type RankedRow = BoardRow & { rank: number };
 
@@ -69,9 +70,11 @@ type Props = {
   onSelect: (row: RankedRow) => void;
   /** Show the farm of each row (the advisor's board across client farms). */
   showFarm?: boolean;
+  /** The treatments view: each field's best option and its cost, in place of area, T, tonnes, runoff, clay and gaps. */
+  treatments?: BoardTreatments | null;
 };
 
-export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showFarm = false }: Props) {
+export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showFarm = false, treatments = null }: Props) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
   const [globalFilter, setGlobalFilter] = useState('');
@@ -189,14 +192,19 @@ export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showF
           );
         },
       }),
+      ...(treatments ? treatmentColumns(treatments, lossUnits) : []),
     ],
-    [units, lossUnits, showFarm],
+    [units, lossUnits, showFarm, treatments],
+  );
+  const columnVisibility = useMemo(
+    () => Object.fromEntries(HIDDEN_IN_TREATMENTS_VIEW.map((id) => [id, !treatments])),
+    [treatments],
   );
 
   const table = useReactTable({
     data: rows,
     columns,
-    state: { sorting, columnFilters, globalFilter },
+    state: { sorting, columnFilters, globalFilter, columnVisibility },
     onSortingChange: setSorting,
     onColumnFiltersChange: setColumnFilters,
     onGlobalFilterChange: setGlobalFilter,
@@ -213,6 +221,7 @@ export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showF
   const clayOnly = Boolean(table.getColumn('problemClay')?.getFilterValue());
   const gapsOnly = Boolean(table.getColumn('gaps')?.getFilterValue());
   const shown = table.getRowModel().rows;
+  const columnCount = table.getVisibleLeafColumns().length;
 
   return (
     <div className="flex min-w-0 flex-col gap-2">
@@ -340,7 +349,7 @@ export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showF
                   data-testid="board-row-reasons"
                 >
                   <td />
-                  <td colSpan={columns.length - 1} className="px-1.5 pb-1.5 pt-0.5 text-xs">
+                  <td colSpan={columnCount - 1} className="px-1.5 pb-1.5 pt-0.5 text-xs">
                     <Reasons row={row.original} />
                   </td>
                 </tr>
@@ -349,7 +358,7 @@ export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showF
             })}
             {shown.length === 0 ? (
               <tr>
-                <td colSpan={columns.length} className="px-2 py-4 text-center text-ink-soft">
+                <td colSpan={columnCount} className="px-2 py-4 text-center text-ink-soft">
                   No field matches these filters.
                 </td>
               </tr>

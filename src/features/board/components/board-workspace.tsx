@@ -1,19 +1,23 @@
 // The priority board: the ranked table beside the choropleth of the same fields, and the
 // chart of A against T under them. Picking a row outlines the field on the map (and picking a
-// field on the map picks its row); the picked field opens on the Field screen.
+// field on the map picks its row); the picked field opens on the Field screen. On one farm's
+// board, farmers and advisors can switch the table to each field's best treatment and its cost.
 import { useCallback, useMemo, useState } from 'react';
-import { useNavigate } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
+import { Notice } from '../../../components/ui/notice';
 import { Button } from '../../../components/ui/button';
 import { paths } from '../../../lib/paths';
 import type { BoardRow } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FieldFeature } from '../../../../shared/schemas/field';
+import { useFarmTreatments } from '../api/get-farm-treatments';
 import { AVsTChart } from './a-vs-t-chart';
 import { BoardMap } from './board-map';
 import { BoardTable, type RankedRow } from './board-table';
-import { lossFigure } from './loss-units';
+import { lossFigure } from '../../../lib/loss-units';
 import { RiskBadge } from './risk-badge';
 import { RiskLegend } from './risk-legend';
+import type { BoardTreatments } from './treatment-columns';
 
 const LOSS_UNIT_CHOICES: { value: Units; label: string }[] = [
   { value: 'ha', label: 't/ha/yr, mm' },
@@ -28,10 +32,27 @@ type Props = {
   showFarm?: boolean;
   tileUrl?: string | null;
   tileAttribution?: string | null;
+  /** The farm whose treatments the table may show (one farm's board, farmer or advisor); none hides the switch. */
+  treatmentsFarmId?: number;
 };
 
-export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution }: Props) {
+type TableView = 'risk' | 'treatments';
+const VIEW_CHOICES: { value: TableView; label: string }[] = [
+  { value: 'risk', label: 'Risk figures' },
+  { value: 'treatments', label: 'Best treatment and cost' },
+];
+
+const pill = (on: boolean) =>
+  `rounded border px-2 py-0.5 font-medium ${on ? 'border-clay-dark bg-clay text-paper' : 'border-ink-faint bg-paper text-ink hover:bg-paper-deep'}`;
+
+export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution, treatmentsFarmId }: Props) {
   const navigate = useNavigate();
+  const [view, setView] = useState<TableView>('risk');
+  const treatmentsQuery = useFarmTreatments(treatmentsFarmId ?? 0, season, treatmentsFarmId !== undefined && view === 'treatments');
+  const treatments: BoardTreatments | null = useMemo(() => {
+    const t = treatmentsQuery.data;
+    return view === 'treatments' && t ? { currency: t.currency, byField: new Map(t.fields.map((f) => [f.fieldId, f])) } : null;
+  }, [view, treatmentsQuery.data]);
   const [selectedId, setSelectedId] = useState<number | null>(null);
   // Follows the user's area setting until the board's own toggle is used.
   const [lossChoice, setLossUnits] = useState<Units | null>(null);
@@ -57,17 +78,50 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
             aria-pressed={lossUnits === c.value}
             onClick={() => setLossUnits(c.value)}
             data-testid={`board-loss-units-${c.value === 'ha' ? 'si' : 'us'}`}
-            className={`rounded border px-2 py-0.5 font-medium ${
-              lossUnits === c.value ? 'border-clay-dark bg-clay text-paper' : 'border-ink-faint bg-paper text-ink hover:bg-paper-deep'
-            }`}
+            className={pill(lossUnits === c.value)}
           >
             {c.label}
           </button>
         ))}
         <span className="text-xs text-ink-soft">(hover a figure for the other units)</span>
       </div>
+      {treatmentsFarmId !== undefined ? (
+        <div className="flex flex-col gap-2">
+          <div role="group" aria-label="What the table shows" className="flex flex-wrap items-center gap-1 text-sm" data-testid="board-view">
+            <span className="text-ink-soft">The table shows</span>
+            {VIEW_CHOICES.map((c) => (
+              <button key={c.value} type="button" aria-pressed={view === c.value} onClick={() => setView(c.value)} data-testid={`board-view-${c.value}`} className={pill(view === c.value)}>
+                {c.label}
+              </button>
+            ))}
+            <Link to={paths.budget.getHref(treatmentsFarmId, season)} className="ml-2 font-semibold text-clay-dark underline underline-offset-2" data-testid="board-budget-link">
+              Plan a budget for these treatments
+            </Link>
+          </div>
+          {view === 'treatments' && treatmentsQuery.isPending ? <p className="text-sm text-ink-soft">Working out each field’s treatments…</p> : null}
+          {view === 'treatments' && treatmentsQuery.isError ? (
+            <Notice tone="error" title="The treatments could not be worked out">
+              {treatmentsQuery.error.message}
+            </Notice>
+          ) : null}
+          {treatments ? (
+            <p className="text-xs text-ink-soft" data-testid="board-treatments-note">
+              Best treatment: the cheapest that brings A under T, else the one saving the most soil for the money. Costs at the farm’s prices,
+              in {treatments.currency}; open a field’s Risk tab for every option, its amounts and its cautions.
+            </p>
+          ) : null}
+        </div>
+      ) : null}
       <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(320px,28%)]">
-        <BoardTable rows={ranked} units={units} lossUnits={lossUnits} selectedId={selectedId} onSelect={(r) => setSelectedId(r.fieldId)} showFarm={showFarm} />
+        <BoardTable
+          rows={ranked}
+          units={units}
+          lossUnits={lossUnits}
+          selectedId={selectedId}
+          onSelect={(r) => setSelectedId(r.fieldId)}
+          showFarm={showFarm}
+          treatments={treatments}
+        />
         <div className="flex flex-col gap-2 xl:sticky xl:top-2 xl:self-start">
           <div className="flex min-h-12 flex-wrap items-center gap-2 rounded-md border border-paper-edge bg-white/50 px-3 py-2 text-sm" data-testid="board-selection" aria-live="polite">
             {selected ? (

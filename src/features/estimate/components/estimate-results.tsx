@@ -5,7 +5,7 @@ import { M3_PER_ACRE_FT } from '../../../../shared/erosion/units';
 import { mmToIn, riskClassOf, tToShortTon } from '../../../../shared/erosion';
 import type { EstimateSuccess } from '../../../../shared/schemas/estimate';
 import { FactorTable } from './factor-table';
-import { formatFigure } from './format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 import { RiskClassScale, RiskSwatch } from './risk-class-scale';
 
 export type DisplayUnits = 'si' | 'us';

@@ -4,7 +4,7 @@
 // one says so with its note. A screen may add a control per factor (the field's override).
 import type { ReactNode } from 'react';
 import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
-import { formatFigure } from './format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 
 const FACTORS: { key: keyof EstimateSuccess['factors']; name: string }[] = [
   { key: 'r', name: 'R, rainfall erosivity' },

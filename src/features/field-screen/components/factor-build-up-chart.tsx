@@ -5,7 +5,7 @@ import { Bar, BarChart, CartesianGrid, Cell, LabelList, ReferenceLine, Responsiv
 import { tPerHaToTonPerAc } from '../../../../shared/erosion/units';
 import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
 import type { Units } from '../../../../shared/schemas/auth';
-import { formatFigure } from '../../estimate/components/format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 
 const STEP_FILL = '#d9cfba';
 const T_COLOUR = '#1f1b16';

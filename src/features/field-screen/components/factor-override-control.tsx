@@ -10,7 +10,7 @@ import { TextField } from '../../../components/ui/text-field';
 import { FactorOverrideUpdate, OVERRIDE_SPECS, type FactorOverride, type OverrideFactor } from '../../../../shared/schemas/overrides';
 import { useRemoveFactorOverride } from '../../seasons/api/remove-factor-override';
 import { useSetFactorOverride } from '../../seasons/api/set-factor-override';
-import { plainMessage, toNumberOrNull } from '../../seasons/components/form-values';
+import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 
 type Props = { fieldId: number; factor: OverrideFactor; current: FactorOverride | undefined };
 type Values = z.input<typeof FactorOverrideUpdate>;

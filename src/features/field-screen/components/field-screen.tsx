@@ -8,7 +8,7 @@ import { paths } from '../../../lib/paths';
 import { formatArea } from '../../../lib/units';
 import type { Farm, Units } from '../../../../shared/schemas/auth';
 import { RiskBadge } from '../../board/components/risk-badge';
-import { lossFigure } from '../../board/components/loss-units';
+import { lossFigure } from '../../../lib/loss-units';
 import { useConfig } from '../../config/api/get-config';
 import { RoleBadge } from '../../farms/components/role-badge';
 import { useField } from '../../fields/api/get-field';

@@ -1,7 +1,7 @@
 // Risk: the field's assessment for the season. A in t/ha/yr and US t/ac/yr against T, A/T
 // with its risk class, tonnes a year, the design storm's runoff; how A builds up, every factor
-// with its source, what went in and what is missing, problem clay and what to do about it,
-// and the cautions.
+// with its source, what went in and what is missing, problem clay, what to do about it (the
+// treatments and the what-if, for farmers and advisors), and the cautions.
 import { Link } from 'react-router-dom';
 import { Notice } from '../../../components/ui/notice';
 import { paths } from '../../../lib/paths';
@@ -9,9 +9,9 @@ import { CAUTION_TERRACES } from '../../../../shared/erosion/estimate';
 import type { FieldAssessment, Gap, GapTab } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
 import { RiskBadge } from '../../board/components/risk-badge';
-import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../board/components/loss-units';
+import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../../lib/loss-units';
 import { FactorTable } from '../../estimate/components/factor-table';
-import { formatFigure } from '../../estimate/components/format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 import { useAssessment } from '../../seasons/api/get-assessment';
 import { useFactorOverrides } from '../../seasons/api/get-factor-overrides';
 import { OVERRIDE_FACTORS, type OverrideFactor } from '../../../../shared/schemas/overrides';
@@ -20,6 +20,7 @@ import { TERRACE_CAUTION } from '../../seasons/components/cropping-form';
 import { AssessmentInputs } from './assessment-inputs';
 import { FactorBuildUpChart } from './factor-build-up-chart';
 import type { FieldTab } from './field-tabs';
+import { WhatToDo } from './what-to-do';
 
 function Big({ label, figure, testId }: { label: string; figure: Figure | null; testId?: string }) {
   return (
@@ -106,7 +107,15 @@ function ProblemClay({ a }: { a: FieldAssessment }) {
   );
 }
 
-type Props = { farmId: number; fieldId: number; season: string; units: Units; canEdit: boolean; onOpenTab?: (tab: FieldTab) => void };
+type Props = {
+  farmId: number;
+  fieldId: number;
+  season: string;
+  units: Units;
+  /** Farmers and advisors: they override factors and see the treatments and the what-if; a landowner does neither. */
+  canEdit: boolean;
+  onOpenTab?: (tab: FieldTab) => void;
+};
 
 const isOverridable = (key: string): key is OverrideFactor => (OVERRIDE_FACTORS as readonly string[]).includes(key);
 
@@ -172,6 +181,7 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
 
       <Gaps gaps={a.gaps} farmId={farmId} onOpenTab={onOpenTab} />
       <ProblemClay a={a} />
+      {canEdit && e ? <WhatToDo farmId={farmId} fieldId={fieldId} season={season} units={units} onOpenTab={onOpenTab} /> : null}
       {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
       {e ? (
         <FactorTable

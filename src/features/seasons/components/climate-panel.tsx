@@ -12,10 +12,10 @@ import { R_PRECIPITATION_HINT } from '../../../../shared/erosion/erosivity';
 import { mmToIn } from '../../../../shared/erosion/units';
 import { ClimateUpdate, type Climate } from '../../../../shared/schemas/season';
 import type { Units } from '../../../../shared/schemas/auth';
-import { formatFigure } from '../../estimate/components/format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 import { useClimate } from '../api/get-climate';
 import { useUpdateClimate } from '../api/update-climate';
-import { plainMessage, toNumberOrNull } from './form-values';
+import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 import { saveErrorMessage } from './save-error-message';
 import { RainfallRecordUpload } from './rainfall-record-upload';
 

@@ -24,7 +24,7 @@ import {
   type CroppingFormValues,
   type CroppingPayload,
 } from './cropping-form-values';
-import { plainMessage, toNumberOrNull } from './form-values';
+import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 import { saveErrorMessage } from './save-error-message';
 
 export const TERRACE_CAUTION =

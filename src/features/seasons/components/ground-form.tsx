@@ -13,7 +13,7 @@ import type { Units } from '../../../../shared/schemas/auth';
 import { GroundUpdate } from '../../../../shared/schemas/season';
 import { useGround, type GroundRecord } from '../api/get-ground';
 import { useUpdateGround } from '../api/update-ground';
-import { plainMessage, toNumberOrNull } from './form-values';
+import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 import { saveErrorMessage } from './save-error-message';
 
 type Values = z.input<typeof GroundUpdate>;

@@ -4,7 +4,7 @@ import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import type { Climate } from '../../../../shared/schemas/season';
-import { formatFigure } from '../../estimate/components/format-figure';
+import { formatFigure } from '../../../lib/format-figure';
 import { useUploadRainfallRecord } from '../api/upload-rainfall-record';
 
 export function RainfallRecordUpload({ farmId, climate }: { farmId: number; climate: Climate | null }) {

@@ -1,4 +1,4 @@
-// How the estimate page writes its figures: enough digits to compare, not more than the
+// How every screen writes its figures: enough digits to compare, not more than the
 // inputs can carry (three significant figures for small values, whole numbers for large).
 export function formatFigure(x: number): string {
   if (!Number.isFinite(x)) return '—';

@@ -1,10 +1,10 @@
 // How the board and the Field screen write soil loss, tonnes and runoff: the figure in the
 // user's units first (t/ha/yr for hectare users, US t/ac/yr for acre users) and the other
 // beside it; runoff in mm (inches beside for acre users).
-import { mmToIn, tPerHaToTonPerAc, tToShortTon } from '../../../../shared/erosion/units';
-import type { Units } from '../../../../shared/schemas/auth';
-import { formatFigure } from '../../estimate/components/format-figure';
-import { M3_PER_ACRE_FT } from '../../../../shared/erosion/units';
+import { mmToIn, tPerHaToTonPerAc, tToShortTon } from '../../shared/erosion/units';
+import type { Units } from '../../shared/schemas/auth';
+import { formatFigure } from './format-figure';
+import { M3_PER_ACRE_FT } from '../../shared/erosion/units';
 
 export type Figure = { main: string; alt: string };
 
