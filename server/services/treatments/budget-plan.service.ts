@@ -13,7 +13,7 @@ type Goal = BudgetPlan['goal'];
 const CURVE_POINTS = 16;
 
 const money = (x: number, currency: string) => `${Math.round(x).toLocaleString('en-US')} ${currency}`;
-const tonnes = (x: number) => `${x >= 100 ? Math.round(x) : x.toFixed(1)} t`;
+const tonnes = (x: number) => `${x >= 100 ? Math.round(x).toLocaleString('en-US') : x.toFixed(1)} t`;
 
 /** Every field still above T with options that save soil, as planBudget takes them. */
 function budgetFields(farm: FarmTreatmentsAnswer): BudgetField[] {

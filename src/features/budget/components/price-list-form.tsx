@@ -11,13 +11,14 @@ import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-client';
 import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 import { currencySign } from '../../../lib/money';
-import { PRICE_ITEMS, PRICE_KEYS, PricesUpdate, type PriceKey, type PriceList } from '../../../../shared/schemas/treatments';
+import { PRICE_ITEMS, PRICE_KEYS, PricesUpdate, type AmendmentChoices, type PriceKey, type PriceList } from '../../../../shared/schemas/treatments';
+import { AmendmentInputs } from './amendment-inputs';
 import { usePrices } from '../api/get-prices';
 import { useUpdatePrices } from '../api/update-prices';
 
 const EXAMPLE_WORDS = 'example value — replace with your local figure';
 
-type Values = { version: number; currency: string; prices: Record<PriceKey, number | null> };
+type Values = { version: number; currency: string; prices: Record<PriceKey, number | null>; amendments: Record<keyof AmendmentChoices, number | null> };
 type Output = z.output<typeof PricesUpdate>;
 
 const validCurrency = (c: string) => /^[A-Z]{3}$/.test(c);
@@ -37,7 +38,7 @@ function PriceForm({ list, onSave, saving }: { list: PriceList; onSave: (v: Outp
   const form = useForm<Values, unknown, Output>({
     // Boxes may be empty (null); the schema says each price is a number of at least 0.
     resolver: zodResolver(PricesUpdate) as unknown as Resolver<Values, unknown, Output>,
-    defaultValues: { version: list.version, currency: list.currency, prices: { ...list.prices } },
+    defaultValues: { version: list.version, currency: list.currency, prices: { ...list.prices }, amendments: { ...list.amendments } },
   });
   const { register, handleSubmit, formState, control } = form;
   const currency = useWatch({ control, name: 'currency' });
@@ -74,6 +75,7 @@ function PriceForm({ list, onSave, saving }: { list: PriceList; onSave: (v: Outp
           );
         })}
       </div>
+      <AmendmentInputs register={register} errors={formState.errors} examples={list.amendmentExamples} />
       <Button type="submit" size="sm" className="self-start" disabled={saving} data-testid="price-save">
         {saving ? 'Saving…' : 'Save the prices'}
       </Button>
