@@ -23,16 +23,20 @@ import { FieldGround } from './field-ground.model';
 import { Assessment } from './assessment.model';
 import { FarmPrices } from './farm-prices.model';
 import { FieldFactorOverride } from './field-factor-override.model';
+import { Plan } from './plan.model';
+import { PlanAction } from './plan-action.model';
+import { PlanComment } from './plan-comment.model';
+import { PlanVersion } from './plan-version.model';
 
 export {
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride, Plan, PlanAction, PlanComment, PlanVersion,
 };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
 const MODELS = [
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
-  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride,
+  Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride, Plan, PlanAction, PlanComment, PlanVersion,
 ];
 
 let initialised: Sequelize | null = null;
