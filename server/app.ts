@@ -19,6 +19,7 @@ import { soilsRoutes } from './routes/soils.routes';
 import { seasonsRoutes } from './routes/seasons.routes';
 import { treatmentsRoutes } from './routes/treatments.routes';
 import { factorOverridesRoutes } from './routes/factor-overrides.routes';
+import { plansRoutes } from './routes/plans.routes';
 import { peopleRoutes } from './routes/people.routes';
 import { devMailboxRoutes } from './routes/dev-mailbox.routes';
 import { setMailDispatch } from './services/mail/outbox';
@@ -92,6 +93,10 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   const treatments = treatmentsRoutes(sequelize);
   api.use('/farms', treatments.farms);
   api.use('/fields', treatments.fields);
+  const plans = plansRoutes(sequelize);
+  api.use('/farms', plans.farms);
+  api.use('/plans', plans.plans);
+  api.use('/plan-actions', plans.actions);
   api.use(notFoundApi);
   app.use('/api', api);
 

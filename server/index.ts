@@ -12,6 +12,7 @@ import { JobQueue } from './services/jobs/job-queue';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
 import { seedDemoSeason } from './db/seeders/demo-season';
 import { seedDemoSecondFarm } from './db/seeders/demo-second-farm';
+import { seedDemoPlan } from './db/seeders/demo-plan';
 import { refreshStaleAssessments } from './services/assessments/refresh-assessments';
 
 function newestMtime(dir: string): number {
@@ -45,8 +46,9 @@ async function main(): Promise<void> {
   const jobs = await JobQueue.start(db.url, jobHandlers(backend), '', taskHandlers(backend, mail));
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
     await seedDemoSeason(db.sequelize);
+    await seedDemoPlan(db.sequelize);
     await seedDemoSecondFarm(db.sequelize);
-    console.log('Loaded the demo farm (Alder Run Farm) and its 2027 season.');
+    console.log('Loaded the demo farm (Alder Run Farm), its 2027 season and its plan, submitted for review.');
     if (await seedDemoTerrain({ sequelize: db.sequelize, storage, jobs })) console.log('Queued the demo elevation model for processing.');
   }
   // Stored assessments worked out by an older engine (or missing) are redone once, here, not on reads.

@@ -18,6 +18,7 @@ import { terrainJobHandler } from '../../server/services/farm-terrain.service';
 import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/seeders/demo-farm';
 import { seedDemoSeason } from '../../server/db/seeders/demo-season';
 import { seedDemoSecondFarm } from '../../server/db/seeders/demo-second-farm';
+import { seedDemoPlan } from '../../server/db/seeders/demo-plan';
 import { seedDemoTerrain } from '../../server/db/seeders/demo-terrain';
 import { signedIn } from '../helpers/test-app';
 
@@ -34,6 +35,7 @@ beforeAll(async () => {
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'demo-secret-demo-secret' }), storage, jobs, clientDir: '/nonexistent' });
   seeded = await seedDemoFarm(sequelize);
   await seedDemoSeason(sequelize);
+  await seedDemoPlan(sequelize);
   await seedDemoSecondFarm(sequelize);
   await seedDemoTerrain({ sequelize, storage, jobs });
   const [job] = (await sequelize.query(`SELECT id FROM processing_jobs ORDER BY created_at DESC LIMIT 1`))[0] as { id: string }[];
@@ -128,5 +130,27 @@ describe('the demo farm', () => {
     const png = await farmer.get(loss.url);
     expect(png.status).toBe(200);
     expect(png.body.subarray(0, 4).toString('hex')).toBe('89504e47');
+  });
+
+  it('has a 2027 plan submitted for review: the advisor sees it all, the landowner nothing until it is approved', async () => {
+    const advisor = await signedIn(app, (await User.findOne({ where: { email: DEMO_ACCOUNTS[1].email } }))!, DEMO_PASSWORD);
+    const farmId = (await advisor.get('/api/farms')).body.find((f: { name: string }) => f.name === 'Alder Run Farm').id;
+    const plan = (await advisor.get(`/api/farms/${farmId}/plans?season=2027`)).body;
+    expect(plan).toMatchObject({ season: '2027', state: 'submitted', currency: 'USD', submittedBy: { name: 'Mara Kettleby' } });
+    expect(plan.actions.map((a: { fieldName: string; treatment: string }) => `${a.fieldName}: ${a.treatment}`)).toEqual(
+      expect.arrayContaining(['Long Slope: no-till', 'Long Slope: cover-crop', 'Swale Field: grassed-waterway']),
+    );
+    expect(plan.totals.cost).toBeGreaterThan(0);
+    // No-till and a cover crop lower C, so Long Slope loses less (AH-703 ch. 5); the farm saves soil.
+    const longSlope = plan.prediction.fields.find((f: { fieldName: string }) => f.fieldName === 'Long Slope');
+    expect(longSlope.ok).toBe(true);
+    expect(longSlope.planned.soilLossTPerHaYr).toBeLessThan(longSlope.current.soilLossTPerHaYr);
+    expect(plan.prediction.tonnesSavedPerYr).toBeGreaterThan(0);
+    // A waterway changes no RUSLE factor; the prediction says what it does instead.
+    const swale = plan.prediction.fields.find((f: { fieldName: string }) => f.fieldName === 'Swale Field');
+    expect(swale.tonnesSavedPerYr).toBe(0);
+    expect(swale.effects.length).toBeGreaterThan(0);
+    const landowner = await signedIn(app, (await User.findOne({ where: { email: DEMO_ACCOUNTS[2].email } }))!, DEMO_PASSWORD);
+    expect((await landowner.get(`/api/farms/${farmId}/plans?season=2027`)).status).toBe(404);
   });
 });
