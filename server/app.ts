@@ -22,7 +22,7 @@ import { factorOverridesRoutes } from './routes/factor-overrides.routes';
 import { plansRoutes } from './routes/plans.routes';
 import { peopleRoutes } from './routes/people.routes';
 import { devMailboxRoutes } from './routes/dev-mailbox.routes';
-import { setMailDispatch } from './services/mail/outbox';
+import { setMailContext } from './services/mail/outbox';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
 import { JSON_BODY_MAX_BYTES } from '../shared/limits';
@@ -41,7 +41,7 @@ export type AppOptions = {
 
 export function createApp({ sequelize, config, clientDir, jobs, storage: givenStorage, devMailbox = false }: AppOptions): Express {
   // Mail written to the outbox goes to the job queue once its transaction commits.
-  if (jobs) setMailDispatch((id) => jobs.sendMail(id));
+  setMailContext({ dispatch: jobs ? (id) => jobs.sendMail(id) : null, publicUrl: config.publicUrl });
   const storage = givenStorage ?? new LocalFileStorage(path.join(config.dataDir, 'uploads'));
   const terrain = terrainRoutes({ sequelize, storage, jobs });
   initModels(sequelize);

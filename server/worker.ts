@@ -4,7 +4,7 @@
 import { openBackend, jobHandlers, taskHandlers, stopOnSignals } from './backend';
 import { JobQueue } from './services/jobs/job-queue';
 import { openMailTransport } from './services/mail/mail-transport';
-import { setMailDispatch } from './services/mail/outbox';
+import { setMailContext } from './services/mail/outbox';
 
 async function main(): Promise<void> {
   const backend = await openBackend();
@@ -13,7 +13,7 @@ async function main(): Promise<void> {
   const mail = backend.config.smtpUrl ? await openMailTransport(backend.config) : null;
   const tasks = taskHandlers(backend, mail);
   const jobs = await JobQueue.start(backend.db.url, handlers, '', tasks);
-  setMailDispatch((id) => jobs.sendMail(id));
+  setMailContext({ dispatch: (id) => jobs.sendMail(id), publicUrl: backend.config.publicUrl });
   console.log(`Fieldshed worker is working the job queue (${[...Object.keys(handlers), ...Object.keys(tasks)].join(', ')}).`);
   stopOnSignals(async () => {
     await jobs.stop();

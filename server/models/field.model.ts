@@ -74,6 +74,14 @@ export class Field extends Model<InferAttributes<Field>, InferCreationAttributes
     }
   }
 
+  /** The users who own these fields as landowners. */
+  static async ownerUserIdsOf(fieldIds: number[], transaction?: Transaction): Promise<number[]> {
+    if (!fieldIds.length) return [];
+    const fields = await Field.findAll({ attributes: ['ownerMembershipId'], where: { id: { [Op.in]: fieldIds }, ownerMembershipId: { [Op.ne]: null } }, transaction });
+    const owners = await Membership.findAll({ attributes: ['userId'], where: { id: { [Op.in]: fields.map((f) => f.ownerMembershipId!) }, role: 'landowner' }, transaction });
+    return [...new Set(owners.map((m) => m.userId))];
+  }
+
   static associate(): void {
     Field.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     Field.belongsTo(Membership, { foreignKey: 'ownerMembershipId', as: 'owner' });

@@ -8,11 +8,20 @@ import type { ComposedMail } from './mail-templates';
 
 type Dispatch = (mailId: number) => Promise<void>;
 let dispatch: Dispatch | null = null;
+let linkBase = '';
 
-/** Set once per process by whoever holds the job queue (createApp, the worker). */
-export function setMailDispatch(d: Dispatch | null): void {
-  dispatch = d;
+/**
+ * Set once per process (createApp, the worker): how a committed mail reaches the job queue (none:
+ * it waits in the outbox for a worker's start-up), and PUBLIC_URL for hooks that are handed no
+ * configuration (the plan notices).
+ */
+export function setMailContext(context: { dispatch: Dispatch | null; publicUrl: string }): void {
+  dispatch = context.dispatch;
+  linkBase = context.publicUrl;
 }
+
+/** PUBLIC_URL as set by setMailContext. */
+export const publicUrl = (): string => linkBase;
 
 export type MailTo = { to: string; kind: string; userId?: number | null; farmId?: number | null; dedupeKey?: string | null };
 
