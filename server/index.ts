@@ -7,7 +7,7 @@ import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seeders/demo-fa
 import { createApp } from './app';
 import { openBackend, jobHandlers, taskHandlers, stopOnSignals } from './backend';
 import { openMailTransport } from './services/mail/mail-transport';
-import { requeueStuckMail } from './services/mail/outbox';
+import { requeueStuckMail, setMailContext } from './services/mail/outbox';
 import { JobQueue } from './services/jobs/job-queue';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
 import { seedDemoSeason } from './db/seeders/demo-season';
@@ -44,6 +44,8 @@ async function main(): Promise<void> {
   const mail = await openMailTransport(config);
   // One worker in this process; `npm run worker` adds more, here or on other machines.
   const jobs = await JobQueue.start(db.url, jobHandlers(backend), '', taskHandlers(backend, mail));
+  // Before the demo seed, so the seeded plan's notice to the advisor goes out at once.
+  setMailContext({ dispatch: (id) => jobs.sendMail(id), publicUrl: config.publicUrl });
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
     await seedDemoSeason(db.sequelize);
     await seedDemoPlan(db.sequelize);
