@@ -2,11 +2,10 @@
 // advisors; returned → the farmers; approved → the farmers and the landowners of the fields the
 // plan touches. Each person may have turned that kind of notice off; whoever acted gets none.
 import type { Transaction } from 'sequelize';
-import { Farm, Field, PlanAction, Season, type Plan } from '../../models';
+import { Farm, Field, PlanAction, Season, User, type Plan } from '../../models';
 import { planApprovedMail, planReturnedMail, planSubmittedMail } from '../mail/mail-templates';
 import { publicUrl, queueMail } from '../mail/outbox';
 import { noticeRecipients, type Recipient } from './recipients';
-import { User } from '../../models';
 
 export type PlanEvent = { plan: Plan; event: 'submitted' | 'returned' | 'approved'; actorId: number; comment?: string | null };
 
@@ -14,11 +13,10 @@ export type PlanEvent = { plan: Plan; event: 'submitted' | 'returned' | 'approve
 export const planLink = (farmId: number, season: string) => `${publicUrl()}/farms/${farmId}/plan?season=${encodeURIComponent(season)}`;
 
 export async function noticePlanEvent({ plan, event, actorId, comment }: PlanEvent, t: Transaction): Promise<void> {
-  const [farm, season, actor] = await Promise.all([
-    Farm.findByPk(plan.farmId, { attributes: ['name'], transaction: t }),
-    Season.findByPk(plan.seasonId, { attributes: ['label'], transaction: t }),
-    User.findByPk(actorId, { attributes: ['name'], transaction: t }),
-  ]);
+  // One after another: the transaction's connection runs one query at a time.
+  const farm = await Farm.findByPk(plan.farmId, { attributes: ['name'], transaction: t });
+  const season = await Season.findByPk(plan.seasonId, { attributes: ['label'], transaction: t });
+  const actor = await User.findByPk(actorId, { attributes: ['name'], transaction: t });
   const base = { farmName: farm!.name, season: season!.label, by: actor?.name ?? 'Someone', link: planLink(plan.farmId, season!.label) };
   const send = async (to: Recipient[], kind: string, mail: ReturnType<typeof planSubmittedMail>) => {
     for (const r of to.filter((x) => x.userId !== actorId)) await queueMail({ to: r.email, kind, userId: r.userId, farmId: plan.farmId }, mail, t);
