@@ -9,8 +9,11 @@ const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', 
 /** Paragraphs of text, each either words or a link; the HTML keeps a calm, plain look. */
 type Part = string | { link: string; label: string };
 
-function compose(subject: string, parts: Part[]): ComposedMail {
-  const footer = 'You get this mail from Fieldshed. Notices can be turned off under "Mail notices" in the app.';
+/** Notices can be turned off; invitations and password links are sent only when asked for. */
+const NOTICE_FOOTER = 'You get this mail from Fieldshed. Notices can be turned off under "Mail notices" in the app.';
+const ASKED_FOR_FOOTER = 'You get this mail from Fieldshed because someone asked for it with your address.';
+
+function compose(subject: string, parts: Part[], footer = NOTICE_FOOTER): ComposedMail {
   const text = [...parts.map((p) => (typeof p === 'string' ? p : `${p.label}:\n${p.link}`)), '--', footer].join('\n\n');
   const body = parts
     .map((p) =>
@@ -40,7 +43,7 @@ export function invitationMail(input: { farmName: string; role: Role; invitedBy:
     `${who} has invited you to join ${input.farmName} on Fieldshed as ${ROLE_WORDS[input.role]}.`,
     { link: input.link, label: 'Open the invitation' },
     `The link works once and until ${input.expiresAt.toUTCString()}. If you did not expect this invitation, ignore this mail.`,
-  ]);
+  ], ASKED_FOR_FOOTER);
 }
 
 export function passwordResetMail(input: { name: string; link: string; validMinutes: number }): ComposedMail {
@@ -49,7 +52,7 @@ export function passwordResetMail(input: { name: string; link: string; validMinu
     `Someone (we hope you) asked to choose a new password for your Fieldshed account. The link works once, for ${input.validMinutes} minutes.`,
     { link: input.link, label: 'Choose a new password' },
     'If you did not ask, ignore this mail: your password stays as it is.',
-  ]);
+  ], ASKED_FOR_FOOTER);
 }
 
 export function planSubmittedMail(input: { farmName: string; season: string; by: string; link: string }): ComposedMail {
