@@ -1,24 +1,40 @@
-// The terrain job: run the pipeline on the farm's newest elevation model, render the map
-// layers, and store every field's terrain figures. Re-run when a boundary changes (the
-// whole pipeline takes ~1.7 s for 4 M cells, see docs/benchmarks.md, so no partial update).
-// Field borders break overland flow for LS; where water gathers is drawn from unbroken flow.
-// Field labels are 2 bytes per cell (Uint16, up to 65 535 fields), kept as such for the soil-loss map.
+// The terrain job: read the farm's newest elevation model and its fields, run the terrain in a
+// worker thread (terrain/run-in-thread.ts: decode, fill, flow, slope, LS, map layers, each field's
+// figures), then store the layers, the kept grids and every field's figures. The database and
+// file storage are worked here, on the job's side, with the process's own connections; the
+// thread only computes. Re-run when a boundary changes (no partial update).
 import type { Sequelize } from 'sequelize';
 import { ElevationModel, FieldGround, FieldTerrain, TerrainGrid, TerrainLayer } from '../models';
-import type { StoredTerrainStats } from '../models/field-terrain.model';
 import type { FileStorage } from './storage/file-storage';
 import { newKey } from './storage/file-storage';
-import { readDem, runTerrain, renderLayer, reprojectBoundary, fieldTerrainStats, converterBetween, rasterisePolygon, LAYER_LABELS } from './terrain';
-import type { BoundsWgs84, LayerKind, LegendEntry, RenderValues } from './terrain';
+import { runFarmTerrainInThread } from './terrain/run-in-thread';
+import { MAX_TERRAIN_FIELDS } from './terrain/farm-terrain-run';
 import { listFieldFeatures } from './fields.service';
 import type { JobHandler } from './jobs/job-queue';
 import { farmSlopeClasses } from './slope-classes.service';
 import { afterInputsChange } from './input-changes.service';
 
-/** Keep at most this many concentrated-flow points per field for the map. */
-const MAX_FLOW_POINTS = 400;
-/** Labels are Uint16 with 0 for "no field". */
-const MAX_FIELDS = 65_535;
+/** Stage names of a run as a person reads them in the progress message. */
+const STAGE_WORDS: Record<string, string> = {
+  read: 'elevation model read',
+  start: 'starting',
+  fill: 'hollows filled',
+  'flow-direction': 'flow directions',
+  'flow-accumulation': 'upslope areas',
+  ls: 'slope and LS',
+  hillshade: 'shaded relief',
+  'soil-loss': 'soil loss',
+  done: 'grids done',
+};
+
+/** Buffer over a typed array's bytes, no copy. */
+const bytesOf = (a: Uint8Array | Uint16Array | Float32Array): Buffer => Buffer.from(a.buffer, a.byteOffset, a.byteLength);
+
+/** The file's bytes as an ArrayBuffer of their own, which can be handed to the thread. */
+function ownArrayBuffer(b: Buffer): ArrayBuffer {
+  if (b.byteOffset === 0 && b.byteLength === b.buffer.byteLength) return b.buffer as ArrayBuffer;
+  return b.buffer.slice(b.byteOffset, b.byteOffset + b.byteLength) as ArrayBuffer;
+}
 
 export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileStorage }): JobHandler {
   return async (job, report) => {
@@ -29,78 +45,43 @@ export function terrainJobHandler(deps: { sequelize: Sequelize; storage: FileSto
     const model = await ElevationModel.newestOfFarm(job.farmId);
     if (!model) throw new Error('This farm has no elevation model yet.');
     await report(0.02, 'Reading the elevation model');
-    const read = await readDem(await storage.get(model.fileKey));
-    if (!read.ok) throw new Error(`The elevation model cannot be read: ${read.reason}`);
-    const dem = read.dem;
-    const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
-    // Each field's cells carry its label, so overland flow starts afresh at its border.
     const fields = await listFieldFeatures(sequelize, { farmId: job.farmId });
-    if (fields.length > MAX_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_FIELDS}.`);
-    const labels = new Uint16Array(dem.width * dem.height);
-    const ringsByField = new Map<number, Array<Array<[number, number]>>>();
-    fields.forEach((f, idx) => {
-      const rings = reprojectBoundary(f.geometry, dem.epsg);
-      if (!rings.ok) return;
-      ringsByField.set(f.id, rings.rings);
-      for (const cell of rasterisePolygon(rings.rings, frame)) labels[cell] = idx + 1;
-    });
-    // A slope length typed on the Ground tab (terraces, diversions, field roads) caps the flow length.
+    if (fields.length > MAX_TERRAIN_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_TERRAIN_FIELDS}.`);
     const typedById = await FieldGround.typedSlopeLengthsM(job.farmId);
-    const capByLabel = new Float64Array(fields.length + 1).fill(NaN);
-    fields.forEach((f, idx) => (capByLabel[idx + 1] = typedById.get(f.id) ?? NaN));
+    const slopeClasses = await farmSlopeClasses(job.farmId);
+    const demBytes = ownArrayBuffer(await storage.get(model.fileKey));
+
     let last = 0;
     const pending: Promise<void>[] = [];
-    const grids = runTerrain(dem, {
-      flowBreakLabels: labels,
-      maxSlopeLengthMByLabel: capByLabel,
-      onProgress: (f, stage) => {
-        if (f - last >= 0.05 || f === 1) {
-          last = f;
-          pending.push(report(0.05 + 0.6 * f, `Terrain: ${stage}`));
+    const out = await runFarmTerrainInThread(
+      {
+        demBytes,
+        fields: fields.map((f) => ({ id: f.id, geometry: f.geometry, typedSlopeLengthM: typedById.get(f.id) ?? null })),
+        slopeClasses: [...slopeClasses],
+      },
+      (fraction, stage) => {
+        if (fraction - last >= 0.05 || fraction >= 0.7) {
+          last = fraction;
+          pending.push(report(fraction, fraction >= 0.85 ? 'Working out each field' : fraction >= 0.7 ? 'Drawing map layers' : `Terrain: ${STAGE_WORDS[stage] ?? stage}`));
         }
       },
-    });
+    );
     await Promise.all(pending);
-    const slopeClasses = await farmSlopeClasses(job.farmId);
 
-    await report(0.7, 'Drawing map layers');
-    const layers: { kind: LayerKind; values: RenderValues | null }[] = [
-      { kind: 'hillshade', values: grids.hillshade },
-      { kind: 'slope-classes', values: grids.slopePct },
-      { kind: 'ls', values: grids.ls },
-      { kind: 'concentrated-flow', values: grids.contributingAreaM2 },
-    ];
-    const rendered: { kind: LayerKind; key: string; bounds: BoundsWgs84; legend: LegendEntry[] }[] = [];
-    for (const l of layers) {
-      if (!l.values) continue;
-      const r = renderLayer({ kind: l.kind, grid: frame, values: l.values, slopeClasses });
-      if (!r.ok) throw new Error(`Could not draw the ${LAYER_LABELS[l.kind]} layer: ${r.reason}`);
-      const key = newKey('layers', '.png');
-      await storage.put(key, r.png);
-      rendered.push({ kind: l.kind, key, bounds: r.bounds, legend: r.legend });
-    }
-
+    const rendered = out.layers.map((l) => ({ ...l, key: newKey('layers', '.png') }));
+    for (const r of rendered) await storage.put(r.key, bytesOf(r.png));
     // Keep LS and the field labels for pictures drawn on request (soil loss per cell).
     const lsKey = newKey('grids', '.f32');
     const labelsKey = newKey('grids', '.u16');
-    await storage.put(lsKey, Buffer.from(grids.ls.buffer, grids.ls.byteOffset, grids.ls.byteLength));
-    await storage.put(labelsKey, Buffer.from(labels.buffer, labels.byteOffset, labels.byteLength));
+    await storage.put(lsKey, bytesOf(out.ls));
+    await storage.put(labelsKey, bytesOf(out.labels));
     const fieldIdsByLabel = fields.map((f) => f.id);
+    const versionById = new Map(fields.map((f) => [f.id, f.properties.version]));
+    const figures = out.figures.map((f) => ({ fieldId: f.fieldId, elevationModelId: model.id, fieldVersion: versionById.get(f.fieldId)!, stats: f.stats }));
 
-    await report(0.85, 'Working out each field');
-    const toWgs = converterBetween(dem.epsg, 4326);
+    await report(0.9, 'Storing the figures');
+    const frame = out.frame;
     const oldFileKeys = [...(await TerrainLayer.ofFarm(job.farmId)), ...(await TerrainGrid.ofFarm(job.farmId))].map((r) => r.fileKey);
-    const figures = fields.flatMap((f) => {
-      const rings = ringsByField.get(f.id);
-      if (!rings) return [];
-      const s = fieldTerrainStats({ rings, grid: frame, slopePct: grids.slopePct, ls: grids.ls, contributingAreaM2: grids.contributingAreaM2, slopeClasses });
-      if (!s.ok) return [];
-      const { cells: _cells, points, ...flow } = s.stats.concentratedFlow;
-      const step = Math.max(1, Math.ceil(points.length / MAX_FLOW_POINTS));
-      const pointsWgs84 = toWgs.ok ? points.filter((_, i) => i % step === 0).map((p) => toWgs.converter.forward(p) as [number, number]) : [];
-      const stats: StoredTerrainStats = { ...s.stats, concentratedFlow: { ...flow, points: pointsWgs84 }, cellSizeM: dem.rowCellSizeXM[0], epsg: dem.epsg };
-      return [{ fieldId: f.id, elevationModelId: model.id, fieldVersion: f.properties.version, stats }];
-    });
     await sequelize.transaction(async (transaction) => {
       await TerrainGrid.replaceForFarm(
         job.farmId,

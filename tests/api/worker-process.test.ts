@@ -56,7 +56,7 @@ describe('a worker process on its own', () => {
     expect(terrain.body.meanSlopePct).toBeCloseTo(5, 3);
 
     worker!.kill('SIGTERM');
-    expect(await run.exited).toBe(0);
+    expect(await run.exited, run.output()).toBe(0);
     worker = null;
     expect(run.output()).toMatch(/SIGTERM: stopping/);
   }, 40_000);

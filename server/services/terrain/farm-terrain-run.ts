@@ -1,0 +1,101 @@
+// A farm's whole terrain computation from the elevation model's file bytes and the field
+// outlines: decode, label each field's cells, runTerrain, draw the map layers, work out each
+// field's figures. Pure CPU and no database, so it can run in a worker thread
+// (terrain-thread.ts); the caller reads its inputs and stores what it returns.
+// Field borders break overland flow for LS; where water gathers is drawn from unbroken flow.
+// Field labels are 2 bytes per cell (Uint16, up to 65 535 fields), kept for the soil-loss map.
+import type { MultiPolygon, Polygon } from 'geojson';
+import { readDem } from './read-dem';
+import { runTerrain } from './pipeline';
+import { renderLayer, type BoundsWgs84, type LayerKind, type LegendEntry, type RenderValues } from './render-layer';
+import { reprojectBoundary, converterBetween } from './reproject';
+import { rasterisePolygon, type GridFrame } from './rasterise-polygon';
+import { fieldTerrainStats, type FieldTerrainStats } from './field-stats';
+import type { SlopeClass } from './slope-classes';
+import { LAYER_LABELS } from './layer-labels';
+import type { ProgressFn } from './types';
+
+/** Keep at most this many concentrated-flow points per field for the map. */
+const MAX_FLOW_POINTS = 400;
+/** Labels are Uint16 with 0 for "no field". */
+export const MAX_TERRAIN_FIELDS = 65_535;
+
+export type FarmTerrainInput = {
+  /** The GeoTIFF's bytes; the buffer is handed over (transferred) to the thread. */
+  demBytes: ArrayBuffer;
+  fields: Array<{ id: number; geometry: Polygon | MultiPolygon; typedSlopeLengthM: number | null }>;
+  slopeClasses: SlopeClass[];
+};
+
+export type FieldTerrainFigures = Omit<FieldTerrainStats, 'concentratedFlow'> & {
+  concentratedFlow: { minAreaM2: number; cellCount: number; points: Array<[number, number]> };
+  cellSizeM: number;
+  epsg: number;
+};
+
+export type FarmTerrainOutput = {
+  frame: GridFrame & { epsg: number };
+  layers: Array<{ kind: LayerKind; png: Uint8Array; bounds: BoundsWgs84; legend: LegendEntry[] }>;
+  /** LS per cell and the field labels (0 outside fields, else index in `fields` + 1), kept for the soil-loss map. */
+  ls: Float32Array;
+  labels: Uint16Array;
+  figures: Array<{ fieldId: number; stats: FieldTerrainFigures }>;
+};
+
+/** Runs the farm's terrain. Throws an Error with a message for a person when it cannot. */
+export async function runFarmTerrain(input: FarmTerrainInput, onProgress: ProgressFn): Promise<FarmTerrainOutput> {
+  const { fields, slopeClasses } = input;
+  if (fields.length > MAX_TERRAIN_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_TERRAIN_FIELDS}.`);
+  const read = await readDem(input.demBytes);
+  if (!read.ok) throw new Error(`The elevation model cannot be read: ${read.reason}`);
+  const dem = read.dem;
+  onProgress(0.05, 'read');
+  const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
+  // Each field's cells carry its label, so overland flow starts afresh at its border.
+  const labels = new Uint16Array(dem.width * dem.height);
+  const ringsByField = new Map<number, Array<Array<[number, number]>>>();
+  fields.forEach((f, idx) => {
+    const rings = reprojectBoundary(f.geometry, dem.epsg);
+    if (!rings.ok) return;
+    ringsByField.set(f.id, rings.rings);
+    for (const cell of rasterisePolygon(rings.rings, frame)) labels[cell] = idx + 1;
+  });
+  // A slope length typed on the Ground tab (terraces, diversions, field roads) caps the flow length.
+  const capByLabel = new Float64Array(fields.length + 1).fill(NaN);
+  fields.forEach((f, idx) => (capByLabel[idx + 1] = f.typedSlopeLengthM ?? NaN));
+  const grids = runTerrain(dem, {
+    flowBreakLabels: labels,
+    maxSlopeLengthMByLabel: capByLabel,
+    onProgress: (f, stage) => onProgress(0.05 + 0.65 * f, stage),
+  });
+
+  onProgress(0.7, 'drawing map layers');
+  const sources: { kind: LayerKind; values: RenderValues | null }[] = [
+    { kind: 'hillshade', values: grids.hillshade },
+    { kind: 'slope-classes', values: grids.slopePct },
+    { kind: 'ls', values: grids.ls },
+    { kind: 'concentrated-flow', values: grids.contributingAreaM2 },
+  ];
+  const layers: FarmTerrainOutput['layers'] = [];
+  for (const l of sources) {
+    if (!l.values) continue;
+    const r = renderLayer({ kind: l.kind, grid: frame, values: l.values, slopeClasses });
+    if (!r.ok) throw new Error(`Could not draw the ${LAYER_LABELS[l.kind]} layer: ${r.reason}`);
+    layers.push({ kind: l.kind, png: r.png, bounds: r.bounds, legend: r.legend });
+  }
+
+  onProgress(0.85, 'working out each field');
+  const toWgs = converterBetween(dem.epsg, 4326);
+  const figures = fields.flatMap((f) => {
+    const rings = ringsByField.get(f.id);
+    if (!rings) return [];
+    const s = fieldTerrainStats({ rings, grid: frame, slopePct: grids.slopePct, ls: grids.ls, contributingAreaM2: grids.contributingAreaM2, slopeClasses });
+    if (!s.ok) return [];
+    const { cells: _cells, points, ...flow } = s.stats.concentratedFlow;
+    const step = Math.max(1, Math.ceil(points.length / MAX_FLOW_POINTS));
+    const pointsWgs84 = toWgs.ok ? points.filter((_, i) => i % step === 0).map((p) => toWgs.converter.forward(p) as [number, number]) : [];
+    const stats: FieldTerrainFigures = { ...s.stats, concentratedFlow: { ...flow, points: pointsWgs84 }, cellSizeM: dem.rowCellSizeXM[0], epsg: dem.epsg };
+    return [{ fieldId: f.id, stats }];
+  });
+  return { frame, layers, ls: grids.ls, labels, figures };
+}
