@@ -1,4 +1,4 @@
-// Colours a grid into an RGBA PNG for a Leaflet ImageOverlay. The image is resampled (nearest
+// Colours a grid into a palette PNG (palette-png.ts) for a Leaflet ImageOverlay. The image is resampled (nearest
 // cell) onto a Web Mercator (EPSG:3857) aligned frame, the frame Leaflet draws in, so the overlay
 // lines up with the map even though the DEM's grid is rotated against it; the source position of
 // each pixel is interpolated bilinearly from a coarse lattice of exact proj4 transforms.
@@ -6,7 +6,7 @@
 // scheme; concentrated flow in dark blue; nodata transparent.
 // Slope classes may be drawn from the pipeline's 2-byte slope codes and concentrated flow from
 // its 1-bit mask: the class tests on codes give the same pixels as on Float32 slope.
-import { PNG } from 'pngjs';
+import { encodePalettePng } from './palette-png';
 import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
 import { converterBetween } from './reproject';
 import type { GridFrame } from './rasterise-polygon';
@@ -41,21 +41,27 @@ export type RenderResult =
   | { ok: true; png: Buffer; width: number; height: number; bounds: BoundsWgs84; legend: LegendEntry[] }
   | { ok: false; reason: string };
 
-type Colourer = { rgba: (v: number) => number; legend: LegendEntry[] }; // rgba packed 0xRRGGBBAA, 0 = transparent
+/**
+ * How a layer's values become palette indices: `palette` holds the colours packed 0xRRGGBBAA,
+ * entry 0 transparent (nodata and "nothing to draw"); `index(v)` picks the entry for a value.
+ */
+type Colourer = { index: (v: number) => number; palette: number[]; legend: LegendEntry[] };
 
 function hex(c: string, alpha = 255): number {
   return ((parseInt(c.slice(1), 16) << 8) | alpha) >>> 0;
 }
 
 function classColourer(breaks: number[], labels: string[], colours: ReadonlyArray<string | null>): Colourer {
-  const packed = colours.map((c) => (c ? hex(c, 200) : 0));
+  // Entry 1 + j is class j (a class without a colour is transparent).
+  const palette = [0, ...colours.map((c) => (c ? hex(c, 200) : 0))];
   return {
-    rgba: (v) => {
+    index: (v) => {
       if (v !== v) return 0;
       let j = 0;
       while (j < breaks.length && v >= breaks[j]) j++;
-      return packed[Math.min(j, packed.length - 1)];
+      return 1 + Math.min(j, colours.length - 1);
     },
+    palette,
     legend: labels.map((label, j) => ({ label, colour: colours[Math.min(j, colours.length - 1)] ?? 'none' })),
   };
 }
@@ -63,8 +69,10 @@ function classColourer(breaks: number[], labels: string[], colours: ReadonlyArra
 function colourerFor(args: RenderArgs): Colourer {
   switch (args.kind) {
     case 'hillshade':
+      // Entry v is grey v (the hillshade's 0 is nodata: transparent).
       return {
-        rgba: (v) => (v === 0 || v !== v ? 0 : (((v << 24) | (v << 16) | (v << 8) | 255) >>> 0)),
+        index: (v) => (v !== v ? 0 : v),
+        palette: Array.from({ length: 256 }, (_, v) => (v === 0 ? 0 : (((v << 24) | (v << 16) | (v << 8) | 255) >>> 0))),
         legend: [{ label: 'shaded relief, light from the north-west', colour: '#808080' }],
       };
     case 'slope-classes': {
@@ -84,7 +92,7 @@ function colourerFor(args: RenderArgs): Colourer {
     case 'concentrated-flow': {
       const min = args.concentratedFlowMinAreaM2 ?? DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2;
       const blue = hex(FLOW_BLUE, 255);
-      return { rgba: (v) => (v >= min ? blue : 0), legend: [{ label: `concentrated flow (over ${min / 10_000} ha draining to it)`, colour: FLOW_BLUE }] };
+      return { index: (v) => (v >= min ? 1 : 0), palette: [0, blue], legend: [{ label: `concentrated flow (over ${min / 10_000} ha draining to it)`, colour: FLOW_BLUE }] };
     }
     default:
       throw new Error(`unknown layer kind ${String(args.kind)}`);
@@ -96,7 +104,7 @@ export function layerLegend(args: Pick<RenderArgs, 'kind' | 'slopeClasses' | 'co
   return colourerFor(args as RenderArgs).legend;
 }
 
-/** The colour of cell i, packed 0xRRGGBBAA, for the kind of values given. */
+/** The palette index of cell i, for the kind of values given. */
 function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: number) => number } {
   const { values } = args;
   if (values instanceof ContributingAreaMask) {
@@ -105,16 +113,16 @@ function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: numbe
       throw new Error(`concentratedFlowMinAreaM2 is ${args.concentratedFlowMinAreaM2} m² but the mask was made at ${values.minAreaM2} m²`);
     }
     const colourer = colourerFor({ ...args, concentratedFlowMinAreaM2: values.minAreaM2 });
-    const on = colourer.rgba(Infinity);
+    const on = colourer.index(Infinity);
     return { colourer, pixel: (i) => (values.has(i) ? on : 0) };
   }
   const colourer = colourerFor(args);
   if (values instanceof SlopePctGrid) {
     if (args.kind !== 'slope-classes') throw new Error(`a SlopePctGrid can only draw 'slope-classes', not '${args.kind}'`);
-    // The same classes as colourer.rgba on Float32 slope, tested on the codes.
+    // The same classes as colourer.index on Float32 slope, tested on the codes.
     const classes = args.slopeClasses ?? DEFAULT_SLOPE_CLASSES;
     const codeBreaks = classes.slice(1).map((c) => slopeCodeAtLeast(c.minPct));
-    const byClass = classes.map((c, j) => colourer.rgba(j === 0 ? -Infinity : c.minPct));
+    const byClass = classes.map((c, j) => colourer.index(j === 0 ? -Infinity : c.minPct));
     const codes = values.codes;
     return {
       colourer,
@@ -127,7 +135,7 @@ function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: numbe
       },
     };
   }
-  return { colourer, pixel: (i) => colourer.rgba(values[i]) };
+  return { colourer, pixel: (i) => colourer.index(values[i]) };
 }
 
 /** Renders one layer. { ok: false } when the grid's CRS is unknown. */
@@ -151,13 +159,9 @@ export function renderLayer(args: RenderArgs): RenderResult {
       mx0 = Math.min(mx0, mx); my0 = Math.min(my0, my); mx1 = Math.max(mx1, mx); my1 = Math.max(my1, my);
     }
   }
-  const png = new PNG({ width: w, height: h });
-  const data = png.data;
-  const put = (p: number, rgba: number): void => {
-    data[p] = rgba >>> 24; data[p + 1] = (rgba >>> 16) & 255; data[p + 2] = (rgba >>> 8) & 255; data[p + 3] = rgba & 255;
-  };
+  const indices = new Uint8Array(w * h); // 0: transparent
   if (args.noWarp) {
-    for (let i = 0; i < w * h; i++) put(i * 4, pixel(i));
+    for (let i = 0; i < w * h; i++) indices[i] = pixel(i);
   } else {
     // Lattice of source (col, row) positions for output pixels, every `step` pixels.
     const step = 32;
@@ -180,9 +184,8 @@ export function renderLayer(args: RenderArgs): RenderResult {
         const c = (1 - tj) * ((1 - tk) * latticeC[a] + tk * latticeC[a + 1]) + tj * ((1 - tk) * latticeC[b] + tk * latticeC[b + 1]);
         const r = (1 - tj) * ((1 - tk) * latticeR[a] + tk * latticeR[a + 1]) + tj * ((1 - tk) * latticeR[b] + tk * latticeR[b + 1]);
         const ci = Math.floor(c), ri = Math.floor(r);
-        const p = (py * w + px) * 4;
-        if (ci < 0 || ri < 0 || ci >= w || ri >= h) { put(p, 0); continue; }
-        put(p, pixel(ri * w + ci));
+        if (ci < 0 || ri < 0 || ci >= w || ri >= h) continue;
+        indices[py * w + px] = pixel(ri * w + ci);
       }
     }
   }
@@ -192,7 +195,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
   const neWgs = args.noWarp ? ne : toWgs.converter.forward(ne);
   return {
     ok: true,
-    png: PNG.sync.write(png),
+    png: encodePalettePng({ width: w, height: h, indices, palette: colourer.palette }),
     width: w,
     height: h,
     bounds: { west: swWgs[0], south: swWgs[1], east: neWgs[0], north: neWgs[1] },
