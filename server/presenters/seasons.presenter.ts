@@ -2,7 +2,9 @@
 import type { Climate, Cropping, Ground, Season as SeasonShape } from '../../shared/schemas/season';
 import type { FarmClimate, FieldCropping, FieldGround, Season } from '../models';
 
-export const presentSeason = (s: Season): SeasonShape => ({ id: s.id, label: s.label });
+/** A season; with what it holds when the caller counted it (the seasons list). */
+export const presentSeason = (s: Season, holds?: { croppedFields: number; hasPlan: boolean; current: boolean }): SeasonShape =>
+  holds ? { id: s.id, label: s.label, croppedFields: holds.croppedFields, hasPlan: holds.hasPlan, empty: holds.croppedFields === 0 && !holds.hasPlan, current: holds.current } : { id: s.id, label: s.label };
 
 export const presentCropping = (c: FieldCropping, seasonLabel: string): Cropping => ({
   fieldId: c.fieldId,

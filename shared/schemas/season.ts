@@ -4,8 +4,13 @@ import { Crop, Tillage, Practice, StripRotation } from './estimate';
 import { plainText } from './plain-text';
 
 export const SeasonLabel = plainText('season', 40);
-export const SeasonCreate = z.object({ label: SeasonLabel });
-export type Season = { id: number; label: string };
+/** POST /api/farms/:farmId/seasons: a label, and optionally the season whose cropping it starts with. */
+export const SeasonCreate = z.object({ label: SeasonLabel, copyCroppingFrom: plainText('copyCroppingFrom', 40).optional() });
+/**
+ * A season. The seasons list adds what it holds: fields with cropping, whether it has a plan,
+ * empty (neither; it may be deleted) and current (the one screens open on).
+ */
+export type Season = { id: number; label: string; croppedFields?: number; hasPlan?: boolean; empty?: boolean; current?: boolean };
 
 const pct = (f: string) => z.number({ error: `${f} must be a number` }).min(0, `${f} must be at least 0 %`).max(100, `${f} must be at most 100 %`);
 const isoDate = (f: string) => z.string().regex(/^\d{4}-\d{2}-\d{2}$/, `${f} must be a date like 2027-09-15`);

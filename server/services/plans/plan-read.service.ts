@@ -32,7 +32,7 @@ export async function livePlan(planId: number, transaction?: Transaction): Promi
   const comments = await PlanComment.scope('oldestFirst').findAll({ where: { planId }, transaction });
   const newest = await PlanVersion.max<number, PlanVersion>('revision', { where: { planId }, transaction });
   const people = await peopleOf(
-    [plan.createdBy, plan.submittedBy, plan.returnedBy, plan.approvedBy, ...actions.flatMap((a) => [a.createdBy, a.updatedBy]), ...comments.map((c) => c.authorId)],
+    [plan.createdBy, plan.submittedBy, plan.returnedBy, plan.approvedBy, ...actions.flatMap((a) => [a.createdBy, a.updatedBy, a.doneByUser, a.checkedBy]), ...comments.map((c) => c.authorId)],
     transaction,
   );
   const shown = presentPlan({
