@@ -41,6 +41,14 @@ const router = createBrowserRouter([
         lazy: async () => ({ Component: (await import('./pages/budget-page')).BudgetPage }),
       },
       {
+        path: paths.plan.path,
+        lazy: async () => ({ Component: (await import('./pages/plan-page')).PlanPage }),
+      },
+      {
+        path: paths.landownerPlan.path,
+        lazy: async () => ({ Component: (await import('./pages/landowner-plan-page')).LandownerPlanPage }),
+      },
+      {
         path: paths.clientBoard.path,
         lazy: async () => ({ Component: (await import('./pages/board-page')).ClientBoardPage }),
       },
