@@ -52,7 +52,8 @@ export async function markDone(deps: Deps, actor: Actor, actionId: number, input
           ...(checked && keys ? { photoKey: keys.image, photoThumbnailKey: keys.thumbnail, photoContentType: checked.type.mime } : {}),
           version: action.version + 1,
         },
-        { transaction: t },
+        // updated_at and updated_by stay the last change to the plan's work, not to its follow-up.
+        { transaction: t, silent: true },
       );
       await recordEvent(
         { userId: actor.userId, farmId: plan.farmId, entity: 'plan_action', entityId: actionId, action: 'done', detail: { planId: plan.id, doneOn: input.doneOn, photo: Boolean(checked) } },
@@ -76,7 +77,7 @@ export async function markChecked(sequelize: Sequelize, actor: Actor, actionId: 
     const { action, plan } = await lockAction(actionId, version, t);
     if (action.status === 'planned') throw invalid('not_done', 'Only work marked done can be checked: the farmer records it done first.');
     if (action.status === 'checked') return answer(plan.id, actionId, t);
-    await action.update({ status: 'checked', checkedBy: actor.userId, checkedAt: new Date(), version: action.version + 1 }, { transaction: t });
+    await action.update({ status: 'checked', checkedBy: actor.userId, checkedAt: new Date(), version: action.version + 1 }, { transaction: t, silent: true });
     await recordEvent({ userId: actor.userId, farmId: plan.farmId, entity: 'plan_action', entityId: actionId, action: 'checked', detail: { planId: plan.id } }, t);
     return answer(plan.id, actionId, t);
   });

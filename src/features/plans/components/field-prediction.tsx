@@ -18,14 +18,14 @@ export function FieldPrediction({ p, units }: { p: PlanFieldPrediction | undefin
   const changed = p.tonnesSavedPerYr > 0;
   return (
     <div className="grid gap-2 text-sm sm:grid-cols-2" data-testid="field-prediction">
-      <div className="flex flex-col gap-1">
+      <div className="flex flex-col items-start gap-1">
         <span className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Now</span>
         <RiskBadge riskClass={riskClassOf(p.current.aOverT)} />
         <span className="num">
           A {lossFigure(p.current.soilLossTPerHaYr, units).main}, A/T {formatFigure(p.current.aOverT)}
         </span>
       </div>
-      <div className="flex flex-col gap-1">
+      <div className="flex flex-col items-start gap-1">
         <span className="text-xs font-semibold uppercase tracking-wide text-ink-soft">After the planned work</span>
         <RiskBadge riskClass={riskClassOf(p.planned.aOverT)} />
         <span className="num" data-testid="field-prediction-after">
@@ -39,7 +39,10 @@ export function FieldPrediction({ p, units }: { p: PlanFieldPrediction | undefin
             Saves <span className="font-semibold">{tonnesFigure(p.tonnesSavedPerYr, units).main}</span> of soil.
           </>
         ) : (
-          <span className="text-ink-soft">The planned work changes no RUSLE factor here (typed work is not modelled).</span>
+          <span className="text-ink-soft">
+            {p.treatments.length ? 'The planned work changes no RUSLE factor here, so A stays as it is.' : 'Typed work is not modelled, so A stays as it is.'}
+            {p.effects.length ? ' What it does instead:' : ''}
+          </span>
         )}
       </p>
       {p.effects.length ? (

@@ -66,8 +66,10 @@ export function LastSeason({ farmId, previousSeason, units }: Props) {
       )}
       {history.isError ? (
         <Notice tone="error">{history.error.message}</Notice>
-      ) : history.data && history.data.seasons.length > 0 ? (
+      ) : history.data && history.data.seasons.length > 1 ? (
         <SoilLossChart history={history.data} units={units} />
+      ) : history.data ? (
+        <p className="text-sm text-ink-soft" data-testid="soil-loss-chart-waiting">Each field’s A across seasons is drawn here once the farm has a second season.</p>
       ) : null}
     </section>
   );

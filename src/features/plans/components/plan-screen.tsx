@@ -56,8 +56,13 @@ function Sections({ planId, role, fields, units }: { planId: number; role: Role;
   };
 
   return (
-    <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(300px,34%)]">
-      <div className="flex min-w-0 flex-col gap-4">
+    // On a phone: the review first, then the work, the comments and the versions; on a wide
+    // screen the work on the left and the rest beside it.
+    <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(300px,34%)] lg:grid-rows-[auto_auto_auto_1fr]">
+      <div className="min-w-0 lg:col-start-2 lg:row-start-1">
+        <ReviewBar plan={p} role={role} onStep={(step) => review.mutateAsync(step)} />
+      </div>
+      <div className="flex min-w-0 flex-col gap-4 lg:col-start-1 lg:row-span-4 lg:row-start-1">
         <PlanSummary plan={p} units={units} />
         {p.actions.length === 0 ? (
           <Notice testId="plan-empty">
@@ -90,8 +95,7 @@ function Sections({ planId, role, fields, units }: { planId: number; role: Role;
         ) : null}
         {p.state === 'submitted' && writer ? <p className="text-sm text-ink-soft">The work cannot be changed while the advisor reviews it; work done can still be recorded.</p> : null}
       </div>
-      <aside className="flex min-w-0 flex-col gap-4">
-        <ReviewBar plan={p} role={role} onStep={(step) => review.mutateAsync(step)} />
+      <aside className="flex min-w-0 flex-col gap-4 lg:col-start-2 lg:row-start-2">
         <section aria-labelledby="conversation-heading" className="flex flex-col gap-2" data-testid="plan-conversation">
           <h2 id="conversation-heading" className="text-lg font-semibold">
             Comments on the plan

@@ -1,5 +1,5 @@
-// Each field's A across seasons, as small line charts side by side (one per field, same scale),
-// T drawn as a dashed line where it is known. Figures come from the assessments stored per season.
+// Each field's A across seasons, as small line charts side by side (one per field, each on its
+// own scale with its top figure written), T drawn as a dashed line where it is known. Figures come from the assessments stored per season.
 import type { Units } from '../../../../shared/schemas/auth';
 import type { SoilLossHistory } from '../../../../shared/schemas/changes';
 import { tPerHaToTonPerAc } from '../../../../shared/erosion/units';
@@ -14,11 +14,8 @@ type Props = { history: SoilLossHistory; units: Units };
 export function SoilLossChart({ history, units }: Props) {
   const conv = (a: number) => (units === 'ac' ? tPerHaToTonPerAc(a) : a);
   const unit = units === 'ac' ? 'US t/ac/yr' : 't/ha/yr';
-  const all = history.fields.flatMap((f) => f.points.map((p) => (p.soilLossTPerHaYr == null ? 0 : conv(p.soilLossTPerHaYr))));
-  const max = Math.max(1, ...all) * 1.1;
   const n = history.seasons.length;
   const x = (i: number) => PAD.l + (n <= 1 ? (W - PAD.l - PAD.r) / 2 : (i * (W - PAD.l - PAD.r)) / (n - 1));
-  const y = (v: number) => PAD.t + (1 - v / max) * (H - PAD.t - PAD.b);
   return (
     <div className="flex flex-col gap-1" data-testid="soil-loss-chart">
       <p className="text-sm text-ink-soft">A in {unit} per season (stored assessments); the dashed line is T where known.</p>
@@ -27,6 +24,8 @@ export function SoilLossChart({ history, units }: Props) {
           const pts = f.points.map((p) => ({ i: history.seasons.indexOf(p.season), a: p.soilLossTPerHaYr, t: p.aOverT && p.soilLossTPerHaYr ? p.soilLossTPerHaYr / p.aOverT : null }));
           const known = pts.filter((p): p is { i: number; a: number; t: number | null } => p.a != null);
           const t = known.find((p) => p.t != null)?.t ?? null;
+          const max = Math.max(0.1, ...known.map((p) => conv(p.a)), t != null ? conv(t) : 0) * 1.1;
+          const y = (v: number) => PAD.t + (1 - v / max) * (H - PAD.t - PAD.b);
           const line = known.map((p, k) => `${k ? 'L' : 'M'}${x(p.i).toFixed(1)},${y(conv(p.a)).toFixed(1)}`).join(' ');
           const words = known.map((p) => `${history.seasons[p.i]}: ${formatFigure(conv(p.a))}`).join(', ');
           return (
