@@ -21,6 +21,9 @@ import { treatmentsRoutes } from './routes/treatments.routes';
 import { factorOverridesRoutes } from './routes/factor-overrides.routes';
 import { plansRoutes } from './routes/plans.routes';
 import { changesRoutes } from './routes/changes.routes';
+import { peopleRoutes } from './routes/people.routes';
+import { devMailboxRoutes } from './routes/dev-mailbox.routes';
+import { setMailContext } from './services/mail/outbox';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
 import { JSON_BODY_MAX_BYTES } from '../shared/limits';
@@ -33,9 +36,13 @@ export type AppOptions = {
   /** The background job queue; without it, uploads that need processing answer 503. */
   jobs?: JobQueue;
   clientDir?: string;
+  /** True while mail goes to the local fake mail server: GET /api/dev/mailbox then shows its catch. */
+  devMailbox?: boolean;
 };
 
-export function createApp({ sequelize, config, clientDir, jobs, storage: givenStorage }: AppOptions): Express {
+export function createApp({ sequelize, config, clientDir, jobs, storage: givenStorage, devMailbox = false }: AppOptions): Express {
+  // Mail written to the outbox goes to the job queue once its transaction commits.
+  setMailContext({ dispatch: jobs ? (id) => jobs.sendMail(id) : null, publicUrl: config.publicUrl });
   const storage = givenStorage ?? new LocalFileStorage(path.join(config.dataDir, 'uploads'));
   const terrain = terrainRoutes({ sequelize, storage, jobs });
   initModels(sequelize);
@@ -62,10 +69,15 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
     res.status(db ? 200 : 503).json({ ok: db, db });
   });
   api.get('/config', (_req, res) => {
-    res.json({ tileUrl: config.tileUrl, tileAttribution: config.tileAttribution });
+    res.json({ tileUrl: config.tileUrl, tileAttribution: config.tileAttribution, devMailbox });
   });
   api.use('/auth', authRoutes(sequelize, config));
+  const people = peopleRoutes(sequelize, config);
+  api.use('/invitations', people.invitations);
+  // Without the fake there is no mailbox: 404 for everyone, signed in or not.
+  api.use('/dev', devMailbox ? devMailboxRoutes() : notFoundApi);
   api.use(requireUser(config));
+  api.use('/farms', people.farms);
   api.use('/farms', farmsRoutes({ sequelize, jobs }));
   api.use('/farms', fieldImportRoutes({ sequelize, jobs }));
   api.use('/farms', terrain.farms);

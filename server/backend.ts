@@ -6,8 +6,11 @@ import { loadConfig, type Config } from './config';
 import { openDatabase, type OpenDatabase } from './db/database';
 import { initModels } from './models';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
-import type { JobHandlers } from './services/jobs/job-queue';
+import type { JobHandlers, TaskHandlers } from './services/jobs/job-queue';
 import { terrainJobHandler } from './services/farm-terrain.service';
+import type { MailTransport } from './services/mail/mail-transport';
+import { sendMailJobHandler } from './services/mail/send-mail-job';
+import { dailyNoticesHandler } from './services/notices/daily-notices';
 
 export type Backend = { config: Config; db: OpenDatabase; storage: FileStorage };
 
@@ -23,6 +26,14 @@ export async function openBackend(): Promise<Backend> {
 /** Every kind of background job and the code that works it. */
 export function jobHandlers({ db, storage }: Backend): JobHandlers {
   return { terrain: terrainJobHandler({ sequelize: db.sequelize, storage }) };
+}
+
+/** Mail (where this process has a mail transport) and the daily notices. */
+export function taskHandlers({ db, config }: Backend, mail: MailTransport | null): TaskHandlers {
+  return {
+    ...(mail ? { mail: sendMailJobHandler(mail, config) } : {}),
+    dailyNotices: dailyNoticesHandler(db.sequelize, config),
+  };
 }
 
 /** Runs `stop` once on the first SIGINT or SIGTERM, then exits. */

@@ -13,6 +13,9 @@ const Env = z.object({
   LOCAL_PG_PORT: z.coerce.number().int().min(1).max(65535).default(54329),
   DATABASE_URL: z.string().url().optional(),
   SMTP_URL: z.string().url().optional(),
+  PUBLIC_URL: z.string().url().optional(),
+  MAIL_FROM: z.string().min(3).default('Fieldshed <no-reply@fieldshed.localhost>'),
+  REMINDER_DAYS: z.coerce.number().int().min(1).max(60).default(7),
   TILE_URL: z.string().optional(),
   TILE_ATTRIBUTION: z.string().optional(),
   SEED_DEMO: boolish.default(true),
@@ -27,7 +30,14 @@ export type Config = {
   dataDir: string;
   localPgPort: number;
   databaseUrl: string | undefined;
+  /** Real mail server; unset: `npm start` runs the local fake and the dev mailbox. */
   smtpUrl: string | undefined;
+  /** The address people open the product at: links in mail start with it (no trailing slash). */
+  publicUrl: string;
+  /** The From of every mail. */
+  mailFrom: string;
+  /** How many days before a planned action's date its reminder goes out. */
+  reminderDays: number;
   tileUrl: string | null;
   tileAttribution: string | null;
   seedDemo: boolean;
@@ -52,6 +62,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     localPgPort: e.LOCAL_PG_PORT,
     databaseUrl: e.DATABASE_URL,
     smtpUrl: e.SMTP_URL,
+    publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST === '0.0.0.0' ? '127.0.0.1' : e.HOST}:${e.PORT}`).replace(/\/+$/, ''),
+    mailFrom: e.MAIL_FROM,
+    reminderDays: e.REMINDER_DAYS,
     tileUrl: e.TILE_URL ?? null,
     tileAttribution: e.TILE_ATTRIBUTION ?? null,
     seedDemo: e.SEED_DEMO,

@@ -5,7 +5,9 @@ import type { Server } from 'node:http';
 import { stopLocalCluster } from './db/local-cluster';
 import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seeders/demo-farm';
 import { createApp } from './app';
-import { openBackend, jobHandlers, stopOnSignals } from './backend';
+import { openBackend, jobHandlers, taskHandlers, stopOnSignals } from './backend';
+import { openMailTransport } from './services/mail/mail-transport';
+import { requeueStuckMail, setMailContext } from './services/mail/outbox';
 import { JobQueue } from './services/jobs/job-queue';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
 import { seedDemoSeason } from './db/seeders/demo-season';
@@ -38,8 +40,12 @@ async function main(): Promise<void> {
   const backend = await openBackend();
   const { config, db, storage } = backend;
   startedClusterDir = db.localClusterDir;
+  // SMTP_URL unset: a local fake mail server on loopback catches the mail (the Dev mailbox).
+  const mail = await openMailTransport(config);
   // One worker in this process; `npm run worker` adds more, here or on other machines.
-  const jobs = await JobQueue.start(db.url, jobHandlers(backend));
+  const jobs = await JobQueue.start(db.url, jobHandlers(backend), '', taskHandlers(backend, mail));
+  // Before the demo seed, so the seeded plan's notice to the advisor goes out at once.
+  setMailContext({ dispatch: (id) => jobs.sendMail(id), publicUrl: config.publicUrl });
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {
     await seedDemoSeason(db.sequelize);
     await seedDemoPlan(db.sequelize);
@@ -51,7 +57,9 @@ async function main(): Promise<void> {
   const refreshedFarms = await refreshStaleAssessments(db.sequelize);
   if (refreshedFarms) console.log(`Brought the stored assessments of ${refreshedFarms} farm${refreshedFarms === 1 ? '' : 's'} up to date.`);
   await buildClientIfStale();
-  const app = createApp({ sequelize: db.sequelize, config, storage, jobs });
+  const app = createApp({ sequelize: db.sequelize, config, storage, jobs, devMailbox: !!mail.fake });
+  const requeued = await requeueStuckMail();
+  if (requeued) console.log(`Queued again ${requeued} mail${requeued === 1 ? '' : 's'} left unsent by an earlier run.`);
   const server: Server = app.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once('listening', resolve);
@@ -60,6 +68,7 @@ async function main(): Promise<void> {
     );
   });
   console.log(`\nFieldshed is running at http://${config.host}:${config.port}`);
+  if (mail.fake) console.log(`Mail goes to a local fake mail server (127.0.0.1:${mail.fake.port}); read it at ${config.publicUrl}/dev/mailbox`);
   if (config.seedDemo) {
     console.log(`Demo sign-ins (password ${DEMO_PASSWORD}):`);
     for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(9)} ${a.email}`);
@@ -67,6 +76,7 @@ async function main(): Promise<void> {
   stopOnSignals(async () => {
     server.close();
     await jobs.stop();
+    await mail.close();
     await db.sequelize.close().catch(() => undefined);
     if (db.localClusterDir) await stopLocalCluster(db.localClusterDir).catch(() => undefined);
   });

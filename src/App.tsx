@@ -14,6 +14,10 @@ import { SignInPage } from './pages/sign-in-page';
 const router = createBrowserRouter([
   { path: paths.signIn.path, element: <SignInPage /> },
   { path: paths.register.path, element: <RegisterPage /> },
+  { path: paths.invitation.path, lazy: async () => ({ Component: (await import('./pages/accept-invitation-page')).AcceptInvitationPage }) },
+  { path: paths.forgotPassword.path, lazy: async () => ({ Component: (await import('./pages/forgot-password-page')).ForgotPasswordPage }) },
+  { path: paths.resetPassword.path, lazy: async () => ({ Component: (await import('./pages/reset-password-page')).ResetPasswordPage }) },
+  { path: paths.devMailbox.path, lazy: async () => ({ Component: (await import('./pages/dev-mailbox-page')).DevMailboxPage }) },
   {
     element: <RequireAuth />,
     hydrateFallbackElement: <Loading />,
@@ -47,6 +51,14 @@ const router = createBrowserRouter([
       {
         path: paths.landownerPlan.path,
         lazy: async () => ({ Component: (await import('./pages/landowner-plan-page')).LandownerPlanPage }),
+      },
+      {
+        path: paths.people.path,
+        lazy: async () => ({ Component: (await import('./pages/people-page')).PeoplePage }),
+      },
+      {
+        path: paths.account.path,
+        lazy: async () => ({ Component: (await import('./pages/account-page')).AccountPage }),
       },
       {
         path: paths.clientBoard.path,

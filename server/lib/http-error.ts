@@ -18,3 +18,5 @@ export const notFound = (what = 'That') => new HttpError(404, 'not_found', `${wh
 export const conflict = (code: string, message: string, details?: unknown) => new HttpError(409, code, message, details);
 export const tooLarge = (message: string) => new HttpError(413, 'too_large', message);
 export const unsupportedType = (message: string) => new HttpError(415, 'unsupported_file_type', message);
+export const gone = (code: string, message: string) => new HttpError(410, code, message);
+export const tooMany = (code: string, message: string) => new HttpError(429, code, message);

@@ -1,7 +1,7 @@
 import { Plan } from './plan.model';
 import { Field } from './field.model';
 import { User } from './user.model';
-import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize, type NonAttribute } from 'sequelize';
+import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize, type NonAttribute, type Transaction } from 'sequelize';
 import type { ActionStatus, ActionTreatment } from '../../shared/schemas/plans';
 
 /** One piece of planned work on one field: a treatment (or typed work), amounts, cost, when, who; versioned. */
@@ -84,6 +84,12 @@ export class PlanAction extends Model<InferAttributes<PlanAction>, InferCreation
         scopes: { inOrder: { order: [['fieldId', 'ASC'], ['id', 'ASC']] } },
       },
     );
+  }
+
+  /** The fields a plan's actions are on. */
+  static async fieldIdsOfPlan(planId: number, transaction?: Transaction): Promise<number[]> {
+    const rows = await PlanAction.findAll({ attributes: ['fieldId'], where: { planId }, group: ['fieldId'], transaction });
+    return rows.map((r) => r.fieldId);
   }
 
   static associate(): void {

@@ -3,11 +3,16 @@ import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
 import type { Sequelize } from 'sequelize';
 import type { Config } from '../config';
 import { Login, Register, UpdateMe } from '../../shared/schemas/auth';
+import { ChangePassword, ForgotPassword, NoticeSettingsUpdate, ResetPassword } from '../../shared/schemas/people';
 import { validate } from '../middleware/validate';
 import { requireUser } from '../middleware/auth';
+import { perIpLimit } from '../middleware/rate-limits';
 import { register, signIn, updateProfile } from '../services/auth.service';
+import { changePassword, forgotPassword, resetPassword } from '../services/people/passwords.service';
+import { noticeSettings, putNoticeSettings } from '../services/notice-settings.service';
+import { LINK_USES_PER_IP, RESETS_PER_IP } from '../services/people/abuse-limits';
 import { presentUser } from '../presenters/user.presenter';
-import { clearSession, issueSession } from '../services/sessions';
+import { endSession, issueSession, SESSION_COOKIE } from '../services/sessions';
 
 export function authRoutes(sequelize: Sequelize, config: Config): Router {
   const r = Router();
@@ -23,21 +28,49 @@ export function authRoutes(sequelize: Sequelize, config: Config): Router {
     },
   });
 
+  const forgotLimit = perIpLimit(RESETS_PER_IP, 'Too many requests for a new password from this network; wait a quarter of an hour.');
+  const linkLimit = perIpLimit(LINK_USES_PER_IP, 'Too many attempts from this network; wait a quarter of an hour.');
+
   r.post('/register', validate(Register), async (req, res) => {
     const user = await register(sequelize, req.body);
-    issueSession(res, config, user.id);
+    await issueSession(res, config, user.id);
     res.status(201).json({ user: presentUser(user) });
   });
 
   r.post('/login', loginLimit, validate(Login), async (req, res) => {
     const user = await signIn(req.body.email, req.body.password);
-    issueSession(res, config, user.id);
+    await issueSession(res, config, user.id);
     res.json({ user: presentUser(user) });
   });
 
-  r.post('/logout', (_req, res) => {
-    clearSession(res, config);
+  r.post('/logout', async (req, res) => {
+    await endSession(res, config, req.cookies?.[SESSION_COOKIE]);
     res.status(204).end();
+  });
+
+  // The same answer whether or not the address has an account.
+  r.post('/forgot', forgotLimit, validate(ForgotPassword), async (req, res) => {
+    await forgotPassword(sequelize, config, req.body.email);
+    res.status(202).json({ ok: true, message: 'If that address has an account, a link to choose a new password is on its way.' });
+  });
+
+  r.post('/reset', linkLimit, validate(ResetPassword), async (req, res) => {
+    const user = await resetPassword(sequelize, req.body.token, req.body.password);
+    await issueSession(res, config, user.id);
+    res.json({ user: presentUser(user) });
+  });
+
+  r.post('/password', linkLimit, requireUser(config), validate(ChangePassword), async (req, res) => {
+    await changePassword(sequelize, req.user!, res.locals.sessionTokenHash as string, req.body);
+    res.status(204).end();
+  });
+
+  r.get('/me/notices', requireUser(config), async (req, res) => {
+    res.json(await noticeSettings(req.user!.id));
+  });
+
+  r.put('/me/notices', requireUser(config), validate(NoticeSettingsUpdate), async (req, res) => {
+    res.json(await putNoticeSettings(req.user!.id, req.body));
   });
 
   r.get('/me', requireUser(config), (req, res) => {

@@ -1,8 +1,13 @@
-// Signed JWT in an httpOnly SameSite cookie: the API stays stateless (DESIGN.md scale path).
+// The session cookie: a signed JWT naming the user and a random session token. The token's hash is
+// a row in user_sessions, so signing out, a new password or an expiry ends the session at once;
+// the row is checked in the same query that loads the user (User.findSignedIn).
 import { createSecretKey, type KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import type { Response } from 'express';
+import type { Transaction } from 'sequelize';
 import type { Config } from '../config';
+import { UserSession } from '../models';
+import { hashToken, newToken } from './one-time-token';
 
 export const SESSION_COOKIE = 'fieldshed_session';
 
@@ -21,28 +26,37 @@ function sessionKey(config: Config): KeyObject {
   return key;
 }
 
-export function issueSession(res: Response, config: Config, userId: number): void {
-  const token = jwt.sign({ sub: String(userId) }, sessionKey(config), { algorithm: 'HS256', expiresIn: `${config.sessionHours}h` });
-  res.cookie(SESSION_COOKIE, token, {
+/** Starts a session for the user and sets its cookie; gives the new session's token hash. */
+export async function issueSession(res: Response, config: Config, userId: number, transaction?: Transaction): Promise<string> {
+  const { token, hash } = newToken();
+  await UserSession.removeExpiredOf(userId);
+  await UserSession.create({ userId, tokenHash: hash, expiresAt: new Date(Date.now() + config.sessionHours * 3600 * 1000) }, { transaction });
+  const signed = jwt.sign({ sub: String(userId), sid: token }, sessionKey(config), { algorithm: 'HS256', expiresIn: `${config.sessionHours}h` });
+  res.cookie(SESSION_COOKIE, signed, {
     httpOnly: true,
     sameSite: 'lax',
     secure: config.isProduction,
     maxAge: config.sessionHours * 3600 * 1000,
     path: '/',
   });
+  return hash;
 }
 
-export function clearSession(res: Response, config: Config): void {
+/** Ends the session in the cookie (if any) and clears the cookie. */
+export async function endSession(res: Response, config: Config, cookie: string | undefined): Promise<void> {
+  const session = readSession(cookie, config);
+  if (session) await UserSession.endByHash(session.tokenHash);
   res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'lax', secure: config.isProduction, path: '/' });
 }
 
-/** The user id in a valid, unexpired token, or null. */
-export function readSession(token: string | undefined, config: Config): number | null {
-  if (!token) return null;
+/** The user id and session token hash of a validly signed, unexpired cookie, or null. */
+export function readSession(cookie: string | undefined, config: Config): { userId: number; tokenHash: string } | null {
+  if (!cookie) return null;
   try {
-    const payload = jwt.verify(token, sessionKey(config), { algorithms: ['HS256'] }) as { sub?: string };
-    const id = Number(payload.sub);
-    return Number.isInteger(id) && id > 0 ? id : null;
+    const payload = jwt.verify(cookie, sessionKey(config), { algorithms: ['HS256'] }) as { sub?: string; sid?: string };
+    const userId = Number(payload.sub);
+    if (!Number.isInteger(userId) || userId <= 0 || typeof payload.sid !== 'string') return null;
+    return { userId, tokenHash: hashToken(payload.sid) };
   } catch {
     return null;
   }

@@ -48,6 +48,9 @@ export function AppHeader({ farmName, screen, role, menu }: Props) {
             <NavLink to={paths.board.getHref(farmId)} data-testid="nav-board" className={navClass}>
               Priority board
             </NavLink>
+            <NavLink to={paths.people.getHref(farmId)} data-testid="nav-people" className={navClass}>
+              People
+            </NavLink>
             {role === 'farmer' || role === 'advisor' ? (
               <>
                 <NavLink to={paths.budget.getHref(farmId)} data-testid="nav-budget" className={navClass}>

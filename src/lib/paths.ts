@@ -26,6 +26,12 @@ export const paths = {
       `/farms/${farmId}/board${season ? `?season=${encodeURIComponent(season)}` : ''}`,
   },
   clientBoard: { path: '/board', getHref: () => '/board' },
+  people: { path: '/farms/:farmId/people', getHref: (farmId: number | string) => `/farms/${farmId}/people` },
+  invitation: { path: '/invitations/:token', getHref: (token: string) => `/invitations/${encodeURIComponent(token)}` },
+  forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+  resetPassword: { path: '/reset-password', getHref: (token: string) => `/reset-password?token=${encodeURIComponent(token)}` },
+  account: { path: '/account', getHref: () => '/account' },
+  devMailbox: { path: '/dev/mailbox', getHref: () => '/dev/mailbox' },
   budget: {
     path: '/farms/:farmId/budget',
     getHref: (farmId: number | string, season?: string | null) =>

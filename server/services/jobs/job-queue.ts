@@ -21,10 +21,22 @@ export type JobStatus = {
 export type JobHandler = (job: JobStatus, report: (progress: number, message: string) => Promise<void>) => Promise<string>;
 export type JobHandlers = Partial<Record<JobKind, JobHandler>>;
 
+/** Work with no processing_jobs row (nobody watches a progress bar for it). */
+export type TaskHandlers = {
+  /** Sends one mail of the outbox; a throw is tried again later. */
+  mail?: (mailId: number) => Promise<void>;
+  /** Once a day: reminders before planned actions and the digest of an advisor's changes. */
+  dailyNotices?: () => Promise<void>;
+};
+
 export const BOSS_SCHEMA = 'pgboss';
 const JOB_KINDS: JobKind[] = ['terrain'];
 /** How long stopping waits for running jobs before it marks them failed. */
 const STOP_WAIT_MS = 20_000;
+/** A mail server that is down delays mail: 10 tries, 30 s apart and doubling (about 8 h in all). */
+const MAIL_RETRY = { retryLimit: 10, retryDelay: 30, retryBackoff: true, expireInSeconds: 120 };
+/** Every day at 06:00 UTC. */
+const DAILY_NOTICES_CRON = '0 6 * * *';
 const CUT_SHORT_MESSAGE = 'Stopped before it finished because its worker shut down; run it again.';
 
 const statusOf = (j: ProcessingJob): JobStatus => ({
@@ -50,9 +62,11 @@ export class JobQueue {
   /**
    * Starts pg-boss; with `handlers` this process also works the queues. `queuePrefix` keeps
    * separate sets of workers apart on one database (each test file has its own file storage).
+   * `tasks` are worked here too: mail (only where a mail transport is open) and the daily notices.
    */
-  static async start(url: string, handlers?: JobHandlers, queuePrefix = ''): Promise<JobQueue> {
-    const boss = new PgBoss({ connectionString: url, schema: BOSS_SCHEMA, max: 3, supervise: !!handlers, schedule: false });
+  static async start(url: string, handlers?: JobHandlers, queuePrefix = '', tasks: TaskHandlers = {}): Promise<JobQueue> {
+    const working = !!handlers || !!tasks.mail || !!tasks.dailyNotices;
+    const boss = new PgBoss({ connectionString: url, schema: BOSS_SCHEMA, max: 3, supervise: working, schedule: !!tasks.dailyNotices });
     boss.on('error', (e) => console.error('job queue:', e));
     await boss.start();
     const q = new JobQueue(boss, queuePrefix);
@@ -64,7 +78,23 @@ export class JobQueue {
         await boss.work<{ jobId: string }>(name, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => q.run(job.data.jobId, handler));
       }
     }
+    const mailQueue = `${queuePrefix}mail`;
+    await boss.createQueue(mailQueue).catch(() => undefined);
+    const sendMail = tasks.mail;
+    if (sendMail) await boss.work<{ mailId: number }>(mailQueue, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => sendMail(job.data.mailId));
+    const dailyQueue = `${queuePrefix}daily-notices`;
+    await boss.createQueue(dailyQueue).catch(() => undefined);
+    const daily = tasks.dailyNotices;
+    if (daily) {
+      await boss.schedule(dailyQueue, DAILY_NOTICES_CRON, {}, { tz: 'UTC' });
+      await boss.work(dailyQueue, { pollingIntervalSeconds: 30, batchSize: 1 }, async () => daily());
+    }
     return q;
+  }
+
+  /** Hands one outbox mail to whichever worker sends mail. */
+  async sendMail(mailId: number): Promise<void> {
+    await this.boss.send(`${this.prefix}mail`, { mailId }, MAIL_RETRY);
   }
 
   async enqueue(kind: JobKind, farmId: number, userId: number | null, payload: Record<string, unknown>): Promise<string> {

@@ -7,6 +7,7 @@ import { badRequest, invalid } from '../../lib/http-error';
 import { Plan, PlanAction, PlanComment, PlanVersion, User } from '../../models';
 import { presentComment } from '../../presenters/plan.presenter';
 import { recordEvent } from '../audit';
+import { noticePlanEvent } from '../notices/plan-notices';
 import { livePlan } from './plan-read.service';
 import { lockPlan, type Actor } from './plans.service';
 
@@ -28,6 +29,7 @@ export async function submitPlan(sequelize: Sequelize, actor: Actor, planId: num
     if ((await PlanAction.count({ where: { planId }, transaction: t })) === 0) throw invalid('plan_empty', 'Add at least one action before submitting the plan.');
     await plan.update({ state: 'submitted', version: plan.version + 1, submittedBy: actor.userId, submittedAt: new Date() }, { transaction: t });
     await event(actor, plan, 'submitted', t);
+    await noticePlanEvent({ plan, event: 'submitted', actorId: actor.userId }, t);
     return livePlan(planId, t);
   });
 }
@@ -39,6 +41,7 @@ export async function returnPlan(sequelize: Sequelize, actor: Actor, planId: num
     await plan.update({ state: 'returned', version: plan.version + 1, returnedBy: actor.userId, returnedAt: new Date() }, { transaction: t });
     await PlanComment.create({ planId, actionId: null, revision: plan.revision, kind: 'return', authorId: actor.userId, body: input.comment }, { transaction: t });
     await event(actor, plan, 'returned', t);
+    await noticePlanEvent({ plan, event: 'returned', actorId: actor.userId, comment: input.comment }, t);
     return livePlan(planId, t);
   });
 }
@@ -57,6 +60,7 @@ export async function approvePlan(sequelize: Sequelize, actor: Actor, planId: nu
     const snapshot: PlanShape = { ...approved, approvedRevision: plan.revision, comments: [] };
     await PlanVersion.create({ planId, revision: plan.revision, snapshot, approvedBy: actor.userId, approvedAt }, { transaction: t });
     await event(actor, plan, 'approved', t);
+    await noticePlanEvent({ plan, event: 'approved', actorId: actor.userId }, t);
     return { ...approved, approvedRevision: plan.revision };
   });
 }

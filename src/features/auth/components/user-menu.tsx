@@ -1,5 +1,5 @@
-// Header menu: the signed-in user, area units (hectares or acres, saved on the user) and sign out.
-import { useNavigate } from 'react-router-dom';
+// Header menu: the signed-in user (a link to their account), area units (hectares or acres, saved on the user) and sign out.
+import { Link, useNavigate } from 'react-router-dom';
 import { paths } from '../../../lib/paths';
 import { UNIT_LABELS } from '../../../lib/units';
 import type { Units } from '../../../../shared/schemas/auth';
@@ -42,9 +42,10 @@ export function UserMenu() {
           Units not saved: {updateMe.error.message}
         </span>
       ) : null}
-      <span className="hidden text-ink-soft sm:inline" data-testid="user-name">
-        {user.name}
-      </span>
+      <Link to={paths.account.getHref()} className="text-ink-soft underline-offset-2 hover:underline" title="Your account: password and mail notices" data-testid="user-name">
+        <span className="hidden sm:inline">{user.name}</span>
+        <span className="sm:hidden">Account</span>
+      </Link>
       <button
         type="button"
         className="rounded border border-ink-faint px-2 py-0.5 font-medium hover:bg-paper-deep"
