@@ -4,6 +4,7 @@ import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequeli
 import type { Cropping, CroppingUpdate, Season as SeasonShape } from '../../shared/schemas/season';
 import { badRequest, conflict, HttpError, notFound } from '../lib/http-error';
 import { FieldCropping, Plan, Season } from '../models';
+import { withEditor } from '../models/with-editor';
 import { presentCropping, presentSeason } from '../presenters/seasons.presenter';
 import { recordEvent } from './audit';
 import { afterInputsChange, type InputChange } from './input-changes.service';
@@ -116,7 +117,7 @@ export async function deleteSeason(sequelize: Sequelize, actor: { userId: number
 
 export async function getCropping(fieldId: number, seasonLabel: string | undefined, farmId: number): Promise<Cropping> {
   const season = await resolveSeason(farmId, seasonLabel);
-  const row = await FieldCropping.findOne({ where: { fieldId, seasonId: season.id } });
+  const row = await FieldCropping.findOne({ where: { fieldId, seasonId: season.id }, include: [withEditor] });
   if (!row) throw new HttpError(404, 'no_cropping', `This field has no cropping for season ${season.label} yet.`);
   return presentCropping(row, season.label);
 }
@@ -134,7 +135,7 @@ export async function putCropping(sequelize: Sequelize, actor: { userId: number 
   return sequelize.transaction(async (t) => {
     const { season, created } = await ensureSeason(field.farmId, input.season, t);
     const existing = await FieldCropping.findOne({ where: { fieldId: field.id, seasonId: season.id }, transaction: t, lock: t.LOCK.UPDATE });
-    if (existing && existing.version !== input.version) throw staleCropping(season.label, input.version, presentCropping(existing, season.label));
+    if (existing && existing.version !== input.version) throw staleCropping(season.label, input.version, presentCropping(await existing.reload({ include: [withEditor], transaction: t }), season.label));
     const values = {
       crop: input.crop,
       tillage: input.tillage ?? null,
@@ -164,6 +165,6 @@ export async function putCropping(sequelize: Sequelize, actor: { userId: number 
     const change: InputChange = created ? { kind: 'season', farmId: field.farmId } : { kind: 'cropping', farmId: field.farmId, fieldIds: [field.id] };
     await afterInputsChange({ sequelize }, change, actor, t);
     // Read back: REAL columns round what was sent, and the answer should match a later GET.
-    return presentCropping(await row.reload({ transaction: t }), season.label);
+    return presentCropping(await row.reload({ include: [withEditor], transaction: t }), season.label);
   });
 }

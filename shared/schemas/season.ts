@@ -10,6 +10,9 @@ export const SeasonCreate = z.object({ label: SeasonLabel, copyCroppingFrom: pla
  * A season. The seasons list adds what it holds: fields with cropping, whether it has a plan,
  * empty (neither; it may be deleted) and current (the one screens open on).
  */
+/** Who last changed a record (null: a person since removed) and when. */
+export type LastChange = { by: string | null; at: string };
+
 export type Season = { id: number; label: string; croppedFields?: number; hasPlan?: boolean; empty?: boolean; current?: boolean };
 
 const pct = (f: string) => z.number({ error: `${f} must be a number` }).min(0, `${f} must be at least 0 %`).max(100, `${f} must be at most 100 %`);
@@ -62,6 +65,7 @@ export type Cropping = {
   stripWidthM: number | null;
   version: number;
   updatedAt: string;
+  lastChange: LastChange;
 };
 
 export const ClimateUpdate = z
@@ -87,6 +91,7 @@ export type Climate = {
   /** When rFrom is 'record'. */
   record: RainfallRecordSummary | null;
   version: number;
+  lastChange: LastChange;
 };
 
 export const GroundUpdate = z
@@ -109,7 +114,7 @@ export const GroundUpdate = z
     path: ['drainedWaterTableDepthCm'],
   });
 export type GroundUpdate = z.input<typeof GroundUpdate>;
-export type Ground = { slopePct: number | null; slopeLengthM: number | null; drained: boolean; drainedWaterTableDepthCm: number | null; version: number };
+export type Ground = { slopePct: number | null; slopeLengthM: number | null; drained: boolean; drainedWaterTableDepthCm: number | null; version: number; lastChange: LastChange };
 
 /** The text parts of a rainfall-record upload (multipart): both optional, numbers as text. */
 const formNumber = (min: number, max: number) => {

@@ -86,4 +86,21 @@ describe('the farm’s recent changes', () => {
     expect(bad.body.message).toMatch(/^limit/);
     expect((await landowner.get(`/api/farms/${farmId}/soil-loss-history`)).status).toBe(403);
   });
+
+  it('shows on each record who last changed it and when', async () => {
+    const { a, farmer, advisor } = await farmWithCropping();
+    expect((await farmer.get(`/api/fields/${a}/cropping?season=2027`)).body.lastChange).toMatchObject({ by: 'Test farmer' });
+    const changed = await advisor.put(`/api/fields/${a}/cropping`).send({ ...corn, residuePct: 45, version: 0 });
+    expect(changed.body.lastChange).toMatchObject({ by: 'Test advisor' });
+    expect(Date.parse(changed.body.lastChange.at)).not.toBeNaN();
+    expect((await farmer.get(`/api/fields/${a}/cropping?season=2027`)).body.lastChange.by).toBe('Test advisor');
+    const ground = await advisor.put(`/api/fields/${a}/ground`).send({ slopePct: 6, slopeLengthM: 80 });
+    expect(ground.body.lastChange.by).toBe('Test advisor');
+    expect((await farmer.get(`/api/fields/${a}/ground`)).body.lastChange.by).toBe('Test advisor');
+    const sample = await farmer.post(`/api/fields/${a}/soil-samples`).send({ kind: 'lab', sandPct: 20, siltPct: 50, clayPct: 30, organicMatterPct: 3 });
+    expect(sample.body.lastChange.by).toBe('Test farmer');
+    const edited = await advisor.patch(`/api/soil-samples/${sample.body.id}`).send({ version: sample.body.version, organicMatterPct: 3.4 });
+    expect(edited.body.lastChange.by).toBe('Test advisor');
+    expect((await farmer.get(`/api/fields/${a}/soil-samples`)).body[0].lastChange.by).toBe('Test advisor');
+  });
 });

@@ -1,6 +1,7 @@
 // Follow-up on a plan's actions: the day the work was done, the amount actually applied, who
 // recorded it and when, an optional photo (files in storage), and the advisor's check. These
-// are records of what happened, not changes to the plan, so they live beside the action.
+// are records of what happened, not changes to the plan, so they live beside the action. And who
+// last changed a soil check (other records already keep it).
 import type { QueryInterface } from 'sequelize';
 
 export async function up(qi: QueryInterface): Promise<void> {
@@ -17,11 +18,14 @@ export async function up(qi: QueryInterface): Promise<void> {
       ADD COLUMN photo_thumbnail_key text,
       ADD COLUMN photo_content_type text,
       ADD CONSTRAINT plan_actions_done_check CHECK (status = 'planned' OR done_on IS NOT NULL);
+    ALTER TABLE soil_samples ADD COLUMN updated_by integer REFERENCES users(id) ON DELETE SET NULL;
+    UPDATE soil_samples SET updated_by = created_by;
   `);
 }
 
 export async function down(qi: QueryInterface): Promise<void> {
   await qi.sequelize.query(`
+    ALTER TABLE soil_samples DROP COLUMN updated_by;
     ALTER TABLE plan_actions
       DROP CONSTRAINT plan_actions_done_check,
       DROP COLUMN done_on, DROP COLUMN applied_quantity, DROP COLUMN done_note, DROP COLUMN done_by_user, DROP COLUMN done_at,
