@@ -41,8 +41,10 @@ describe('marking work done and checked', () => {
     expect(Date.parse(res.body.action.doneRecordedAt)).not.toBeNaN();
     // The plan is as the advisor approved it: same state, revision and version.
     expect(res.body.plan).toMatchObject({ state: 'approved', revision: 1, version: approved.version, approvedRevision: 1 });
-    // The landowner still reads the approved revision.
-    expect((await landowner.get(`/api/plans/${planId}`)).body).toMatchObject({ state: 'approved', revision: 1 });
+    // The landowner still reads the approved revision, with the work recorded done on it (no photo for them).
+    const theirs = (await landowner.get(`/api/plans/${planId}`)).body;
+    expect(theirs).toMatchObject({ state: 'approved', revision: 1 });
+    expect(theirs.actions[0]).toMatchObject({ status: 'done', doneOn: '2027-09-14', appliedQuantity: 3.6, doneRecordedBy: { name: 'Test farmer' }, hasPhoto: false });
   });
 
   it('lets only the advisor check work, and only once it is done', async () => {

@@ -1,6 +1,7 @@
 // The landowner's view: the approved plan for the fields they own and nothing else — a map of
-// the risk now and one after the planned work (colours always with words), each field's work and
-// when it is planned, and who approved the plan and when. Drafts and plans in review never show.
+// the risk now and one after the planned work (colours always with words), each field's work,
+// when it is planned and whether it is done, and who approved the plan and when. Drafts and plans
+// in review never show.
 import { useMemo } from 'react';
 import { riskClassOf, type RiskClass } from '../../../../shared/erosion/risk-class';
 import type { Units } from '../../../../shared/schemas/auth';
@@ -14,7 +15,7 @@ import { amountWords } from '../../../lib/amount-words';
 import { tonnesFigure } from '../../../lib/loss-units';
 import { useSeasonPlan } from '../api/get-season-plan';
 import { FieldPrediction } from './field-prediction';
-import { byWhen, whenWords } from './plan-words';
+import { byWhen, dayWords, whenWords } from './plan-words';
 
 type Props = { farmId: number; season: string; fields: FieldFeature[]; units: Units; tileUrl?: string | null; tileAttribution?: string | null };
 
@@ -80,7 +81,8 @@ export function LandownerPlan({ farmId, season, fields, units, tileUrl, tileAttr
                   <tr>
                     <th scope="col" className="py-1 pr-2 font-medium">Work</th>
                     <th scope="col" className="py-1 pr-2 font-medium">Amount</th>
-                    <th scope="col" className="py-1 font-medium">When</th>
+                    <th scope="col" className="py-1 pr-2 font-medium">When</th>
+                    <th scope="col" className="py-1 font-medium">Done</th>
                   </tr>
                 </thead>
                 <tbody>
@@ -90,7 +92,10 @@ export function LandownerPlan({ farmId, season, fields, units, tileUrl, tileAttr
                       <tr key={a.id} className="border-b border-paper-edge align-top last:border-b-0" data-testid="landowner-action">
                         <td className="py-1 pr-2 font-semibold">{a.title}</td>
                         <td className="num py-1 pr-2">{a.quantity != null && a.unit ? amountWords(a.quantity, a.unit, units) : '—'}</td>
-                        <td className="py-1">{whenWords(a)}</td>
+                        <td className="py-1 pr-2">{whenWords(a)}</td>
+                        <td className="py-1" data-testid="landowner-action-done">
+                          {a.status === 'planned' ? <span className="text-ink-soft">not yet</span> : `${a.doneOn ? dayWords(a.doneOn) : 'done'}${a.status === 'checked' ? ', checked' : ''}`}
+                        </td>
                       </tr>
                     ))}
                 </tbody>
