@@ -1,7 +1,9 @@
 // The season plan loop in Chromium, on farms made from the demo scenario's files (data/demo):
 // the advisor approves the plan the farmer sent; a plan sent back reaches the farmer with the
-// advisor's comment; the landowner reads the approved plan for their own fields only; and a
-// field's treatment option goes into the plan in one click from its Risk tab.
+// advisor's comment; the landowner reads the approved plan for their own fields only; a field's
+// treatment option goes into the plan in one click from its Risk tab; work recorded done (with
+// a photo) and checked leaves the plan approved; and a change made after someone else's shows
+// what they changed and is made again on top.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TEST_PASSWORD } from '../helpers/test-app';
 import { signInPage, startBrowserApp } from '../helpers/browser';
@@ -142,5 +144,73 @@ describe('the season plan in Chromium', () => {
     expect(await page.getByTestId('plan-action-changed-by').first().innerText()).toContain('Test farmer');
     expect(errors).toEqual([]);
     await page.close();
+  });
+});
+
+describe('changing work someone else changed meanwhile', () => {
+  it('shows what they changed and makes the person’s change again on top, keeping theirs', async () => {
+    const made = await makeDemoLikeFarm(app.sequelize);
+    const { createPlan } = await import('../../server/services/plans/plans.service');
+    const { addAction, updateAction } = await import('../../server/services/plans/plan-actions.service');
+    const { PlanActionCreate } = await import('../../shared/schemas/plans');
+    const { plan } = await createPlan(app.sequelize, { userId: made.users.farmer.id }, made.farm.id, made.season);
+    const added = await addAction(app.sequelize, { userId: made.users.farmer.id }, plan.id, PlanActionCreate.parse({ fieldId: made.ids['Long Slope'], treatment: 'no-till', quantity: 4, unit: 'ha', cost: 180 }));
+
+    const { page, errors } = await signInPage(app.browser, app.baseUrl, made.users.farmer.email, TEST_PASSWORD);
+    await page.goto(planUrl(made.farm.id, made.season));
+    await page.getByTestId('action-edit').click({ timeout: 15_000 });
+    // The advisor changes the cost while the farmer has the form open.
+    await updateAction(app.sequelize, { userId: made.users.advisor.id }, added.action!.id, { version: 1, cost: 240 });
+    await page.getByTestId('action-edit-form').getByTestId('action-notes').fill('Hire the drill from the co-op.');
+    await page.getByTestId('action-save').click();
+    const conflict = page.getByTestId('action-conflict');
+    await conflict.waitFor({ timeout: 15_000 });
+    expect(await conflict.getByTestId('part-changes').innerText()).toMatch(/cost: 180 → 240/);
+    await conflict.getByTestId('action-redo').click();
+    await expect.poll(() => page.getByTestId('action-conflict').count(), { timeout: 15_000 }).toBe(0);
+    // Both changes stand: their cost and the farmer's notes.
+    await expect.poll(() => page.getByTestId('plan-action').innerText(), { timeout: 15_000 }).toContain('Hire the drill from the co-op.');
+    expect(await page.getByTestId('plan-action-cost').innerText()).toBe('$240');
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
+
+describe('follow-up on an approved plan', () => {
+  it('records work done with a photo and the advisor’s check, and the plan stays approved', async () => {
+    const { farm, users, season, planId } = await submittedPlan();
+    const { approvePlan } = await import('../../server/services/plans/plan-review.service');
+    const { livePlan } = await import('../../server/services/plans/plan-read.service');
+    await approvePlan(app.sequelize, { userId: users.advisor.id }, planId, { version: (await livePlan(planId)).version });
+    const sharp = (await import('sharp')).default;
+    const photo = await sharp({ create: { width: 120, height: 80, channels: 3, background: '#6b7f3a' } }).jpeg().toBuffer();
+
+    const farmer = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
+    await farmer.page.goto(planUrl(farm.id, season));
+    const first = farmer.page.getByTestId('plan-action').first();
+    await first.getByTestId('action-mark-done').click({ timeout: 15_000 });
+    const dialog = farmer.page.getByTestId('done-form');
+    await dialog.getByTestId('done-on').fill('2027-04-24');
+    await dialog.getByTestId('done-applied').fill('3.8');
+    await dialog.getByTestId('done-photo').setInputFiles({ name: 'drilled.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await dialog.getByTestId('done-save').click();
+    await first.getByTestId('action-follow-up').waitFor({ timeout: 15_000 });
+    expect(await first.getAttribute('data-status')).toBe('done');
+    expect(await first.getByTestId('action-follow-up').innerText()).toContain('Done 24 Apr 2027');
+    await first.getByTestId('action-photo').waitFor();
+    expect(await farmer.page.getByTestId('review-bar').getByTestId('plan-state').getAttribute('data-state')).toBe('approved');
+    expect(farmer.errors).toEqual([]);
+    await farmer.page.close();
+
+    const advisor = await signInPage(app.browser, app.baseUrl, users.advisor.email, TEST_PASSWORD);
+    await advisor.page.goto(planUrl(farm.id, season));
+    const done = advisor.page.getByTestId('plan-action').first();
+    await done.getByTestId('action-check').click({ timeout: 15_000 });
+    await done.getByTestId('action-checked-by').waitFor({ timeout: 15_000 });
+    expect(await done.getByTestId('action-checked-by').innerText()).toContain('Test advisor');
+    expect(await advisor.page.getByTestId('review-bar').getByTestId('plan-state').getAttribute('data-state')).toBe('approved');
+    expect(await advisor.page.getByTestId('plan-version').count()).toBe(1);
+    expect(advisor.errors).toEqual([]);
+    await advisor.page.close();
   });
 });

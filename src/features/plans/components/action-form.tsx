@@ -42,6 +42,20 @@ export function payloadOf(d: Draft): Omit<PlanActionInput, 'status'> {
   };
 }
 
+/**
+ * Only the parts the person changed from the action as they opened it, so a change made again
+ * after a 409 keeps what the other person changed in the parts this person did not touch.
+ */
+export function changedParts(opened: PlanAction, payload: Omit<PlanActionInput, 'status'>): Partial<Omit<PlanActionInput, 'status'>> {
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(payload)) {
+    // A treatment's own title comes with it; only typed work has a title of its own.
+    if (k === 'title' && payload.treatment !== 'other') continue;
+    if ((opened[k as keyof PlanAction] ?? null) !== (v ?? null)) out[k] = v;
+  }
+  return out;
+}
+
 type Props = {
   fields: { id: number; name: string }[];
   initial: Draft;

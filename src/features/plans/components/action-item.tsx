@@ -12,7 +12,7 @@ import { amountWords } from '../../../lib/amount-words';
 import { isApiError } from '../../../lib/api-client';
 import { formatMoney } from '../../../lib/money';
 import { actionPhotoUrl } from '../api/mark-action-done';
-import { ActionForm, draftOf } from './action-form';
+import { ActionForm, changedParts, draftOf } from './action-form';
 import { PartChanges } from './change-list';
 import { CommentForm, CommentList } from './plan-comments';
 import { byWhen, dayWords, STATUS_WORDS, whenWords } from './plan-words';
@@ -20,7 +20,7 @@ import { byWhen, dayWords, STATUS_WORDS, whenWords } from './plan-words';
 type Payload = Omit<PlanActionCreate, 'status'>;
 
 export type ActionHandlers = {
-  update: (action: PlanAction, version: number, payload: Payload) => Promise<unknown>;
+  update: (action: PlanAction, version: number, changes: Partial<Payload>) => Promise<unknown>;
   remove: (action: PlanAction) => Promise<unknown>;
   comment: (action: PlanAction, body: string) => Promise<unknown>;
   markDone: (action: PlanAction) => void;
@@ -76,8 +76,9 @@ export function ActionItem({ action: a, comments, fields, units, canChange, canF
   const [error, setError] = useState<string | null>(null);
 
   const save = async (opened: PlanAction, version: number, payload: Payload) => {
+    const changes = changedParts(opened, payload);
     try {
-      await handlers.update(a, version, payload);
+      if (Object.keys(changes).length) await handlers.update(a, version, changes);
       setEditing(null);
       setConflict(null);
     } catch (err) {
@@ -130,7 +131,11 @@ export function ActionItem({ action: a, comments, fields, units, canChange, canF
           <p>What they changed since you opened it:</p>
           <PartChanges fields={actionChanges(conflict.opened, conflict.current)} />
           <div className="mt-2 flex flex-wrap gap-2">
-            <Button size="sm" data-testid="action-redo" onClick={() => void save(conflict.current, conflict.current.version, conflict.payload).catch(() => undefined)}>
+            <Button
+              size="sm"
+              data-testid="action-redo"
+              onClick={() => void save(conflict.opened, conflict.current.version, conflict.payload).catch((err: unknown) => setError(err instanceof Error ? err.message : String(err)))}
+            >
               Make my change again on top
             </Button>
             <Button size="sm" variant="secondary" onClick={() => setConflict(null)}>
