@@ -20,6 +20,7 @@ import { seasonsRoutes } from './routes/seasons.routes';
 import { treatmentsRoutes } from './routes/treatments.routes';
 import { factorOverridesRoutes } from './routes/factor-overrides.routes';
 import { plansRoutes } from './routes/plans.routes';
+import { changesRoutes } from './routes/changes.routes';
 import { peopleRoutes } from './routes/people.routes';
 import { devMailboxRoutes } from './routes/dev-mailbox.routes';
 import { setMailContext } from './services/mail/outbox';
@@ -93,10 +94,11 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   const treatments = treatmentsRoutes(sequelize);
   api.use('/farms', treatments.farms);
   api.use('/fields', treatments.fields);
-  const plans = plansRoutes(sequelize);
+  const plans = plansRoutes({ sequelize, storage });
   api.use('/farms', plans.farms);
   api.use('/plans', plans.plans);
   api.use('/plan-actions', plans.actions);
+  api.use('/farms', changesRoutes());
   api.use(notFoundApi);
   app.use('/api', api);
 
