@@ -9,6 +9,7 @@ import type { Config } from './config';
 import { initModels } from './models';
 import { requireUser } from './middleware/auth';
 import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { clientFiles } from './middleware/client-files';
 import { authRoutes } from './routes/auth.routes';
 import { farmsRoutes } from './routes/farms.routes';
 import { fieldsRoutes } from './routes/fields.routes';
@@ -104,7 +105,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
 
   const dist = clientDir ?? path.resolve('dist');
   if (existsSync(path.join(dist, 'index.html'))) {
-    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.use(clientFiles(dist));
     // Client-side routes: every other GET gets the app shell.
     app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(dist, 'index.html')));
   }

@@ -2,7 +2,7 @@
 // chart of A against T under them. Picking a row outlines the field on the map (and picking a
 // field on the map picks its row); the picked field opens on the Field screen. On one farm's
 // board, farmers and advisors can switch the table to each field's best treatment and its cost.
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useMemo, useState, lazy, Suspense } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { Notice } from '../../../components/ui/notice';
 import { Button } from '../../../components/ui/button';
@@ -11,13 +11,15 @@ import type { BoardRow } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FieldFeature } from '../../../../shared/schemas/field';
 import { useFarmTreatments } from '../api/get-farm-treatments';
-import { AVsTChart } from './a-vs-t-chart';
 import { BoardMap } from './board-map';
 import { BoardTable, type RankedRow } from './board-table';
 import { lossFigure } from '../../../lib/loss-units';
 import { RiskBadge } from '../../../components/risk/risk-badge';
 import { RiskLegend } from '../../../components/risk/risk-legend';
 import type { BoardTreatments } from './treatment-columns';
+
+// Loaded on first use: charts (recharts) load with the chart, not with the board.
+const AVsTChart = lazy(() => import('./a-vs-t-chart').then((m) => ({ default: m.AVsTChart })));
 
 const LOSS_UNIT_CHOICES: { value: Units; label: string }[] = [
   { value: 'ha', label: 't/ha/yr, mm' },
@@ -145,7 +147,9 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
         </div>
       </div>
       <div className="max-w-4xl">
-        <AVsTChart rows={rows} units={lossUnits} showFarm={showFarm} />
+        <Suspense fallback={null}>
+          <AVsTChart rows={rows} units={lossUnits} showFarm={showFarm} />
+        </Suspense>
       </div>
     </div>
   );

@@ -3,7 +3,7 @@
 // within the money and says why. Shown beside it: which field gets what, the total spent and
 // saved, and soil saved against money for every budget.
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useState, lazy, Suspense } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '../../../components/ui/button';
@@ -18,7 +18,9 @@ import { BudgetPlanRequest, type BudgetPlan } from '../../../../shared/schemas/t
 import { usePrices } from '../api/get-prices';
 import { useBudgetPlan } from '../api/plan-budget';
 import { BudgetPlanTable, type ChoiceExtra } from './budget-plan-table';
-import { SoilMoneyChart } from './soil-money-chart';
+
+// Loaded on first use: charts (recharts) load with the chart, not with the screen.
+const SoilMoneyChart = lazy(() => import('./soil-money-chart').then((m) => ({ default: m.SoilMoneyChart })));
 
 const BudgetForm = BudgetPlanRequest.pick({ budget: true, goal: true });
 type Values = { budget: number | null; goal: 'most-soil' | 'most-fields-under-t' };
@@ -117,7 +119,9 @@ export function BudgetPlanner({ farmId, season, units, choiceExtra }: Props) {
             </div>
           ) : null}
           <BudgetPlanTable plan={shown} farmId={farmId} units={units} choiceExtra={choiceExtra} />
-          <SoilMoneyChart plan={shown} units={units} />
+          <Suspense fallback={null}>
+            <SoilMoneyChart plan={shown} units={units} />
+          </Suspense>
         </div>
       ) : !asked ? (
         <p className="text-sm text-ink-soft">Type a budget and choose what matters most to see which fields get what.</p>

@@ -2,6 +2,7 @@
 // with its risk class, tonnes a year, the design storm's runoff; how A builds up, every factor
 // with its source, what went in and what is missing, problem clay, what to do about it (the
 // treatments and the what-if, for farmers and advisors), and the cautions.
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from '../../../components/ui/notice';
 import { paths } from '../../../lib/paths';
@@ -18,9 +19,11 @@ import { OVERRIDE_FACTORS, type OverrideFactor } from '../../../../shared/schema
 import { FactorOverrideControl } from './factor-override-control';
 import { TERRACE_CAUTION } from '../../seasons/components/cropping-form';
 import { AssessmentInputs } from './assessment-inputs';
-import { FactorBuildUpChart } from './factor-build-up-chart';
 import type { FieldTab } from './field-tabs';
 import { WhatToDo } from './what-to-do';
+
+// Loaded on first use: charts (recharts) load with the chart, not with the field screen.
+const FactorBuildUpChart = lazy(() => import('./factor-build-up-chart').then((m) => ({ default: m.FactorBuildUpChart })));
 
 function Big({ label, figure, testId }: { label: string; figure: Figure | null; testId?: string }) {
   return (
@@ -182,7 +185,11 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
       <Gaps gaps={a.gaps} farmId={farmId} onOpenTab={onOpenTab} />
       <ProblemClay a={a} />
       {canEdit && e ? <WhatToDo farmId={farmId} fieldId={fieldId} season={season} units={units} onOpenTab={onOpenTab} /> : null}
-      {e && a.riskClass ? <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} /> : null}
+      {e && a.riskClass ? (
+        <Suspense fallback={null}>
+          <FactorBuildUpChart estimate={e} riskColour={a.riskClass.colour} units={units} />
+        </Suspense>
+      ) : null}
       {e ? (
         <FactorTable
           factors={e.factors}

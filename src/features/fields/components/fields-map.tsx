@@ -1,15 +1,18 @@
 // The farm's map: its fields on a plain paper base (or a web basemap when the server
 // configures one), labels with field names, and for farmers the drawing tools.
+import { lazy, Suspense } from 'react';
 import type { ReactNode } from 'react';
 import { MapContainer, TileLayer } from 'react-leaflet';
 import '../../../lib/leaflet-setup';
 import { useLatest } from '../../../lib/use-latest';
 import type { FieldFeature } from '../../../../shared/schemas/field';
 import type { AreaGeometry } from '../../../../shared/schemas/geojson';
-import { DrawControls } from './draw-controls';
 import { FieldPolygon, type FieldLayerHandlers } from './field-polygon';
 import { MapViewControl, type FocusRequest } from './map-view-control';
 import { ShapePreviewLayers, type ShapePreview } from './shape-preview-layers';
+
+// Loaded on first use: the drawing tools (geoman) load only for someone who may draw.
+const DrawControls = lazy(() => import('./draw-controls').then((m) => ({ default: m.DrawControls })));
 
 type Props = FieldLayerHandlers & {
   fields: FieldFeature[];
@@ -57,7 +60,11 @@ export function FieldsMap(props: Props) {
       ))}
       {props.preview ? <ShapePreviewLayers preview={props.preview} /> : null}
       <MapViewControl fields={fields} farmBbox={farmBbox} focus={focus} />
-      {canEdit ? <DrawControls onCreate={props.onCreate} onDrawError={props.onDrawError} /> : null}
+      {canEdit ? (
+        <Suspense fallback={null}>
+          <DrawControls onCreate={props.onCreate} onDrawError={props.onDrawError} />
+        </Suspense>
+      ) : null}
       {props.children}
     </MapContainer>
   );
