@@ -141,7 +141,7 @@ async function benchSize(n: number, dir: string): Promise<SizeResult> {
 }
 
 const NOTES: Record<string, string> = {
-  fill: 'Priority-Flood+ε into a copy of the DEM; accounted includes the heap and pit FIFO peak',
+  fill: 'Priority-Flood+ε into a copy of the DEM; accounted includes the heap, pit FIFO and slope stack peak',
   'flow-direction': 'D8 into the fill’s closed-flag grid',
   'flow-accumulation': 'into the filled grid; with labels, again broken at field borders (same grid)',
   ls: 'Horn slope row by row → LS into the area grid, slope kept as 2-byte codes',
@@ -208,7 +208,7 @@ try {
     'soil-loss map, are counted in the "with labels" columns. Two figures at each point where memory peaks locally:',
     '',
     '- **accounted**: by construction, the sum of the buffers alive at that point (runTerrain\'s `ByteLedger`,',
-    '  `onMemory`), including the fill\'s priority queue and pit FIFO at their peak (an upper bound);',
+    '  `onMemory`), including the fill\'s priority queue, pit FIFO and slope stack at their peak (an upper bound);',
     '- **measured**: `process.memoryUsage().arrayBuffers` after a full GC (`gc()`, --expose-gc), minus a reading',
     '  taken just before the run. It cannot see the fill\'s queues (freed before the reading) and counts small',
     '  typed arrays of other code, so it can be a little above or below the accounted figure.',
@@ -225,7 +225,7 @@ try {
     'the Float32 figures, and slope-class shares and the slope-class picture are exactly the same for class breaks on',
     'a 0.005 % grid (the defaults, and any break typed to 2 decimals); slopes ≥ 327.67 % (73°) saturate.',
     '',
-    'The fill\'s priority queue and pit FIFO depend on the terrain (cells wait in the queue along the flood front).',
+    'The fill\'s priority queue, pit FIFO and slope stack depend on the terrain (cells wait in the queue along the flood front).',
     'Their accounted peak (1000×1000, bytes per cell) on surfaces that are easy and hard for Priority-Flood; the',
     'whole run\'s peak is at the fill point when 5 + this (+2 with labels) exceeds 7.125 (9.125):',
     '',

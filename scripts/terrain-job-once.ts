@@ -27,7 +27,8 @@ for (let fr = 0; fr < per; fr++) {
 
 const t0 = performance.now();
 const bytes = readFileSync(file);
-const demBytes = bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer;
+// A file this large has a buffer of its own: hand it over as it is, as the job does.
+const demBytes = (bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes.buffer : bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength)) as ArrayBuffer;
 // Progress names the runTerrain stage just finished; 'drawing map layers' and 'working out each field' name the one starting.
 const at = new Map<string, number>();
 const out = await runFarmTerrainInThread({ demBytes, fields, slopeClasses: [...DEFAULT_SLOPE_CLASSES] }, (_f, stage) => at.set(stage, performance.now() - t0));

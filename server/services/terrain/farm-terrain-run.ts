@@ -21,7 +21,7 @@ const MAX_FLOW_POINTS = 400;
 export const MAX_TERRAIN_FIELDS = 65_535;
 
 export type FarmTerrainInput = {
-  /** The GeoTIFF's bytes; the buffer is handed over (transferred) to the thread. */
+  /** The GeoTIFF's bytes; the buffer is handed over (transferred) to the thread, and taken out of the input once read. */
   demBytes: ArrayBuffer;
   fields: Array<{ id: number; geometry: Polygon | MultiPolygon; typedSlopeLengthM: number | null }>;
   slopeClasses: SlopeClass[];
@@ -46,7 +46,10 @@ export type FarmTerrainOutput = {
 export async function runFarmTerrain(input: FarmTerrainInput, onProgress: ProgressFn): Promise<FarmTerrainOutput> {
   const { fields, slopeClasses } = input;
   if (fields.length > MAX_TERRAIN_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_TERRAIN_FIELDS}.`);
-  const read = await readDem(input.demBytes);
+  // Taken out of the input, so the file's bytes can be freed as soon as they are decoded.
+  const bytes = input.demBytes;
+  input.demBytes = new ArrayBuffer(0);
+  const read = await readDem(bytes);
   if (!read.ok) throw new Error(`The elevation model cannot be read: ${read.reason}`);
   const dem = read.dem;
   onProgress(0.05, 'read');
