@@ -1,5 +1,5 @@
-// Routes. The farm map (Leaflet + geoman) and the quick estimate (the engine and its tables)
-// are loaded on demand.
+// Routes. Every screen but the farm list is loaded on demand: the forms' libraries (zod,
+// react-hook-form) come with the sign-in and register screens, Leaflet with the maps.
 import { QueryClientProvider } from '@tanstack/react-query';
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { Loading } from './components/ui/spinner';
@@ -8,12 +8,10 @@ import { paths } from './lib/paths';
 import { queryClient } from './lib/query-client';
 import { FarmsPage } from './pages/farms-page';
 import { NotFoundPage } from './pages/not-found-page';
-import { RegisterPage } from './pages/register-page';
-import { SignInPage } from './pages/sign-in-page';
 
 const router = createBrowserRouter([
-  { path: paths.signIn.path, element: <SignInPage /> },
-  { path: paths.register.path, element: <RegisterPage /> },
+  { path: paths.signIn.path, lazy: async () => ({ Component: (await import('./pages/sign-in-page')).SignInPage }) },
+  { path: paths.register.path, lazy: async () => ({ Component: (await import('./pages/register-page')).RegisterPage }) },
   { path: paths.invitation.path, lazy: async () => ({ Component: (await import('./pages/accept-invitation-page')).AcceptInvitationPage }) },
   { path: paths.forgotPassword.path, lazy: async () => ({ Component: (await import('./pages/forgot-password-page')).ForgotPasswordPage }) },
   { path: paths.resetPassword.path, lazy: async () => ({ Component: (await import('./pages/reset-password-page')).ResetPasswordPage }) },
