@@ -1,11 +1,12 @@
-// The drawing toolbar (geoman) for farmers: draw, edit and remove field outlines.
+// The drawing toolbar (geoman) for farmers: draw, edit and remove field outlines. Loaded on demand
+// (fields-map.tsx), so only someone who may draw fetches geoman.
 // Added from inside the map with useMap() in an effect and removed in its cleanup, so it
 // survives StrictMode's double effects. `pm:create` is registered once; the drawn layer is
 // removed at once and the shape goes to onCreate — the query cache then draws the field.
 import { useEffect } from 'react';
 import type { Layer } from 'leaflet';
 import { useMap } from 'react-leaflet';
-import '../../../lib/leaflet-setup';
+import { L } from '../../../lib/leaflet-setup';
 import '@geoman-io/leaflet-geoman-free';
 import '@geoman-io/leaflet-geoman-free/dist/leaflet-geoman.css';
 import { layerToGeometry } from '../../../lib/geo-leaflet';
@@ -23,6 +24,11 @@ export function DrawControls({ onCreate, onDrawError }: Props) {
   const latest = useLatest({ onCreate, onDrawError });
 
   useEffect(() => {
+    // This component (and geoman with it) loads after the map and its fields were made, so they
+    // have no geoman handle yet: give the map and every layer on it theirs (later layers get it
+    // as they are made).
+    L.PM.reInitLayer(map as unknown as Layer); // it handles a map too, though its types name only layers
+    map.eachLayer((layer) => L.PM.reInitLayer(layer));
     map.pm.setGlobalOptions({
       pathOptions: drawingStyle,
       templineStyle: { color: drawingStyle.color },
