@@ -22,6 +22,7 @@ import { factorOverridesRoutes } from './routes/factor-overrides.routes';
 import { plansRoutes } from './routes/plans.routes';
 import { peopleRoutes } from './routes/people.routes';
 import { devMailboxRoutes } from './routes/dev-mailbox.routes';
+import { exportsRoutes } from './routes/exports.routes';
 import { setMailContext } from './services/mail/outbox';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
@@ -97,6 +98,8 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/farms', plans.farms);
   api.use('/plans', plans.plans);
   api.use('/plan-actions', plans.actions);
+  const exportsApi = exportsRoutes(sequelize);
+  api.use('/farms', exportsApi.farms);
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -28,3 +28,16 @@ export function parseId(value: string | undefined, what: string): number {
   if (!Number.isInteger(n) || n <= 0 || n > 2_147_483_647) throw badRequest('invalid_id', `${what} must be a positive whole number.`);
   return n;
 }
+
+/** Parses req.query with a shared schema; the parsed value is res.locals.query (Express 5's req.query cannot be replaced). */
+export function validateQuery<S extends z.ZodType>(schema: S): RequestHandler {
+  return (req, res, next) => {
+    const r = schema.safeParse(req.query ?? {});
+    if (!r.success) {
+      const d = describeIssues(r.error);
+      throw badRequest('invalid_input', d.message, { issues: d.issues });
+    }
+    res.locals.query = r.data;
+    next();
+  };
+}
