@@ -98,8 +98,9 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/farms', plans.farms);
   api.use('/plans', plans.plans);
   api.use('/plan-actions', plans.actions);
-  const exportsApi = exportsRoutes(sequelize);
+  const exportsApi = exportsRoutes({ sequelize, storage });
   api.use('/farms', exportsApi.farms);
+  api.use('/plans', exportsApi.plans);
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -5,6 +5,7 @@ import JSZip from 'jszip';
 import { parseDbf, parseShp } from 'shpjs';
 import { parse } from 'csv-parse/sync';
 import type { MultiPolygon, Polygon } from 'geojson';
+import { QueryTypes } from 'sequelize';
 import { makeTestApp, makeUser, signedIn } from '../helpers/test-app';
 import { FORMULA_TITLE, makePlanFarm } from '../helpers/plan-farm';
 
@@ -16,24 +17,18 @@ beforeAll(async () => {
 });
 
 const url = (q: string) => `/api/farms/${farm.farm.id}/export?${q}`;
-const binary = (res: NodeJS.ReadableStream & { setEncoding: (e: string) => void; on: (e: string, f: (x?: unknown) => void) => void }, cb: (e: Error | null, b: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (c) => chunks.push(c as Buffer));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
-};
-
 /** Each field's area on the WGS84 ellipsoid as PostGIS computes it from the stored outline, m². */
 async function postgisAreas(): Promise<Map<number, number>> {
   const rows = await ctx.sequelize.query<{ id: number; a: number }>('SELECT id, ST_Area(geom::geography) AS a FROM fields WHERE farm_id = :farmId', {
     replacements: { farmId: farm.farm.id },
-    type: 'SELECT',
+    type: QueryTypes.SELECT,
   });
   return new Map(rows.map((r) => [r.id, r.a]));
 }
 
 describe('farm export', () => {
   it('writes GeoJSON (RFC 7946) with every field, its area, assessment and planned actions', async () => {
-    const res = await farm.agents.farmer.get(url(`format=geojson&season=${farm.season}`)).buffer(true).parse(binary);
+    const res = await farm.agents.farmer.get(url(`format=geojson&season=${farm.season}`)).responseType('blob');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toContain('application/geo+json');
     const name = farm.farm.name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
@@ -58,7 +53,7 @@ describe('farm export', () => {
   });
 
   it('writes a zipped shapefile with a WGS84 .prj that shpjs reads back to the same fields and areas', async () => {
-    const res = await farm.agents.advisor.get(url(`format=shapefile&season=${farm.season}`)).buffer(true).parse(binary);
+    const res = await farm.agents.advisor.get(url(`format=shapefile&season=${farm.season}`)).responseType('blob');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/zip');
     const zip = await JSZip.loadAsync(res.body as Buffer);
@@ -99,7 +94,7 @@ describe('farm export', () => {
 
   it("gives a landowner only their own fields and the approved plan's actions on them", async () => {
     for (const format of ['geojson', 'csv'] as const) {
-      const res = await farm.agents.landowner.get(url(`format=${format}`)).buffer(true).parse(binary);
+      const res = await farm.agents.landowner.get(url(`format=${format}`)).responseType('blob');
       expect(res.status).toBe(200);
       const text = (res.body as Buffer).toString('utf8');
       expect(text).toContain('Mill Hill');

@@ -1,0 +1,55 @@
+// GET /api/plans/:planId/report.pdf: the season plan on paper. The plan as its reader may see it
+// (a landowner: the newest approved revision, their own fields only), the season's assessments
+// of the fields shown, and the farm's shaded relief, drawn into a PDF.
+import type { Sequelize } from 'sequelize';
+import type { Units } from '../../../shared/schemas/auth';
+import { exportFileName } from '../../../shared/exports/file-names';
+import type { DownloadFile } from '../../lib/download';
+import { Farm, Season, TerrainLayer } from '../../models';
+import { selectFieldFeatureRows } from '../../models/field.queries';
+import type { FileStorage } from '../storage/file-storage';
+import { seasonAssessments } from '../assessments/read-assessments';
+import { readPlan, type PlanViewer } from '../plans/plan-read.service';
+import type { ReliefPicture, ReportData } from './report-data';
+import { renderPlanReport } from './pdf/render-plan-report';
+
+export type ReportReader = { name: string; units: Units };
+
+async function relief(storage: FileStorage, farmId: number): Promise<ReliefPicture | null> {
+  const [layer] = await TerrainLayer.ofFarm(farmId, 'hillshade');
+  return layer ? { png: await storage.get(layer.fileKey), bounds: layer.bounds } : null;
+}
+
+/** What the report prints, read in a fixed number of queries. */
+export async function planReportData(deps: { sequelize: Sequelize; storage: FileStorage }, viewer: PlanViewer, reader: ReportReader, planId: number, now: Date): Promise<ReportData> {
+  const plan = await readPlan(viewer, planId);
+  const farm = await Farm.findByPk(viewer.farmId, { attributes: ['name'], rejectOnEmpty: true });
+  const season = await Season.findOne({ where: { farmId: viewer.farmId, label: plan.season }, attributes: ['id'], rejectOnEmpty: true });
+  const owner = viewer.role === 'landowner' ? { ownerMembershipId: viewer.membershipId, visibleToOwner: viewer.membershipId } : {};
+  const rows = await selectFieldFeatureRows(deps.sequelize, { farmId: viewer.farmId, ...owner });
+  const assessments = await seasonAssessments(deps.sequelize, viewer.farmId, season.id, rows.map((r) => r.id));
+  return {
+    farmName: farm.name,
+    plan,
+    fields: rows.map((r) => ({
+      fieldId: r.id,
+      name: r.name,
+      areaHa: r.areaM2 / 10_000,
+      geometry: JSON.parse(r.geometryJson),
+      labelAt: JSON.parse(r.centroidJson).coordinates,
+      assessment: assessments.get(r.id) ?? null,
+    })),
+    relief: await relief(deps.storage, viewer.farmId),
+    reader: { ...reader, role: viewer.role },
+    madeAt: now.toISOString(),
+  };
+}
+
+export async function planReport(deps: { sequelize: Sequelize; storage: FileStorage }, viewer: PlanViewer, reader: ReportReader, planId: number): Promise<DownloadFile> {
+  const data = await planReportData(deps, viewer, reader, planId, new Date());
+  return {
+    body: await renderPlanReport(data),
+    contentType: 'application/pdf',
+    fileName: exportFileName(data.farmName, data.plan.season, 'season-plan', 'pdf'),
+  };
+}
