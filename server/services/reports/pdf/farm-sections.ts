@@ -86,7 +86,7 @@ export function drawCautions(frame: PageFrame, data: ReportData): void {
   for (const key of planned) {
     const cautions = TREATMENT_CAUTIONS[key];
     if (!cautions.length) continue;
-    paragraph(frame, `${TREATMENT_TITLES[key]}: ${cautions.map((c) => CAUTIONS[c]).join(' ')}`, { size: 9 });
+    paragraph(frame, `${TREATMENT_TITLES[key]}: ${cautions.map((c) => CAUTIONS[c]).join(' ')}`, { size: 9, work: [key] });
   }
   paragraph(frame, `${CAUTION_SHEET_AND_RILL} ${CAUTION_PLANNING_AID} Figures marked "rule of thumb" or "example value" should be replaced with local ones where they are known.`, { size: 9, colour: INK.soft });
 }

@@ -1,4 +1,5 @@
 // Headings and paragraphs that keep clear of the page's footer.
+import type { TreatmentKey } from '../../../../shared/erosion/treatments/types';
 import { INK } from './fonts';
 import type { PageFrame } from './page-frame';
 
@@ -10,10 +11,11 @@ export function heading(frame: PageFrame, text: string, size = 15, keepWith = 60
   doc.moveDown(0.3);
 }
 
-export function paragraph(frame: PageFrame, text: string, opts: { size?: number; colour?: string; font?: 'body' | 'semi' | 'bold' } = {}): void {
+/** A paragraph; `work` names careful work it lists, so its page carries that work's cautions. */
+export function paragraph(frame: PageFrame, text: string, opts: { size?: number; colour?: string; font?: 'body' | 'semi' | 'bold'; work?: TreatmentKey[] } = {}): void {
   const { doc } = frame;
   const type = () => doc.font(opts.font ?? 'body').fontSize(opts.size ?? 9);
-  frame.ensure(type().heightOfString(text, { width: frame.width, lineGap: 1.5 }));
+  frame.ensure(type().heightOfString(text, { width: frame.width, lineGap: 1.5 }), opts.work);
   type().fillColor(opts.colour ?? INK.text).text(text, frame.left, doc.y, { width: frame.width, lineGap: 1.5 });
   doc.moveDown(0.4);
 }
