@@ -6,13 +6,41 @@ import { TREATMENT_TITLES } from '../../../../shared/erosion/treatments/field-tr
 import { formatMoney } from '../../../../shared/format/money';
 import { tonnesFigure } from '../../../../shared/format/loss-units';
 import { formatArea } from '../../../../shared/format/units';
-import type { ReportData } from '../report-data';
+import type { ReportData, ReportField } from '../report-data';
+import { formatFigure } from '../../../../shared/format/figure';
+import { tPerHaToTonPerAc } from '../../../../shared/erosion/units';
 import { byMonth } from '../report-words';
 import { ACTION_COLUMNS, actionRow, isTreatmentKey } from './action-rows';
 import { INK } from './fonts';
 import type { PageFrame } from './page-frame';
 import { drawTable } from './table';
 import { heading, label, paragraph } from './text';
+
+/** The fields highest risk first, as the priority board ranks them, with their planned work. */
+export function drawRanking(frame: PageFrame, fields: ReportField[], data: ReportData): void {
+  const units = data.reader.units;
+  label(frame, 'Fields, highest risk first', INK.text, 60);
+  drawTable(
+    frame,
+    [
+      { header: 'Field', width: 0.2, font: 'semi' },
+      { header: 'Area', width: 0.12, align: 'right' },
+      { header: units === 'ac' ? 'A, US t/ac/yr' : 'A, t/ha/yr', width: 0.12, align: 'right' },
+      { header: 'A/T', width: 0.08, align: 'right' },
+      { header: 'Risk class', width: 0.24 },
+      { header: 'Planned work', width: 0.24 },
+    ],
+    fields.map((f) => {
+      const a = f.assessment;
+      const loss = a?.soilLossTPerHaYr == null ? '—' : formatFigure(units === 'ac' ? tPerHaToTonPerAc(a.soilLossTPerHaYr) : a.soilLossTPerHaYr);
+      const work = data.plan.actions.filter((x) => x.fieldId === f.fieldId);
+      return {
+        cells: [f.name, formatArea(f.areaHa, units), loss, a?.aOverT == null ? '—' : formatFigure(a.aOverT), a?.riskClass?.label ?? 'not assessed yet', work.map((x) => x.title).join(', ') || '—'],
+        work: work.map((x) => x.treatment).filter(isTreatmentKey),
+      };
+    }),
+  );
+}
 
 export function drawTotals(frame: PageFrame, data: ReportData): void {
   const { plan, fields, reader } = data;

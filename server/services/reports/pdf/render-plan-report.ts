@@ -6,7 +6,7 @@ import type { ReportData, ReportField } from '../report-data';
 import { dateWords } from '../report-words';
 import { drawCover } from './cover';
 import { drawFieldSection } from './field-section';
-import { drawCautions, drawSchedule, drawTotals } from './farm-sections';
+import { drawCautions, drawRanking, drawSchedule, drawTotals } from './farm-sections';
 import { registerFonts } from './fonts';
 import { PageFrame } from './page-frame';
 import { drawRiskMap } from './risk-map';
@@ -40,7 +40,8 @@ export function renderPlanReport(data: ReportData): Promise<Buffer> {
   heading(frame, 'The map: each field by its risk class');
   if (data.fields.length) {
     const box = { x: frame.left, y: doc.y + 4, w: frame.width, h: Math.min(frame.width * 0.9, doc.page.height * 0.55) };
-    doc.y = drawRiskMap(doc, box, data.fields, data.relief) + 8;
+    doc.y = drawRiskMap(doc, box, data.fields, data.relief) + 12;
+    drawRanking(frame, ranked(data.fields), data);
   } else {
     paragraph(frame, 'There are no fields to show.');
   }
