@@ -17,8 +17,11 @@ export function neutraliseCell(cell: CsvCell): string | number {
   return FORMULA_START.test(cell) ? `'${cell}` : cell;
 }
 
-/** The whole CSV text, header first, lines ending CRLF as RFC 4180 has them. */
+/**
+ * The whole CSV text, header first, lines ending CRLF as RFC 4180 has them; a byte order mark
+ * first, so spreadsheet programs read it as UTF-8 (names with accents, "×").
+ */
 export function csvText<R>(columns: CsvColumn<R>[], rows: R[]): string {
   const records = rows.map((r) => columns.map((c) => neutraliseCell(c.value(r))));
-  return stringify([columns.map((c) => neutraliseCell(c.header)), ...records], { record_delimiter: 'windows' });
+  return `\ufeff${stringify([columns.map((c) => neutraliseCell(c.header)), ...records], { record_delimiter: 'windows' })}`;
 }

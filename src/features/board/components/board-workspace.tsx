@@ -15,6 +15,7 @@ import { AVsTChart } from './a-vs-t-chart';
 import { BoardMap } from './board-map';
 import { BoardTable, type RankedRow } from './board-table';
 import { lossFigure } from '../../../lib/loss-units';
+import { BoardCsvButton } from './board-csv-button';
 import { RiskBadge } from './risk-badge';
 import { RiskLegend } from './risk-legend';
 import type { BoardTreatments } from './treatment-columns';
@@ -34,6 +35,8 @@ type Props = {
   tileAttribution?: string | null;
   /** The farm whose treatments the table may show (one farm's board, farmer or advisor); none hides the switch. */
   treatmentsFarmId?: number;
+  /** Names the board's CSV file: the farm's name, or "client farms" on an advisor's board. */
+  fileStem: string;
 };
 
 type TableView = 'risk' | 'treatments';
@@ -45,7 +48,7 @@ const VIEW_CHOICES: { value: TableView; label: string }[] = [
 const pill = (on: boolean) =>
   `rounded border px-2 py-0.5 font-medium ${on ? 'border-clay-dark bg-clay text-paper' : 'border-ink-faint bg-paper text-ink hover:bg-paper-deep'}`;
 
-export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution, treatmentsFarmId }: Props) {
+export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution, treatmentsFarmId, fileStem }: Props) {
   const navigate = useNavigate();
   const [view, setView] = useState<TableView>('risk');
   const treatmentsQuery = useFarmTreatments(treatmentsFarmId ?? 0, season, treatmentsFarmId !== undefined && view === 'treatments');
@@ -69,21 +72,24 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
 
   return (
     <div className="flex flex-col gap-4">
-      <div role="group" aria-label="Units of soil loss" className="flex items-center gap-1 text-sm" data-testid="board-loss-units">
-        <span className="text-ink-soft">Soil loss and runoff in</span>
-        {LOSS_UNIT_CHOICES.map((c) => (
-          <button
-            key={c.value}
-            type="button"
-            aria-pressed={lossUnits === c.value}
-            onClick={() => setLossUnits(c.value)}
-            data-testid={`board-loss-units-${c.value === 'ha' ? 'si' : 'us'}`}
-            className={pill(lossUnits === c.value)}
-          >
-            {c.label}
-          </button>
-        ))}
-        <span className="text-xs text-ink-soft">(hover a figure for the other units)</span>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <div role="group" aria-label="Units of soil loss" className="flex flex-wrap items-center gap-1 text-sm" data-testid="board-loss-units">
+          <span className="text-ink-soft">Soil loss and runoff in</span>
+          {LOSS_UNIT_CHOICES.map((c) => (
+            <button
+              key={c.value}
+              type="button"
+              aria-pressed={lossUnits === c.value}
+              onClick={() => setLossUnits(c.value)}
+              data-testid={`board-loss-units-${c.value === 'ha' ? 'si' : 'us'}`}
+              className={pill(lossUnits === c.value)}
+            >
+              {c.label}
+            </button>
+          ))}
+          <span className="text-xs text-ink-soft">(hover a figure for the other units)</span>
+        </div>
+        <BoardCsvButton rows={rows} units={units} lossUnits={lossUnits} showFarm={showFarm} season={season} fileStem={fileStem} />
       </div>
       {treatmentsFarmId !== undefined ? (
         <div className="flex flex-col gap-2">
