@@ -2,7 +2,8 @@
 // A text cell that starts with =, +, -, @, a tab or a carriage return is one a spreadsheet may run
 // as a formula; it is written with a leading apostrophe so it shows as text (OWASP, "CSV
 // Injection"). Numbers are written as numbers, so a negative figure stays a figure.
-import { stringify } from 'csv-stringify/sync';
+// The package's browser build carries its own Buffer, so the same code runs in the browser and on Node.
+import { stringify } from 'csv-stringify/browser/esm/sync';
 
 export type CsvCell = string | number | boolean | null;
 export type CsvColumn<R> = { header: string; value: (row: R) => CsvCell };

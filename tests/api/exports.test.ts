@@ -83,7 +83,7 @@ describe('farm export', () => {
     const res = await farm.agents.farmer.get(url(`format=csv&season=${farm.season}`));
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
-    const rows = parse(res.text, { columns: true }) as Record<string, string>[];
+    const rows = parse(res.text, { columns: true, bom: true }) as Record<string, string>[];
     expect(rows).toHaveLength(3);
     const hay = rows.find((r) => r.name === 'Hay Ground')!;
     // OWASP "CSV Injection": a cell starting with = + - @ tab or CR is written with a leading apostrophe.

@@ -6,17 +6,26 @@ import type { Sequelize } from 'sequelize';
 import type { Express } from 'express';
 import { Field } from '../../server/models';
 import { makeDemoLikeFarm } from './demo-like-farm';
-import { signedIn } from './test-app';
+import request from 'supertest';
+import { TEST_PASSWORD } from './test-app';
 
 export const FORMULA_TITLE = '=HYPERLINK("http://example.test","click")';
 
-export async function makePlanFarm(app: Express, sequelize: Sequelize) {
+/** A supertest agent signed in as the user, on an app or a running server's URL. */
+async function signedInAt(target: Express | string, email: string) {
+  const agent = request.agent(target);
+  const res = await agent.post('/api/auth/login').send({ email, password: TEST_PASSWORD });
+  if (res.status !== 200) throw new Error(`login failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return agent;
+}
+
+export async function makePlanFarm(app: Express | string, sequelize: Sequelize) {
   const made = await makeDemoLikeFarm(sequelize);
   const { farm, users, memberships, ids, season } = made;
   await Field.update({ ownerMembershipId: memberships.landowner.id }, { where: { id: ids['Mill Hill'] } });
-  const farmer = await signedIn(app, users.farmer);
-  const advisor = await signedIn(app, users.advisor);
-  const landowner = await signedIn(app, users.landowner);
+  const farmer = await signedInAt(app, users.farmer.email);
+  const advisor = await signedInAt(app, users.advisor.email);
+  const landowner = await signedInAt(app, users.landowner.email);
   const plan = (await farmer.post(`/api/farms/${farm.id}/plans`).send({ season })).body;
   const actions = [
     { fieldId: ids['Long Slope'], treatment: 'no-till', quantity: 36, unit: 'ha', cost: 1620, plannedFrom: `${season}-04-20`, plannedTo: `${season}-05-10` },

@@ -129,7 +129,7 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
           treatments={treatments}
         />
         <div className="flex flex-col gap-2 xl:sticky xl:top-2 xl:self-start">
-          <div className="flex min-h-12 flex-wrap items-center gap-2 rounded-md border border-paper-edge bg-white/50 px-3 py-2 text-sm" data-testid="board-selection" aria-live="polite">
+          <div className="flex min-h-12 flex-wrap items-center gap-2 rounded-md border border-paper-edge bg-white/50 px-3 py-2 text-sm print:hidden" data-testid="board-selection" aria-live="polite">
             {selected ? (
               <>
                 <span className="num font-semibold">{selected.rank}.</span>
@@ -144,7 +144,8 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
               <span className="text-ink-soft">Pick a row or a field on the map to see it here.</span>
             )}
           </div>
-          <div className="h-[420px] overflow-hidden rounded-md border border-paper-edge">
+          {/* A live map does not redraw for paper: the table and the chart carry the same figures there. */}
+          <div className="h-[420px] overflow-hidden rounded-md border border-paper-edge print:hidden">
             <BoardMap fields={fields} rows={rows} selectedId={selectedId} onSelect={onMapSelect} tileUrl={tileUrl} tileAttribution={tileAttribution} />
           </div>
           <RiskLegend counts={counts} />
