@@ -45,6 +45,14 @@ const router = createBrowserRouter([
         lazy: async () => ({ Component: (await import('./pages/budget-page')).BudgetPage }),
       },
       {
+        path: paths.plan.path,
+        lazy: async () => ({ Component: (await import('./pages/plan-page')).PlanPage }),
+      },
+      {
+        path: paths.landownerPlan.path,
+        lazy: async () => ({ Component: (await import('./pages/landowner-plan-page')).LandownerPlanPage }),
+      },
+      {
         path: paths.people.path,
         lazy: async () => ({ Component: (await import('./pages/people-page')).PeoplePage }),
       },

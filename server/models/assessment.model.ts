@@ -1,6 +1,6 @@
 import { Field } from './field.model';
 import { Season } from './season.model';
-import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize, type NonAttribute } from 'sequelize';
 import type { FieldAssessment, StoredBoardFigures } from '../../shared/schemas/assessment';
 import type { EstimateInput } from '../../shared/schemas/estimate';
 
@@ -18,6 +18,8 @@ export class Assessment extends Model<InferAttributes<Assessment>, InferCreation
   declare boardRow: StoredBoardFigures;
   declare engineVersion: string;
   declare computedAt: CreationOptional<Date>;
+  declare season?: NonAttribute<Season>;
+  declare field?: NonAttribute<Field>;
 
   static initModel(sequelize: Sequelize): void {
     Assessment.init(
@@ -33,6 +35,17 @@ export class Assessment extends Model<InferAttributes<Assessment>, InferCreation
       },
       { sequelize, tableName: 'assessments', timestamps: false },
     );
+  }
+
+  /** Every stored assessment of a farm's fields, with the season's label and the field's name (A across seasons). */
+  static async ofFarmAcrossSeasons(farmId: number): Promise<Assessment[]> {
+    return Assessment.findAll({
+      attributes: ['fieldId', 'seasonId', 'boardRow'],
+      include: [
+        { model: Season, as: 'season', attributes: ['label'], where: { farmId } },
+        { model: Field, as: 'field', attributes: ['name'] },
+      ],
+    });
   }
 
   static associate(): void {

@@ -25,7 +25,7 @@ const toRecords = (rows: BoardSqlRow[]): BoardRecord[] =>
 
 /**
  * Every field of one farm (or only one owner's) with its stored board figures, for the season with
- * that label or the farm's newest, in one query. No season: an empty list and a null season.
+ * that label or the farm's current one (the newest holding cropping or a plan, else the newest), in one query. No season: an empty list and a null season.
  */
 export async function farmBoardRecords(
   sequelize: Sequelize,
@@ -35,7 +35,7 @@ export async function farmBoardRecords(
     `WITH chosen AS (
        SELECT s.id, s.label, s.farm_id FROM seasons s
         WHERE s.farm_id = $farmId AND ($label::text IS NULL OR s.label = $label)
-        ORDER BY s.label DESC LIMIT 1)
+        ORDER BY (EXISTS (SELECT 1 FROM field_croppings fc WHERE fc.season_id = s.id) OR EXISTS (SELECT 1 FROM plans p WHERE p.season_id = s.id)) DESC, s.label DESC LIMIT 1)
      SELECT c.id AS season_id, c.label AS season_label, fa.id AS farm_id, fa.name AS farm_name,
             f.id AS field_id, f.name, f.area_m2, a.board_row
        FROM chosen c
@@ -50,7 +50,7 @@ export async function farmBoardRecords(
 
 /**
  * An advisor's board across every farm where they are advisor: each farm's season with that
- * label, or its newest season. Farms without such a season are left out; a farm with the season
+ * label, or its current season (as for one farm). Farms without such a season are left out; a farm with the season
  * but no fields still names its season.
  */
 export async function advisorBoardRecords(sequelize: Sequelize, args: { userId: number; seasonLabel?: string }): Promise<{ seasons: string[]; records: BoardRecord[] }> {
@@ -60,7 +60,7 @@ export async function advisorBoardRecords(sequelize: Sequelize, args: { userId: 
          FROM seasons s
          JOIN memberships m ON m.farm_id = s.farm_id AND m.user_id = :userId AND m.role = 'advisor'
         WHERE CAST(:label AS text) IS NULL OR s.label = :label
-        ORDER BY s.farm_id, s.label DESC)
+        ORDER BY s.farm_id, (EXISTS (SELECT 1 FROM field_croppings fc WHERE fc.season_id = s.id) OR EXISTS (SELECT 1 FROM plans p WHERE p.season_id = s.id)) DESC, s.label DESC)
      SELECT c.id AS season_id, c.label AS season_label, fa.id AS farm_id, fa.name AS farm_name,
             f.id AS field_id, f.name, f.area_m2, a.board_row
        FROM chosen c

@@ -29,6 +29,11 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
     );
   }
 
+  /** A farm's newest events, newest first. */
+  static async newestOfFarm(farmId: number, limit: number): Promise<AuditEvent[]> {
+    return AuditEvent.findAll({ where: { farmId }, order: [['createdAt', 'DESC'], ['id', 'DESC']], limit });
+  }
+
   static associate(): void {
     AuditEvent.belongsTo(Farm, { foreignKey: 'farmId', as: 'farm' });
     AuditEvent.belongsTo(User, { foreignKey: 'userId', as: 'user' });

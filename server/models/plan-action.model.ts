@@ -25,6 +25,19 @@ export class PlanAction extends Model<InferAttributes<PlanAction>, InferCreation
   declare version: CreationOptional<number>;
   declare createdBy: number | null;
   declare updatedBy: number | null;
+  /** Follow-up, recorded without changing the plan: the day done, the amount applied, who recorded it and when. */
+  declare doneOn: CreationOptional<string | null>;
+  declare appliedQuantity: CreationOptional<number | null>;
+  declare doneNote: CreationOptional<string | null>;
+  declare doneByUser: CreationOptional<number | null>;
+  declare doneAt: CreationOptional<Date | null>;
+  /** The advisor's check of the work done. */
+  declare checkedBy: CreationOptional<number | null>;
+  declare checkedAt: CreationOptional<Date | null>;
+  /** A photo of the work (storage keys made by the server). */
+  declare photoKey: CreationOptional<string | null>;
+  declare photoThumbnailKey: CreationOptional<string | null>;
+  declare photoContentType: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare field?: NonAttribute<Field>;
@@ -51,6 +64,16 @@ export class PlanAction extends Model<InferAttributes<PlanAction>, InferCreation
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdBy: DataTypes.INTEGER,
         updatedBy: DataTypes.INTEGER,
+        doneOn: DataTypes.DATEONLY,
+        appliedQuantity: DataTypes.DOUBLE,
+        doneNote: DataTypes.TEXT,
+        doneByUser: DataTypes.INTEGER,
+        doneAt: DataTypes.DATE,
+        checkedBy: DataTypes.INTEGER,
+        checkedAt: DataTypes.DATE,
+        photoKey: DataTypes.TEXT,
+        photoThumbnailKey: DataTypes.TEXT,
+        photoContentType: DataTypes.TEXT,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -41,6 +41,7 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
   declare drainageSource: string | null;
   declare version: CreationOptional<number>;
   declare createdBy: number | null;
+  declare updatedBy: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   /** Loaded only when included. */
   declare field?: NonAttribute<Field>;
@@ -82,6 +83,7 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
         drainageSource: DataTypes.TEXT,
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdBy: DataTypes.INTEGER,
+        updatedBy: DataTypes.INTEGER,
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
@@ -97,6 +99,7 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
   static associate(): void {
     SoilSample.belongsTo(Field, { foreignKey: 'fieldId', as: 'field' });
     SoilSample.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+    SoilSample.belongsTo(User, { foreignKey: 'updatedBy', as: 'editor' });
     SoilSample.hasMany(SoilPhoto, { foreignKey: 'sampleId', as: 'photos' });
   }
 }

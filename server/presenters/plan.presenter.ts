@@ -1,6 +1,6 @@
 // Season plans as the API shows them. Pure: rows and the names of the people in them in,
 // shapes out; the landowner's view is the same shape cut down to their own fields.
-import type { Plan as PlanShape, PlanAction as PlanActionShape, PlanComment as PlanCommentShape, PlanFieldPrediction, PlanFieldTotal, PlanPerson } from '../../shared/schemas/plans';
+import { NO_FOLLOW_UP, type Plan as PlanShape, type PlanAction as PlanActionShape, type PlanComment as PlanCommentShape, type PlanFieldPrediction, type PlanFieldTotal, type PlanPerson } from '../../shared/schemas/plans';
 import type { Plan, PlanAction, PlanComment, PlanVersion } from '../models';
 
 /** Names of the people a plan mentions, by user id. */
@@ -31,6 +31,14 @@ export function presentAction(a: PlanAction, fieldName: string, people: People):
     createdBy: person(people, a.createdBy),
     updatedBy: person(people, a.updatedBy),
     updatedAt: new Date(a.updatedAt).toISOString(),
+    doneOn: a.doneOn ?? null,
+    appliedQuantity: a.appliedQuantity ?? null,
+    doneNote: a.doneNote ?? null,
+    doneRecordedBy: person(people, a.doneByUser ?? null),
+    doneRecordedAt: iso(a.doneAt),
+    checkedBy: person(people, a.checkedBy ?? null),
+    checkedAt: iso(a.checkedAt),
+    hasPhoto: Boolean(a.photoKey),
   };
 }
 
@@ -98,7 +106,7 @@ export function presentPlan({ plan, season, actions, comments, approvedRevision,
 }
 
 /** A frozen approved revision as stored (the plan as it was, comments left with the live plan). */
-export const presentFrozen = (v: PlanVersion): PlanShape => ({ ...v.snapshot, frozen: true });
+export const presentFrozen = (v: PlanVersion): PlanShape => ({ ...v.snapshot, actions: v.snapshot.actions.map((a) => ({ ...NO_FOLLOW_UP, ...a })), frozen: true });
 
 /** A plan cut down to the fields a landowner owns: their actions, totals and predictions, no review conversation. */
 export function forLandowner(plan: PlanShape, ownedFieldIds: Set<number>): PlanShape {

@@ -1,8 +1,11 @@
 // Seasons, cropping, climate and typed ground as the API shows them. Pure: rows in, shapes out.
 import type { Climate, Cropping, Ground, Season as SeasonShape } from '../../shared/schemas/season';
 import type { FarmClimate, FieldCropping, FieldGround, Season } from '../models';
+import { lastChangeOf } from './last-change.presenter';
 
-export const presentSeason = (s: Season): SeasonShape => ({ id: s.id, label: s.label });
+/** A season; with what it holds when the caller counted it (the seasons list). */
+export const presentSeason = (s: Season, holds?: { croppedFields: number; hasPlan: boolean; current: boolean }): SeasonShape =>
+  holds ? { id: s.id, label: s.label, croppedFields: holds.croppedFields, hasPlan: holds.hasPlan, empty: holds.croppedFields === 0 && !holds.hasPlan, current: holds.current } : { id: s.id, label: s.label };
 
 export const presentCropping = (c: FieldCropping, seasonLabel: string): Cropping => ({
   fieldId: c.fieldId,
@@ -18,6 +21,7 @@ export const presentCropping = (c: FieldCropping, seasonLabel: string): Cropping
   stripWidthM: c.stripWidthM,
   version: c.version,
   updatedAt: new Date(c.updatedAt).toISOString(),
+  lastChange: lastChangeOf(c),
 });
 
 export const presentClimate = (c: FarmClimate): Climate => ({
@@ -27,6 +31,7 @@ export const presentClimate = (c: FarmClimate): Climate => ({
   designStormMm: c.designStormMm,
   record: c.rRecord,
   version: c.version,
+  lastChange: lastChangeOf(c),
 });
 
 export const presentGround = (g: FieldGround): Ground => ({
@@ -35,7 +40,8 @@ export const presentGround = (g: FieldGround): Ground => ({
   drained: g.drained,
   drainedWaterTableDepthCm: g.drainedWaterTableDepthCm,
   version: g.version,
+  lastChange: lastChangeOf(g),
 });
 
 /** GET ground of a field nobody has typed a slope for yet. */
-export const NO_GROUND = { slopePct: null, slopeLengthM: null, drained: false, drainedWaterTableDepthCm: null, version: null } as const;
+export const NO_GROUND = { slopePct: null, slopeLengthM: null, drained: false, drainedWaterTableDepthCm: null, version: null, lastChange: null } as const;

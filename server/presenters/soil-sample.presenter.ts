@@ -1,6 +1,7 @@
 // A stored soil sample as the API's SoilSample: feel-test answers grouped, dates as ISO strings.
 import type { SoilSample as SoilSampleBody } from '../../shared/schemas/soils';
 import type { SoilSample } from '../models';
+import { lastChangeOf } from './last-change.presenter';
 
 export function presentSample(s: SoilSample): SoilSampleBody {
   return {
@@ -33,6 +34,7 @@ export function presentSample(s: SoilSample): SoilSampleBody {
     version: s.version,
     createdAt: s.createdAt.toISOString(),
     updatedAt: s.updatedAt.toISOString(),
+    lastChange: lastChangeOf(s),
   };
 }
 

@@ -2,7 +2,8 @@
 // comments). The farmer and the advisor write; a landowner reads approved revisions only.
 import { Router, type Request, type RequestHandler } from 'express';
 import type { Sequelize } from 'sequelize';
-import { PlanActionCreate, PlanActionDelete, PlanActionUpdate, PlanApprove, PlanCommentCreate, PlanCreate, PlanReturn, PlanSubmit } from '../../shared/schemas/plans';
+import { PlanActionCheck, PlanActionCreate, PlanActionDelete, PlanActionDone, PlanActionUpdate, PlanApprove, PlanCommentCreate, PlanCreate, PlanFromOption, PlanReturn, PlanSubmit } from '../../shared/schemas/plans';
+import { PHOTO_MAX_BYTES } from '../../shared/limits';
 import { SeasonLabel } from '../../shared/schemas/season';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { loadPlanActionMembership, loadPlanMembership } from '../middleware/plan-access';
@@ -10,7 +11,10 @@ import { validate } from '../middleware/validate';
 import { badRequest } from '../lib/http-error';
 import { createPlan } from '../services/plans/plans.service';
 import { planForSeason, planVersions, readPlan, type PlanViewer } from '../services/plans/plan-read.service';
-import { addAction, deleteAction, updateAction } from '../services/plans/plan-actions.service';
+import { addAction, addOption, deleteAction, updateAction } from '../services/plans/plan-actions.service';
+import { actionPhoto, markChecked, markDone } from '../services/plans/plan-follow-up.service';
+import { singleUpload } from '../middleware/upload';
+import type { FileStorage } from '../services/storage/file-storage';
 import { addComment, approvePlan, returnPlan, submitPlan } from '../services/plans/plan-review.service';
 
 const actorOf = (req: Request) => ({ userId: req.user!.id });
@@ -34,7 +38,9 @@ const versionFromQuery: RequestHandler = (req, _res, next) => {
   next();
 };
 
-export function plansRoutes(sequelize: Sequelize): { farms: Router; plans: Router; actions: Router } {
+const photoUpload = singleUpload(PHOTO_MAX_BYTES, 'photo');
+
+export function plansRoutes({ sequelize, storage }: { sequelize: Sequelize; storage: FileStorage }): { farms: Router; plans: Router; actions: Router } {
   const farms = Router();
   farms.get('/:farmId/plans', loadFarmMembership, async (req, res) => {
     res.json(await planForSeason(viewerOf(req), seasonParam(req)));
@@ -53,6 +59,9 @@ export function plansRoutes(sequelize: Sequelize): { farms: Router; plans: Route
   });
   plans.post('/:planId/actions', loadPlanMembership, writesPlans, validate(PlanActionCreate), async (req, res) => {
     res.status(201).json(await addAction(sequelize, actorOf(req), planIdOf(res), req.body));
+  });
+  plans.post('/:planId/actions/from-option', loadPlanMembership, writesPlans, validate(PlanFromOption), async (req, res) => {
+    res.status(201).json(await addOption(sequelize, actorOf(req), planIdOf(res), req.body));
   });
   plans.post('/:planId/submit', loadPlanMembership, requireRole('farmer'), validate(PlanSubmit), async (req, res) => {
     res.json(await submitPlan(sequelize, actorOf(req), planIdOf(res), req.body.version));
@@ -74,5 +83,18 @@ export function plansRoutes(sequelize: Sequelize): { farms: Router; plans: Route
   actions.delete('/:actionId', loadPlanActionMembership, writesPlans, versionFromQuery, validate(PlanActionDelete), async (req, res) => {
     res.json(await deleteAction(sequelize, actorOf(req), actionIdOf(res), req.body.version));
   });
+  // Follow-up: records of the work, not changes to the plan (no new revision, no new approval).
+  actions.post('/:actionId/done', loadPlanActionMembership, writesPlans, photoUpload, validate(PlanActionDone), async (req, res) => {
+    res.json(await markDone({ sequelize, storage }, actorOf(req), actionIdOf(res), req.body, req.file?.buffer));
+  });
+  actions.post('/:actionId/check', loadPlanActionMembership, requireRole('advisor'), validate(PlanActionCheck), async (req, res) => {
+    res.json(await markChecked(sequelize, actorOf(req), actionIdOf(res), req.body.version));
+  });
+  for (const [suffix, which] of [['photo', 'image'], ['photo/thumbnail', 'thumbnail']] as const) {
+    actions.get(`/:actionId/${suffix}`, loadPlanActionMembership, writesPlans, async (_req, res) => {
+      const f = await actionPhoto({ sequelize, storage }, actionIdOf(res), which);
+      res.type(f.contentType).set('Cache-Control', 'private, max-age=3600').send(f.body);
+    });
+  }
   return { farms, plans, actions };
 }

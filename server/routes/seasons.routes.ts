@@ -7,7 +7,7 @@ import { singleUpload } from '../middleware/upload';
 import { loadFarmMembership, requireRole } from '../middleware/farm-access';
 import { loadFieldMembership } from '../middleware/field-access';
 import { badRequest } from '../lib/http-error';
-import { createSeason, getCropping, listSeasons, putCropping } from '../services/seasons.service';
+import { createSeason, deleteSeason, getCropping, listSeasons, putCropping } from '../services/seasons.service';
 import { getClimate, getGround, putClimate, putClimateFromRecord, putGround } from '../services/climate-ground.service';
 import { RAINFALL_RECORD_MAX_BYTES } from '../../shared/limits';
 import { advisorBoard, farmBoard, fieldAssessment } from '../services/assessments/read-assessments';
@@ -34,8 +34,14 @@ export function seasonsRoutes(sequelize: Sequelize, jobs?: JobQueue): { farms: R
     res.json(await listSeasons(farmOf(req)));
   });
   farms.post('/:farmId/seasons', loadFarmMembership, requireRole('farmer'), validate(SeasonCreate), async (req, res) => {
-    const { season, created } = await createSeason(sequelize, actorOf(req), farmOf(req), req.body.label);
+    const { season, created } = await createSeason(sequelize, actorOf(req), farmOf(req), req.body.label, { copyCroppingFrom: req.body.copyCroppingFrom });
     res.status(created ? 201 : 200).json(season);
+  });
+  farms.delete('/:farmId/seasons/:label', loadFarmMembership, requireRole('farmer'), async (req, res) => {
+    const label = SeasonLabel.safeParse(req.params.label);
+    if (!label.success) throw badRequest('invalid_input', `label: ${label.error.issues[0].message}`);
+    await deleteSeason(sequelize, actorOf(req), farmOf(req), label.data);
+    res.status(204).end();
   });
   farms.get('/:farmId/climate', loadFarmMembership, async (req, res) => {
     res.json(await getClimate(farmOf(req)));

@@ -6,13 +6,14 @@ import type { Climate, ClimateUpdate, Ground, GroundUpdate, RainfallRecordFields
 import { badRequest, conflict, HttpError, invalid } from '../lib/http-error';
 import { FarmClimate, FieldGround } from '../models';
 import { NO_GROUND, presentClimate, presentGround } from '../presenters/seasons.presenter';
+import { withEditor } from '../models/with-editor';
 import { recordEvent } from './audit';
 import { afterInputsChange } from './input-changes.service';
 import type { JobQueue } from './jobs/job-queue';
 import { rFromRainfallCsv } from './rainfall-record';
 
 export async function getClimate(farmId: number): Promise<Climate> {
-  const c = await FarmClimate.findByPk(farmId);
+  const c = await FarmClimate.findByPk(farmId, { include: [withEditor] });
   if (!c) throw new HttpError(404, 'no_climate', "This farm's climate (R and the design storm) is not set yet.");
   return presentClimate(c);
 }
@@ -44,7 +45,7 @@ async function saveClimate(sequelize: Sequelize, actor: { userId: number }, farm
     await recordEvent({ userId: actor.userId, farmId, entity: 'climate', entityId: farmId, action: audit.action ?? (cur ? 'updated' : 'created'), ...(audit.detail ? { detail: audit.detail } : {}) }, t);
     await afterInputsChange({ sequelize }, { kind: 'climate', farmId }, actor, t);
     // Read back: REAL columns round what was sent, and the answer should match a later GET.
-    return presentClimate(await row.reload({ transaction: t }));
+    return presentClimate(await row.reload({ include: [withEditor], transaction: t }));
   });
 }
 
@@ -68,7 +69,7 @@ export async function putClimateFromRecord(sequelize: Sequelize, actor: { userId
 }
 
 export async function getGround(fieldId: number): Promise<Ground | typeof NO_GROUND> {
-  const g = await FieldGround.findByPk(fieldId);
+  const g = await FieldGround.findByPk(fieldId, { include: [withEditor] });
   return g ? presentGround(g) : NO_GROUND;
 }
 
@@ -93,7 +94,7 @@ export async function putGround(
     };
     const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("field's slope", () => FieldGround.create({ fieldId: field.id, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'ground', entityId: field.id, action: cur ? 'updated' : 'created' }, t);
-    await row.reload({ transaction: t });
+    await row.reload({ include: [withEditor], transaction: t });
     return { ground: presentGround(row), slopeLengthChanged: lengthBefore !== row.slopeLengthM };
   });
   // After the commit: the typed slope length caps the elevation model's flow length for LS, so a

@@ -2,17 +2,37 @@
 // every cropping change refresh the stored assessments they touch.
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type { Cropping, CroppingUpdate, Season as SeasonShape } from '../../shared/schemas/season';
-import { conflict, HttpError, notFound } from '../lib/http-error';
-import { FieldCropping, Season } from '../models';
+import { badRequest, conflict, HttpError, notFound } from '../lib/http-error';
+import { FieldCropping, Plan, Season } from '../models';
+import { withEditor } from '../models/with-editor';
 import { presentCropping, presentSeason } from '../presenters/seasons.presenter';
 import { recordEvent } from './audit';
 import { afterInputsChange, type InputChange } from './input-changes.service';
 
-export async function listSeasons(farmId: number, transaction?: Transaction): Promise<SeasonShape[]> {
-  return (await Season.scope('newestFirst').findAll({ where: { farmId }, transaction })).map(presentSeason);
+/** A farm's seasons, newest first, each with what it holds (fields with cropping, a plan). */
+async function seasonsWithData(farmId: number, transaction?: Transaction): Promise<{ season: Season; croppedFields: number; hasPlan: boolean }[]> {
+  const seasons = await Season.scope('newestFirst').findAll({ where: { farmId }, transaction });
+  const ids = seasons.map((s) => s.id);
+  if (!ids.length) return [];
+  const counts = (await FieldCropping.count({ where: { seasonId: ids }, group: ['seasonId'], transaction })) as unknown as { seasonId: number; count: number }[];
+  const byId = new Map(counts.map((c) => [c.seasonId, Number(c.count)]));
+  const planned = new Set((await Plan.findAll({ where: { seasonId: ids }, attributes: ['seasonId'], transaction })).map((p) => p.seasonId));
+  return seasons.map((season) => ({ season, croppedFields: byId.get(season.id) ?? 0, hasPlan: planned.has(season.id) }));
 }
 
-/** The season asked for, or the newest one; 404 when the farm has none by that label. */
+/**
+ * The season screens open on: the newest one holding cropping or a plan (the one in progress, or
+ * the latest with data), never an empty newer one; the newest when none holds anything.
+ */
+const currentOf = <T extends { croppedFields: number; hasPlan: boolean }>(list: T[]): T | undefined => list.find((s) => s.croppedFields > 0 || s.hasPlan) ?? list[0];
+
+/** GET /api/farms/:farmId/seasons: newest first, the current one marked, empty ones marked (they can be deleted). */
+export async function listSeasons(farmId: number, transaction?: Transaction): Promise<SeasonShape[]> {
+  const list = await seasonsWithData(farmId, transaction);
+  const current = currentOf(list);
+  return list.map((s) => presentSeason(s.season, { croppedFields: s.croppedFields, hasPlan: s.hasPlan, current: s === current }));
+}
+
 /** The 404 for a season label the farm does not have (or for a farm with no season at all). */
 export function seasonNotFound(label: string | undefined): HttpError {
   return label ? notFound(`Season ${label}`) : notFound('A season on this farm');
@@ -24,9 +44,9 @@ export async function resolveSeason(farmId: number, label: string | undefined): 
     if (!s) throw seasonNotFound(label);
     return presentSeason(s);
   }
-  const latest = await Season.scope('newestFirst').findOne({ where: { farmId } });
-  if (!latest) throw seasonNotFound(undefined);
-  return presentSeason(latest);
+  const current = currentOf(await seasonsWithData(farmId));
+  if (!current) throw seasonNotFound(undefined);
+  return presentSeason(current.season);
 }
 
 /** The season with that label, created when missing. */
@@ -35,12 +55,42 @@ async function ensureSeason(farmId: number, label: string, transaction: Transact
   return { season, created };
 }
 
-/** POST a season: the existing one when the label is taken. */
-export async function createSeason(sequelize: Sequelize, actor: { userId: number }, farmId: number, label: string): Promise<{ season: SeasonShape; created: boolean }> {
+/** Every field's cropping of one season written into another (a new, empty one), as the actor's. */
+async function copyCropping(fromSeasonId: number, toSeasonId: number, actor: { userId: number }, t: Transaction): Promise<number> {
+  const rows = await FieldCropping.findAll({ where: { seasonId: fromSeasonId }, transaction: t });
+  for (const r of rows) {
+    await FieldCropping.create(
+      {
+        fieldId: r.fieldId, seasonId: toSeasonId, crop: r.crop, tillage: r.tillage, residuePct: r.residuePct, groundCoverPct: r.groundCoverPct, coverCrop: r.coverCrop,
+        practice: r.practice, terraceIntervalM: r.terraceIntervalM, stripRotation: r.stripRotation, stripWidthM: r.stripWidthM, updatedBy: actor.userId,
+      },
+      { transaction: t },
+    );
+  }
+  return rows.length;
+}
+
+/**
+ * POST a season: the existing one when the label is taken. With copyCroppingFrom, a new season
+ * starts with every field's cropping of that season (the usual start: the same crops again).
+ */
+export async function createSeason(
+  sequelize: Sequelize,
+  actor: { userId: number },
+  farmId: number,
+  label: string,
+  options: { copyCroppingFrom?: string } = {},
+): Promise<{ season: SeasonShape; created: boolean }> {
   return sequelize.transaction(async (t) => {
+    const source = options.copyCroppingFrom ? await Season.findOne({ where: { farmId, label: options.copyCroppingFrom }, transaction: t }) : null;
+    if (options.copyCroppingFrom && !source) {
+      const message = `copyCroppingFrom: this farm has no season ${options.copyCroppingFrom}`;
+      throw badRequest('invalid_input', message, { issues: [{ path: 'copyCroppingFrom', message: message.slice('copyCroppingFrom: '.length) }] });
+    }
     const { season, created } = await ensureSeason(farmId, label, t);
     if (created) {
-      await recordEvent({ userId: actor.userId, farmId, entity: 'season', entityId: season.id, action: 'created', detail: { label } }, t);
+      const copied = source ? await copyCropping(source.id, season.id, actor, t) : 0;
+      await recordEvent({ userId: actor.userId, farmId, entity: 'season', entityId: season.id, action: 'created', detail: { label, ...(source ? { copiedFrom: source.label, copied } : {}) } }, t);
       // A new season needs an assessment row for every field of the farm.
       await afterInputsChange({ sequelize }, { kind: 'season', farmId }, actor, t);
     }
@@ -48,9 +98,26 @@ export async function createSeason(sequelize: Sequelize, actor: { userId: number
   });
 }
 
+/** DELETE a season (farmer): only an empty one (no cropping, no plan); 409 saying what it holds otherwise. */
+export async function deleteSeason(sequelize: Sequelize, actor: { userId: number }, farmId: number, label: string): Promise<void> {
+  await sequelize.transaction(async (t) => {
+    const season = await Season.findOne({ where: { farmId, label }, lock: t.LOCK.UPDATE, transaction: t });
+    if (!season) throw seasonNotFound(label);
+    const cropped = await FieldCropping.count({ where: { seasonId: season.id }, transaction: t });
+    const plan = await Plan.count({ where: { seasonId: season.id }, transaction: t });
+    if (cropped || plan) {
+      const holds = [cropped ? `cropping for ${cropped} field${cropped === 1 ? '' : 's'}` : null, plan ? 'a season plan' : null].filter(Boolean).join(' and ');
+      throw conflict('season_has_data', `Season ${label} holds ${holds}, so it cannot be deleted. Only an empty season can be.`);
+    }
+    // Its assessment rows (made for every field when the season was added) go with it.
+    await season.destroy({ transaction: t });
+    await recordEvent({ userId: actor.userId, farmId, entity: 'season', entityId: season.id, action: 'deleted', detail: { label } }, t);
+  });
+}
+
 export async function getCropping(fieldId: number, seasonLabel: string | undefined, farmId: number): Promise<Cropping> {
   const season = await resolveSeason(farmId, seasonLabel);
-  const row = await FieldCropping.findOne({ where: { fieldId, seasonId: season.id } });
+  const row = await FieldCropping.findOne({ where: { fieldId, seasonId: season.id }, include: [withEditor] });
   if (!row) throw new HttpError(404, 'no_cropping', `This field has no cropping for season ${season.label} yet.`);
   return presentCropping(row, season.label);
 }
@@ -68,7 +135,7 @@ export async function putCropping(sequelize: Sequelize, actor: { userId: number 
   return sequelize.transaction(async (t) => {
     const { season, created } = await ensureSeason(field.farmId, input.season, t);
     const existing = await FieldCropping.findOne({ where: { fieldId: field.id, seasonId: season.id }, transaction: t, lock: t.LOCK.UPDATE });
-    if (existing && existing.version !== input.version) throw staleCropping(season.label, input.version, presentCropping(existing, season.label));
+    if (existing && existing.version !== input.version) throw staleCropping(season.label, input.version, presentCropping(await existing.reload({ include: [withEditor], transaction: t }), season.label));
     const values = {
       crop: input.crop,
       tillage: input.tillage ?? null,
@@ -98,6 +165,6 @@ export async function putCropping(sequelize: Sequelize, actor: { userId: number 
     const change: InputChange = created ? { kind: 'season', farmId: field.farmId } : { kind: 'cropping', farmId: field.farmId, fieldIds: [field.id] };
     await afterInputsChange({ sequelize }, change, actor, t);
     // Read back: REAL columns round what was sent, and the answer should match a later GET.
-    return presentCropping(await row.reload({ transaction: t }), season.label);
+    return presentCropping(await row.reload({ include: [withEditor], transaction: t }), season.label);
   });
 }

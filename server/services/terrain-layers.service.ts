@@ -17,13 +17,13 @@ export type FarmLayers = {
 export async function farmLayers(sequelize: Sequelize, farmId: number): Promise<FarmLayers> {
   const layers = await TerrainLayer.ofFarm(farmId);
   const grids = await keptGrids(farmId);
-  const [season] = await listSeasons(farmId);
+  const season = (await listSeasons(farmId)).find((s) => s.current);
   return { layers, soilLoss: grids && season && layers.length ? { ls: grids.ls, season } : null };
 }
 
 export type LayerImage = { png: Buffer; cacheControl: string };
 
-/** A layer's PNG; soil loss is drawn for the season asked for (default: the newest). */
+/** A layer's PNG; soil loss is drawn for the season asked for (default: the current one). */
 export async function layerImage(
   deps: { sequelize: Sequelize; storage: FileStorage },
   farmId: number,

@@ -74,6 +74,30 @@ export type PlanActionUpdate = z.input<typeof PlanActionUpdate>;
 /** DELETE /api/plan-actions/:actionId (version in the body or as ?version=). */
 export const PlanActionDelete = z.object({ version: z.coerce.number({ error: 'version must be the version you read' }).pipe(version) });
 
+/** A number sent as JSON or as multipart text; '' and absent mean none. */
+const formAmount = (f: string, max: number) =>
+  z.preprocess((v) => (v === '' || v === undefined || v === null ? undefined : typeof v === 'string' ? Number(v) : v), amount(f, max).optional());
+
+/**
+ * POST /api/plan-actions/:actionId/done (JSON, or multipart with a photo as the part "file"):
+ * the day the work was done and the amount actually applied. A follow-up record: it changes
+ * neither the plan's version nor its revision.
+ */
+export const PlanActionDone = z.object({
+  version: z.coerce.number({ error: 'version must be the version you read' }).pipe(version),
+  doneOn: date('doneOn'),
+  appliedQuantity: formAmount('appliedQuantity', 1_000_000),
+  note: z.preprocess((v) => (v === '' ? undefined : v), longText('note', 2000).optional()),
+});
+export type PlanActionDone = z.input<typeof PlanActionDone>;
+/** POST /api/plan-actions/:actionId/check (advisor): the work done was seen and is right. */
+export const PlanActionCheck = z.object({ version });
+/** POST /api/plans/:planId/actions/from-option: a field's treatment option, one action per treatment. */
+export const PlanFromOption = z.object({
+  fieldId: actionFields.fieldId,
+  optionId: z.string({ error: 'optionId must be the id of one of the field’s treatment options' }).trim().min(1, 'optionId must not be empty').max(200, 'optionId is too long'),
+});
+
 /** POST /api/farms/:farmId/plans */
 export const PlanCreate = z.object({ season: SeasonLabel });
 /** POST /api/plans/:planId/submit */
@@ -110,7 +134,21 @@ export type PlanAction = {
   createdBy: PlanPerson;
   updatedBy: PlanPerson;
   updatedAt: string;
+  /** Follow-up (not a change of the plan): the day done, the amount actually applied (in unit), a note, who recorded it and when. */
+  doneOn: string | null;
+  appliedQuantity: number | null;
+  doneNote: string | null;
+  doneRecordedBy: PlanPerson;
+  doneRecordedAt: string | null;
+  /** The advisor who checked the work, and when. */
+  checkedBy: PlanPerson;
+  checkedAt: string | null;
+  /** A photo of the work: GET /api/plan-actions/:id/photo (and /photo/thumbnail). */
+  hasPhoto: boolean;
 };
+
+/** An action's follow-up before any is recorded (and in revisions frozen before follow-up existed). */
+export const NO_FOLLOW_UP = { doneOn: null, appliedQuantity: null, doneNote: null, doneRecordedBy: null, doneRecordedAt: null, checkedBy: null, checkedAt: null, hasPhoto: false } as const;
 
 export type PlanComment = {
   id: number;

@@ -4,8 +4,16 @@ import { Crop, Tillage, Practice, StripRotation } from './estimate';
 import { plainText } from './plain-text';
 
 export const SeasonLabel = plainText('season', 40);
-export const SeasonCreate = z.object({ label: SeasonLabel });
-export type Season = { id: number; label: string };
+/** POST /api/farms/:farmId/seasons: a label, and optionally the season whose cropping it starts with. */
+export const SeasonCreate = z.object({ label: SeasonLabel, copyCroppingFrom: plainText('copyCroppingFrom', 40).optional() });
+/**
+ * A season. The seasons list adds what it holds: fields with cropping, whether it has a plan,
+ * empty (neither; it may be deleted) and current (the one screens open on).
+ */
+/** Who last changed a record (null: a person since removed) and when. */
+export type LastChange = { by: string | null; at: string };
+
+export type Season = { id: number; label: string; croppedFields?: number; hasPlan?: boolean; empty?: boolean; current?: boolean };
 
 const pct = (f: string) => z.number({ error: `${f} must be a number` }).min(0, `${f} must be at least 0 %`).max(100, `${f} must be at most 100 %`);
 const isoDate = (f: string) => z.string().regex(/^\d{4}-\d{2}-\d{2}$/, `${f} must be a date like 2027-09-15`);
@@ -57,6 +65,7 @@ export type Cropping = {
   stripWidthM: number | null;
   version: number;
   updatedAt: string;
+  lastChange: LastChange;
 };
 
 export const ClimateUpdate = z
@@ -82,6 +91,7 @@ export type Climate = {
   /** When rFrom is 'record'. */
   record: RainfallRecordSummary | null;
   version: number;
+  lastChange: LastChange;
 };
 
 export const GroundUpdate = z
@@ -104,7 +114,7 @@ export const GroundUpdate = z
     path: ['drainedWaterTableDepthCm'],
   });
 export type GroundUpdate = z.input<typeof GroundUpdate>;
-export type Ground = { slopePct: number | null; slopeLengthM: number | null; drained: boolean; drainedWaterTableDepthCm: number | null; version: number };
+export type Ground = { slopePct: number | null; slopeLengthM: number | null; drained: boolean; drainedWaterTableDepthCm: number | null; version: number; lastChange: LastChange };
 
 /** The text parts of a rainfall-record upload (multipart): both optional, numbers as text. */
 const formNumber = (min: number, max: number) => {

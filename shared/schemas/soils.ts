@@ -4,6 +4,7 @@
 import { z } from 'zod';
 import { tryClassifyTexture } from '../erosion/texture';
 import type { Origin } from './provenance';
+import type { LastChange } from './season';
 
 /** A number with limits and a message that names the field. */
 const num = (field: string, min: number, max: number, unit = '') =>
@@ -149,6 +150,8 @@ export type SoilSample = {
   version: number;
   createdAt: string;
   updatedAt: string;
+  /** Who last changed it and when (by is null when not known). */
+  lastChange: LastChange;
 };
 
 /** POST /api/fields/:fieldId/soil-samples/import answer (201). */

@@ -13,13 +13,14 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 type Props = {
   farmName?: string;
   screen: string;
-  /** The caller's role on the farm in view: farmers and advisors also get Treatments and budget. */
+  /** The caller's role on the farm in view: farmers and advisors also get Treatments and budget and the Season plan; a landowner the approved plan. */
   role?: Role;
   menu?: ReactNode;
 };
 
 export function AppHeader({ farmName, screen, role, menu }: Props) {
-  // On a farm's screens, links to the farm's map, its priority board and (not for a landowner) its budget.
+  // On a farm's screens, links to the farm's map, its priority board, and the budget and season plan
+  // (for a landowner, the approved plan instead).
   const farmId = useMatch('/farms/:farmId/*')?.params.farmId;
   return (
     <header className="flex flex-wrap items-center gap-x-4 gap-y-2 border-b border-paper-edge bg-paper px-4 py-2">
@@ -51,8 +52,17 @@ export function AppHeader({ farmName, screen, role, menu }: Props) {
               People
             </NavLink>
             {role === 'farmer' || role === 'advisor' ? (
-              <NavLink to={paths.budget.getHref(farmId)} data-testid="nav-budget" className={navClass}>
-                Treatments and budget
+              <>
+                <NavLink to={paths.budget.getHref(farmId)} data-testid="nav-budget" className={navClass}>
+                  Treatments and budget
+                </NavLink>
+                <NavLink to={paths.plan.getHref(farmId)} data-testid="nav-plan" className={navClass}>
+                  Season plan
+                </NavLink>
+              </>
+            ) : role === 'landowner' ? (
+              <NavLink to={paths.landownerPlan.getHref(farmId)} data-testid="nav-landowner-plan" className={navClass}>
+                Approved plan
               </NavLink>
             ) : null}
           </>

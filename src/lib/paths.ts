@@ -37,4 +37,15 @@ export const paths = {
     getHref: (farmId: number | string, season?: string | null) =>
       `/farms/${farmId}/budget${season ? `?season=${encodeURIComponent(season)}` : ''}`,
   },
+  plan: {
+    path: '/farms/:farmId/plan',
+    getHref: (farmId: number | string, season?: string | null) =>
+      `/farms/${farmId}/plan${season ? `?season=${encodeURIComponent(season)}` : ''}`,
+  },
+  /** The landowner's view: the approved plan for their own fields. */
+  landownerPlan: {
+    path: '/farms/:farmId/approved-plan',
+    getHref: (farmId: number | string, season?: string | null) =>
+      `/farms/${farmId}/approved-plan${season ? `?season=${encodeURIComponent(season)}` : ''}`,
+  },
 } as const;

@@ -8,6 +8,7 @@ import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
 import { BudgetPlanner } from '../features/budget/components/budget-planner';
+import { AddOptionButton } from '../features/plans/components/add-option-button';
 import { PriceListPanel } from '../features/budget/components/price-list-form';
 import { useFarm } from '../features/farms/api/get-farm';
 import { RoleBadge } from '../features/farms/components/role-badge';
@@ -71,7 +72,13 @@ export function BudgetPage() {
             {seasons.isPending ? (
               <Loading label="Loading the seasons…" />
             ) : season ? (
-              <BudgetPlanner key={season} farmId={farmId} season={season} units={me.data.units} />
+              <BudgetPlanner
+                key={season}
+                farmId={farmId}
+                season={season}
+                units={me.data.units}
+                choiceExtra={({ season: s, fieldId, optionId }) => <AddOptionButton farmId={farmId} season={s} fieldId={fieldId} optionId={optionId} />}
+              />
             ) : (
               <Notice tone="caution" testId="no-season">
                 This farm has no season yet.{role === 'farmer' ? ' Add one to plan its treatments.' : ' The farmer adds seasons.'}

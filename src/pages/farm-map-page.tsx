@@ -12,6 +12,7 @@ import { RoleBadge } from '../features/farms/components/role-badge';
 import { FarmMapWorkspace } from '../features/fields/components/farm-map-workspace';
 import { ElevationPanel } from '../features/terrain/components/elevation-panel';
 import { SoilMapPanel } from '../features/soils/components/soil-map-panel';
+import { RecentChanges } from '../features/changes/components/recent-changes';
 import { FieldTerrainFigures } from '../features/terrain/components/field-terrain-figures';
 import { TerrainMapLayers } from '../features/terrain/components/terrain-map-layers';
 import { useSeasonChoice } from '../features/seasons/components/use-season-choice';
@@ -87,6 +88,7 @@ export function FarmMapPage() {
                 <>
                   <ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />
                   <SoilMapPanel farmId={farmId} role={farm.data.role} />
+                  <RecentChanges farmId={farmId} />
                 </>
               )}
             </>

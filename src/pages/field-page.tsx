@@ -8,6 +8,8 @@ import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
 import { useFarm } from '../features/farms/api/get-farm';
 import { FieldScreen } from '../features/field-screen/components/field-screen';
+import type { OptionExtra } from '../features/field-screen/components/option-extra';
+import { AddOptionButton } from '../features/plans/components/add-option-button';
 
 export function FieldPage() {
   const params = useParams();
@@ -16,6 +18,8 @@ export function FieldPage() {
   const farm = useFarm(farmId);
   const me = useMe();
   const header = <AppHeader screen="Field" farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
+  // Beside each treatment option on the Risk tab: add it to the season's plan in one click.
+  const optionExtra: OptionExtra = ({ fieldId: id, season, option }) => <AddOptionButton farmId={farmId} season={season} fieldId={id} optionId={option.id} />;
   const bad = !Number.isInteger(farmId) || farmId <= 0 || !Number.isInteger(fieldId) || fieldId <= 0;
 
   if (bad || farm.isError)
@@ -24,7 +28,7 @@ export function FieldPage() {
   return (
     <div className="flex h-full flex-col">
       {header}
-      {farm.isPending || !me.data ? <Loading label="Opening the field…" /> : <FieldScreen key={fieldId} farm={farm.data} fieldId={fieldId} units={me.data.units} />}
+      {farm.isPending || !me.data ? <Loading label="Opening the field…" /> : <FieldScreen key={fieldId} farm={farm.data} fieldId={fieldId} units={me.data.units} optionExtra={optionExtra} />}
     </div>
   );
 }

@@ -147,7 +147,7 @@ describe('a season plan from draft to approval', () => {
     const s = (await agents.farmer.post(`/api/plans/${plan.id}/submit`).send({ version: a.plan.version })).body;
     await agents.advisor.post(`/api/plans/${plan.id}/approve`).send({ version: s.version });
 
-    const changed = await agents.farmer.patch(`/api/plan-actions/${a.action.id}`).send({ version: 1, status: 'done', notes: 'Drilled on 22 April.' });
+    const changed = await agents.farmer.patch(`/api/plan-actions/${a.action.id}`).send({ version: 1, cost: 950, notes: 'Drilled on 22 April.' });
     expect(changed.status).toBe(200);
     expect(changed.body.plan).toMatchObject({ state: 'draft', revision: 2, approvedRevision: 1, approvedBy: null });
     const extra = (await agents.farmer.post(`/api/plans/${plan.id}/actions`).send({ fieldId: rented, treatment: 'filter-strip', cost: 300 })).body;
@@ -173,7 +173,7 @@ describe('a season plan from draft to approval', () => {
         title: 'No-till',
         fieldName: 'Rented',
         fields: [
-          { key: 'status', from: 'planned', to: 'done' },
+          { key: 'cost', from: 900, to: 950 },
           { key: 'notes', from: 'Hire the drill.', to: 'Drilled on 22 April.' },
         ],
       },

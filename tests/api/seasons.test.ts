@@ -24,7 +24,7 @@ describe('cropping per field per season', () => {
     const first = await farmer.put(`/api/fields/${fieldId}/cropping`).send(corn);
     expect(first.status).toBe(200);
     expect(first.body).toMatchObject({ season: '2027', crop: 'corn', tillage: 'no-till', version: 0 });
-    expect((await farmer.get(`/api/farms/${farm.id}/seasons`)).body).toEqual([{ id: expect.any(Number), label: '2027' }]);
+    expect((await farmer.get(`/api/farms/${farm.id}/seasons`)).body).toEqual([{ id: expect.any(Number), label: '2027', croppedFields: 1, hasPlan: false, empty: false, current: true }]);
     const second = await farmer.put(`/api/fields/${fieldId}/cropping`).send({ ...corn, residuePct: 40, version: 0 });
     expect(second.body.version).toBe(1);
     const stale = await farmer.put(`/api/fields/${fieldId}/cropping`).send({ ...corn, residuePct: 10, version: 0 });

@@ -6,7 +6,9 @@ import { TREATMENT_TITLES } from '../../../shared/erosion/treatments/field-treat
 import { PlanActionCreate, type PlanAction as PlanActionShape, type Plan as PlanShape, type PlanActionUpdate } from '../../../shared/schemas/plans';
 import { badRequest, conflict, notFound } from '../../lib/http-error';
 import { describeIssues } from '../../middleware/validate';
-import { Field, PlanAction, type Plan } from '../../models';
+import { actionsFromOption } from '../../../shared/plan-from-option';
+import { Field, Plan, PlanAction, Season } from '../../models';
+import { fieldTreatmentsAnswer } from '../treatments/farm-treatments.service';
 import { recordEvent } from '../audit';
 import { livePlan } from './plan-read.service';
 import { lockPlan, openForEdit, type Actor } from './plans.service';
@@ -40,12 +42,20 @@ function valuesOf(input: ActionInput) {
   };
 }
 
-async function answer(planId: number, actionId: number | null, t: Transaction): Promise<ActionAnswer> {
+export async function answer(planId: number, actionId: number | null, t: Transaction): Promise<ActionAnswer> {
   const plan = await livePlan(planId, t);
   return { plan, action: plan.actions.find((a) => a.id === actionId) ?? null };
 }
 
+/** Done and checked are follow-up records with their own routes, never a change of the plan. */
+function refuseStatus(status: string | undefined, current: string): void {
+  if (status === undefined || status === current) return;
+  const message = 'status: mark an action done with POST /api/plan-actions/:id/done and checked with …/check; those are follow-up records, not changes to the plan';
+  throw badRequest('invalid_input', message, { issues: [{ path: 'status', message: message.slice('status: '.length) }] });
+}
+
 export async function addAction(sequelize: Sequelize, actor: Actor, planId: number, input: ActionInput): Promise<ActionAnswer> {
+  refuseStatus(input.status, 'planned');
   return sequelize.transaction(async (t) => {
     const plan = await lockPlan(planId, undefined, t);
     await checkField(plan, input.fieldId, t);
@@ -60,7 +70,7 @@ export async function addAction(sequelize: Sequelize, actor: Actor, planId: numb
 }
 
 /** The action, locked, with its plan locked first; 409 when the caller read an older version. */
-async function lockAction(actionId: number, sentVersion: number, t: Transaction): Promise<{ action: PlanAction; plan: Plan }> {
+export async function lockAction(actionId: number, sentVersion: number, t: Transaction): Promise<{ action: PlanAction; plan: Plan }> {
   const found = await PlanAction.findByPk(actionId, { attributes: ['planId'], transaction: t });
   if (!found) throw notFound('That plan action');
   const plan = await lockPlan(found.planId, undefined, t);
@@ -96,6 +106,7 @@ const inputOf = (a: PlanAction) => ({
 export async function updateAction(sequelize: Sequelize, actor: Actor, actionId: number, patch: PlanActionUpdate): Promise<ActionAnswer> {
   return sequelize.transaction(async (t) => {
     const { action, plan } = await lockAction(actionId, patch.version, t);
+    refuseStatus(patch.status, action.status);
     const { version: _version, ...changes } = patch;
     const given = Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined));
     // A new treatment without a title of its own takes the treatment's title.
@@ -123,5 +134,42 @@ export async function deleteAction(sequelize: Sequelize, actor: Actor, actionId:
       t,
     );
     return answer(plan.id, null, t);
+  });
+}
+
+/**
+ * POST /api/plans/:planId/actions/from-option: a field's treatment option for the plan's season,
+ * one action per treatment it combines (shared/plan-from-option), in one transaction.
+ */
+export async function addOption(sequelize: Sequelize, actor: Actor, planId: number, input: { fieldId: number; optionId: string }): Promise<ActionAnswer> {
+  const found = await Plan.findByPk(planId, { attributes: ['id', 'farmId'], include: [{ model: Season, as: 'season', attributes: ['label'] }] });
+  if (!found) throw notFound('That plan');
+  const field = await Field.findByPk(input.fieldId, { attributes: ['id', 'farmId'] });
+  if (!field || field.farmId !== found.farmId) {
+    throw badRequest('invalid_input', 'fieldId: there is no field with that id on this farm', { issues: [{ path: 'fieldId', message: 'there is no field with that id on this farm' }] });
+  }
+  const treatments = await fieldTreatmentsAnswer(sequelize, found.farmId, input.fieldId, found.season!.label);
+  const option = treatments.ok ? treatments.options.find((o) => o.id === input.optionId) : undefined;
+  if (!option) {
+    const message = `optionId: the field has no treatment option "${input.optionId}" for season ${found.season!.label}`;
+    throw badRequest('invalid_input', message, { issues: [{ path: 'optionId', message: message.slice('optionId: '.length) }] });
+  }
+  const made = actionsFromOption(input.fieldId, option);
+  return sequelize.transaction(async (t) => {
+    const plan = await lockPlan(planId, undefined, t);
+    await openForEdit(plan, actor, t);
+    let firstId: number | null = null;
+    for (const a of made) {
+      const action = await PlanAction.create(
+        { ...valuesOf(PlanActionCreate.parse(a)), planId, currency: plan.currency, createdBy: actor.userId, updatedBy: actor.userId },
+        { transaction: t },
+      );
+      firstId ??= action.id;
+      await recordEvent(
+        { userId: actor.userId, farmId: plan.farmId, entity: 'plan_action', entityId: action.id, action: 'created', detail: { planId, fieldId: a.fieldId, treatment: a.treatment, option: option.id } },
+        t,
+      );
+    }
+    return answer(planId, firstId, t);
   });
 }

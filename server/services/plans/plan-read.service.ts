@@ -6,7 +6,7 @@ import type { Plan as PlanShape, PlanVersion as PlanVersionShape } from '../../.
 import { planChanges } from '../../../shared/plan-changes';
 import { HttpError, notFound } from '../../lib/http-error';
 import { Field, Plan, PlanAction, PlanComment, PlanVersion, Season, User } from '../../models';
-import { forLandowner, presentFrozen, presentPlan, type People } from '../../presenters/plan.presenter';
+import { forLandowner, presentAction, presentFrozen, presentPlan, type People } from '../../presenters/plan.presenter';
 import { resolveSeason } from '../seasons.service';
 import { predictPlan } from './plan-prediction';
 
@@ -32,7 +32,7 @@ export async function livePlan(planId: number, transaction?: Transaction): Promi
   const comments = await PlanComment.scope('oldestFirst').findAll({ where: { planId }, transaction });
   const newest = await PlanVersion.max<number, PlanVersion>('revision', { where: { planId }, transaction });
   const people = await peopleOf(
-    [plan.createdBy, plan.submittedBy, plan.returnedBy, plan.approvedBy, ...actions.flatMap((a) => [a.createdBy, a.updatedBy]), ...comments.map((c) => c.authorId)],
+    [plan.createdBy, plan.submittedBy, plan.returnedBy, plan.approvedBy, ...actions.flatMap((a) => [a.createdBy, a.updatedBy, a.doneByUser, a.checkedBy]), ...comments.map((c) => c.authorId)],
     transaction,
   );
   const shown = presentPlan({
@@ -51,13 +51,33 @@ async function ownedFieldIds(viewer: PlanViewer): Promise<Set<number>> {
   return new Set(rows.map((f) => f.id));
 }
 
-/** GET /api/plans/:planId. A landowner gets the newest approved revision of their own fields. */
+/**
+ * The approved revision with the work done and checked since (follow-up is a record, not a change
+ * of the plan, so the landowner sees it on the revision they read). Photos stay with the farmer
+ * and the advisor.
+ */
+async function withFollowUp(plan: PlanShape): Promise<PlanShape> {
+  const ids = plan.actions.map((a) => a.id);
+  if (!ids.length) return plan;
+  const rows = await PlanAction.findAll({ where: { id: ids }, include: [{ model: Field, as: 'field', attributes: ['name'] }] });
+  const people = await peopleOf(rows.flatMap((r) => [r.doneByUser, r.checkedBy]));
+  const live = new Map(rows.map((r) => [r.id, presentAction(r, r.field!.name, people)]));
+  const actions = plan.actions.map((a) => {
+    const l = live.get(a.id);
+    if (!l || l.status === 'planned') return a;
+    const { status, doneOn, appliedQuantity, doneNote, doneRecordedBy, doneRecordedAt, checkedBy, checkedAt } = l;
+    return { ...a, status, doneOn, appliedQuantity, doneNote, doneRecordedBy, doneRecordedAt, checkedBy, checkedAt, hasPhoto: false };
+  });
+  return { ...plan, actions };
+}
+
+/** GET /api/plans/:planId. A landowner gets the newest approved revision of their own fields, with the work done since. */
 export async function readPlan(viewer: PlanViewer, planId: number): Promise<PlanShape> {
   if (viewer.role !== 'landowner') return livePlan(planId);
   const newest = await PlanVersion.newestOf(planId);
   // plan-access lets a landowner through only to plans with an approved revision.
   if (!newest) throw notFound('That plan');
-  return forLandowner(presentFrozen(newest), await ownedFieldIds(viewer));
+  return withFollowUp(forLandowner(presentFrozen(newest), await ownedFieldIds(viewer)));
 }
 
 /** GET /api/farms/:farmId/plans?season= (the farm's newest season when none is named). */

@@ -7,6 +7,7 @@ import { badRequest, conflict, notFound } from '../../lib/http-error';
 import { Field, SoilSample } from '../../models';
 import { describeIssues } from '../../middleware/validate';
 import { presentSample } from '../../presenters/soil-sample.presenter';
+import { withEditor } from '../../models/with-editor';
 import { recordEvent } from '../audit';
 import { afterInputsChange } from '../input-changes.service';
 import { deriveSample } from './derive-sample';
@@ -23,7 +24,7 @@ export async function sampleFieldOf(fieldId: number, transaction: Transaction): 
 
 /** A field's samples, oldest first (undated last). */
 export async function listSamples(fieldId: number): Promise<SoilSample[]> {
-  return SoilSample.scope('oldestFirst').findAll({ where: { fieldId } });
+  return SoilSample.scope('oldestFirst').findAll({ where: { fieldId }, include: [withEditor] });
 }
 
 /** The stored values of a checked sample: the typed values plus what the engine derives. */
@@ -66,7 +67,7 @@ function valuesOf(input: SoilSampleCreate) {
 /** Stores one checked sample inside the caller's transaction. */
 export async function insertSample(actor: Actor, field: SampleField, input: SoilSampleCreate, transaction: Transaction): Promise<SoilSample> {
   const values = valuesOf(input);
-  const sample = await SoilSample.create({ ...values, fieldId: field.id, createdBy: actor.userId }, { transaction });
+  const sample = await SoilSample.create({ ...values, fieldId: field.id, createdBy: actor.userId, updatedBy: actor.userId }, { transaction });
   await recordEvent(
     { userId: actor.userId, farmId: field.farmId, entity: 'soil_sample', entityId: sample.id, action: 'created', detail: { fieldId: field.id, kind: values.kind, textureClass: values.textureClass } },
     transaction,
@@ -77,7 +78,8 @@ export async function insertSample(actor: Actor, field: SampleField, input: Soil
 export async function createSample(sequelize: Sequelize, actor: Actor, fieldId: number, input: SoilSampleCreate): Promise<SoilSample> {
   const { sample, field } = await sequelize.transaction(async (t) => {
     const field = await sampleFieldOf(fieldId, t);
-    return { sample: await insertSample(actor, field, input, t), field };
+    const made = await insertSample(actor, field, input, t);
+    return { sample: await made.reload({ include: [withEditor], transaction: t }), field };
   });
   await afterInputsChange({ sequelize }, { kind: 'soils', farmId: field.farmId, fieldIds: [field.id] }, actor);
   return sample;
@@ -111,7 +113,8 @@ export async function updateSample(sequelize: Sequelize, actor: Actor, sampleId:
       const d = describeIssues(parsed.error);
       throw badRequest('invalid_input', d.message, { issues: d.issues });
     }
-    await sample.update({ ...valuesOf(parsed.data), version: sample.version + 1 }, { transaction: t });
+    await sample.update({ ...valuesOf(parsed.data), version: sample.version + 1, updatedBy: actor.userId }, { transaction: t });
+    await sample.reload({ include: [withEditor], transaction: t });
     const field = await sampleFieldOf(sample.fieldId, t);
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'soil_sample', entityId: sampleId, action: 'updated', detail: { changed: Object.keys(changes) } }, t);
     return { sample, field };

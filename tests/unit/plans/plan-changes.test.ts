@@ -2,7 +2,7 @@
 // shows after a 409. Hand-made actions; no published source applies (bookkeeping, not science).
 import { describe, expect, it } from 'vitest';
 import { actionChanges, planChanges } from '../../../shared/plan-changes';
-import type { PlanAction } from '../../../shared/schemas/plans';
+import { NO_FOLLOW_UP, type PlanAction } from '../../../shared/schemas/plans';
 
 const action = (id: number, over: Partial<PlanAction> = {}): PlanAction => ({
   id,
@@ -25,6 +25,7 @@ const action = (id: number, over: Partial<PlanAction> = {}): PlanAction => ({
   createdBy: { id: 1, name: 'Mara' },
   updatedBy: { id: 1, name: 'Mara' },
   updatedAt: '2027-01-01T00:00:00.000Z',
+  ...NO_FOLLOW_UP,
   ...over,
 });
 

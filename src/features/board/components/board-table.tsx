@@ -21,7 +21,7 @@ import { paths } from '../../../lib/paths';
 import { formatArea } from '../../../lib/units';
 import { formatFigure } from '../../../lib/format-figure';
 import { lossFigure, runoffFigure, tonnesFigure, type Figure } from '../../../lib/loss-units';
-import { RiskBadge } from './risk-badge';
+import { RiskBadge } from '../../../components/risk/risk-badge';
 import { HIDDEN_IN_TREATMENTS_VIEW, treatmentColumns, type BoardTreatments } from './treatment-columns';
 
 export type RankedRow = BoardRow & { rank: number };

@@ -16,8 +16,8 @@ import { BoardMap } from './board-map';
 import { BoardTable, type RankedRow } from './board-table';
 import { lossFigure } from '../../../lib/loss-units';
 import { BoardCsvButton } from './board-csv-button';
-import { RiskBadge } from './risk-badge';
-import { RiskLegend } from './risk-legend';
+import { RiskBadge } from '../../../components/risk/risk-badge';
+import { RiskLegend } from '../../../components/risk/risk-legend';
 import type { BoardTreatments } from './treatment-columns';
 
 const LOSS_UNIT_CHOICES: { value: Units; label: string }[] = [

@@ -1,5 +1,6 @@
 // Which field gets what under the plan: the treatment, what it costs, the soil it saves a year,
 // and whether it brings the field under T. Fields the money does not reach say so.
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { BudgetPlan } from '../../../../shared/schemas/treatments';
@@ -7,9 +8,12 @@ import { tonnesFigure } from '../../../lib/loss-units';
 import { formatMoney } from '../../../lib/money';
 import { paths } from '../../../lib/paths';
 
-type Props = { plan: BudgetPlan; farmId: number; units: Units };
+/** A slot in each row the budget gives a treatment (the page puts "Add to the plan" there). */
+export type ChoiceExtra = (ctx: { season: string; fieldId: number; optionId: string }) => ReactNode;
 
-export function BudgetPlanTable({ plan, farmId, units }: Props) {
+type Props = { plan: BudgetPlan; farmId: number; units: Units; choiceExtra?: ChoiceExtra };
+
+export function BudgetPlanTable({ plan, farmId, units, choiceExtra }: Props) {
   const tonnesUnit = units === 'ac' ? 'US tons/yr' : 't/yr';
   const rows = [...plan.choices].sort((a, b) => Number(b.optionId !== null) - Number(a.optionId !== null) || b.tonnesSavedPerYr - a.tonnesSavedPerYr);
   return (
@@ -23,6 +27,11 @@ export function BudgetPlanTable({ plan, farmId, units }: Props) {
             <th scope="col" className="px-2 py-1.5 text-right font-medium">Cost</th>
             <th scope="col" className="px-2 py-1.5 text-right font-medium">Soil saved ({tonnesUnit})</th>
             <th scope="col" className="px-2 py-1.5 font-medium">Under T after</th>
+            {choiceExtra ? (
+              <th scope="col" className="px-2 py-1.5 font-medium">
+                <span className="sr-only">Season plan</span>
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody>
@@ -42,6 +51,7 @@ export function BudgetPlanTable({ plan, farmId, units }: Props) {
                 {c.optionId ? tonnesFigure(c.tonnesSavedPerYr, units).main : '—'}
               </td>
               <td className="px-2 py-1.5">{c.optionId ? (c.reachesT ? <span className="font-semibold">yes</span> : <span className="text-ink-soft">not yet</span>) : ''}</td>
+              {choiceExtra ? <td className="px-2 py-1.5">{c.optionId ? choiceExtra({ season: plan.season, fieldId: c.fieldId, optionId: c.optionId }) : null}</td> : null}
             </tr>
           ))}
         </tbody>

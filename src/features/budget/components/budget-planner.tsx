@@ -17,7 +17,7 @@ import type { Units } from '../../../../shared/schemas/auth';
 import { BudgetPlanRequest, type BudgetPlan } from '../../../../shared/schemas/treatments';
 import { usePrices } from '../api/get-prices';
 import { useBudgetPlan } from '../api/plan-budget';
-import { BudgetPlanTable } from './budget-plan-table';
+import { BudgetPlanTable, type ChoiceExtra } from './budget-plan-table';
 import { SoilMoneyChart } from './soil-money-chart';
 
 const BudgetForm = BudgetPlanRequest.pick({ budget: true, goal: true });
@@ -65,9 +65,9 @@ function Summary({ plan, units }: { plan: BudgetPlan; units: Units }) {
   );
 }
 
-type Props = { farmId: number; season: string; units: Units };
+type Props = { farmId: number; season: string; units: Units; choiceExtra?: ChoiceExtra };
 
-export function BudgetPlanner({ farmId, season, units }: Props) {
+export function BudgetPlanner({ farmId, season, units, choiceExtra }: Props) {
   const currency = usePrices(farmId).data?.currency;
   const [asked, setAsked] = useState<Output | null>(null);
   const plan = useBudgetPlan(farmId, asked ? { season, ...asked } : null);
@@ -116,7 +116,7 @@ export function BudgetPlanner({ farmId, season, units }: Props) {
               </ul>
             </div>
           ) : null}
-          <BudgetPlanTable plan={shown} farmId={farmId} units={units} />
+          <BudgetPlanTable plan={shown} farmId={farmId} units={units} choiceExtra={choiceExtra} />
           <SoilMoneyChart plan={shown} units={units} />
         </div>
       ) : !asked ? (

@@ -9,7 +9,7 @@ import { RoleBadge } from './role-badge';
 const ROLE_HINTS = {
   farmer: 'You run this farm: draw, import and change its fields.',
   advisor: 'You advise this farm: you see all of its fields.',
-  landowner: 'You own land here: you see the fields that are yours.',
+  landowner: 'You own land here: you see the approved plan for the fields that are yours.',
 } as const;
 
 export function FarmList() {
@@ -24,7 +24,8 @@ export function FarmList() {
       {farms.data.map((farm) => (
         <li key={farm.id}>
           <Link
-            to={paths.farmMap.getHref(farm.id)}
+            // A landowner comes for the approved plan of their fields: straight to it.
+            to={farm.role === 'landowner' ? paths.landownerPlan.getHref(farm.id) : paths.farmMap.getHref(farm.id)}
             data-testid="farm-row"
             className="flex flex-col gap-1 rounded-lg border border-paper-edge bg-white/50 px-4 py-3 hover:border-clay hover:bg-white/80"
           >

@@ -5,6 +5,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { LastChange } from '../../../components/last-change';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { FactorOverrideUpdate, OVERRIDE_SPECS, type FactorOverride, type OverrideFactor } from '../../../../shared/schemas/overrides';
@@ -73,8 +74,11 @@ export function FactorOverrideControl(props: Props) {
   const [open, setOpen] = useState(false);
   if (open) return <OverrideForm {...props} onDone={() => setOpen(false)} />;
   return (
-    <Button variant="quiet" size="sm" onClick={() => setOpen(true)} data-testid={`override-open-${props.factor}`}>
-      {props.current ? 'change override' : 'override'}
-    </Button>
+    <span className="inline-flex flex-col items-start">
+      <Button variant="quiet" size="sm" onClick={() => setOpen(true)} data-testid={`override-open-${props.factor}`}>
+        {props.current ? 'change override' : 'override'}
+      </Button>
+      {props.current ? <LastChange change={{ by: props.current.setBy, at: props.current.updatedAt }} testId={`override-last-change-${props.factor}`} /> : null}
+    </span>
   );
 }

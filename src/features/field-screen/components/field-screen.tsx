@@ -7,7 +7,7 @@ import { isApiError } from '../../../lib/api-client';
 import { paths } from '../../../lib/paths';
 import { formatArea } from '../../../lib/units';
 import type { Farm, Units } from '../../../../shared/schemas/auth';
-import { RiskBadge } from '../../board/components/risk-badge';
+import { RiskBadge } from '../../../components/risk/risk-badge';
 import { lossFigure } from '../../../lib/loss-units';
 import { useConfig } from '../../config/api/get-config';
 import { RoleBadge } from '../../farms/components/role-badge';
@@ -23,10 +23,11 @@ import { FIELD_TABS, useFieldTab } from './field-tabs';
 import { GroundTab } from './ground-tab';
 import { OutlineTab } from './outline-tab';
 import { RiskTab } from './risk-tab';
+import { OptionExtraContext, type OptionExtra } from './option-extra';
 
-type Props = { farm: Farm; fieldId: number; units: Units };
+type Props = { farm: Farm; fieldId: number; units: Units; optionExtra?: OptionExtra };
 
-export function FieldScreen({ farm, fieldId, units }: Props) {
+export function FieldScreen({ farm, fieldId, units, optionExtra }: Props) {
   const field = useField(fieldId);
   const fields = useFields(farm.id);
   const config = useConfig();
@@ -115,7 +116,9 @@ export function FieldScreen({ farm, fieldId, units }: Props) {
           ) : tab === 'cropping' ? (
             <CroppingPanel fieldId={f.id} season={season!} canEdit={canEdit} units={units} />
           ) : (
-            <RiskTab farmId={farm.id} fieldId={f.id} season={season!} units={units} canEdit={canEdit} onOpenTab={setTab} />
+            <OptionExtraContext.Provider value={optionExtra ?? null}>
+              <RiskTab farmId={farm.id} fieldId={f.id} season={season!} units={units} canEdit={canEdit} onOpenTab={setTab} />
+            </OptionExtraContext.Provider>
           )}
         </div>
       </main>

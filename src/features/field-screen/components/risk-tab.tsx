@@ -8,7 +8,7 @@ import { paths } from '../../../lib/paths';
 import { CAUTION_TERRACES } from '../../../../shared/erosion/estimate';
 import type { FieldAssessment, Gap, GapTab } from '../../../../shared/schemas/assessment';
 import type { Units } from '../../../../shared/schemas/auth';
-import { RiskBadge } from '../../board/components/risk-badge';
+import { RiskBadge } from '../../../components/risk/risk-badge';
 import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../../lib/loss-units';
 import { FactorTable } from '../../estimate/components/factor-table';
 import { formatFigure } from '../../../lib/format-figure';

@@ -2,22 +2,13 @@
 // where each figure came from), the cost lines at the farm's prices, what it does that RUSLE's A
 // does not show, and its cautions (earthwork, drainage, spreading lime or gypsum, digging).
 import { CAUTION_PLANNING_AID } from '../../../../shared/erosion/estimate';
-import { tToShortTon } from '../../../../shared/erosion/units';
 import type { CostLine, TreatmentQuantity } from '../../../../shared/erosion/treatments/types';
 import type { Units } from '../../../../shared/schemas/auth';
 import { originWords } from '../../../../shared/schemas/provenance';
 import { PRICE_ITEMS } from '../../../../shared/schemas/treatments';
 import { formatFigure } from '../../../lib/format-figure';
 import { formatMoney } from '../../../lib/money';
-import { formatArea, formatLength } from '../../../lib/units';
-
-/** An amount in the user's units: hectares or acres, metres or feet, tonnes or US tons. */
-export function amountWords(amount: number, unit: string, units: Units): string {
-  if (unit === 'ha') return formatArea(amount, units);
-  if (unit === 'm') return formatLength(amount, units);
-  if (unit === 't') return units === 'ac' ? `${formatFigure(tToShortTon(amount))} US tons` : `${formatFigure(amount)} t`;
-  return `${formatFigure(amount)} ${unit}`;
-}
+import { amountWords } from '../../../lib/amount-words';
 
 export function Quantities({ quantities, units }: { quantities: TreatmentQuantity[]; units: Units }) {
   if (!quantities.length) return null;

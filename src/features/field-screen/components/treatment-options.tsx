@@ -9,6 +9,7 @@ import { formatFigure } from '../../../lib/format-figure';
 import { lossFigure, tonnesFigure } from '../../../lib/loss-units';
 import { formatMoney } from '../../../lib/money';
 import { Cautions, CostLines, Effects, Quantities } from './treatment-details';
+import { OptionExtraSlot } from './option-extra';
 
 const FIRST_SHOWN = 6;
 const PER_MONEY = 1000;
@@ -30,7 +31,7 @@ function Cell({ label, children, testId }: { label: string; children: ReactNode;
   );
 }
 
-export function OptionRow({ o, units, onTry }: { o: TreatmentOption; units: Units; onTry: (keys: TreatmentKey[]) => void }) {
+export function OptionRow({ o, units, onTry, fieldId, season }: { o: TreatmentOption; units: Units; onTry: (keys: TreatmentKey[]) => void; fieldId: number; season: string }) {
   const saved = tonnesFigure(o.tonnesSavedPerYr, units);
   return (
     <li className="flex flex-col gap-2 border-b border-paper-edge py-2 last:border-b-0" data-testid="treatment-option" data-option-id={o.id}>
@@ -61,14 +62,19 @@ export function OptionRow({ o, units, onTry }: { o: TreatmentOption; units: Unit
           <Effects effects={o.effects} />
         </div>
       </details>
-      <Button variant="quiet" size="sm" className="self-start px-0" onClick={() => onTry(o.treatments)} data-testid="treatment-option-try">
-        Try it in the what-if above
-      </Button>
+      <div className="flex flex-wrap items-center gap-x-4 gap-y-1">
+        <OptionExtraSlot fieldId={fieldId} season={season} option={o} />
+        <Button variant="quiet" size="sm" className="px-0" onClick={() => onTry(o.treatments)} data-testid="treatment-option-try">
+          Try it in the what-if above
+        </Button>
+      </div>
     </li>
   );
 }
 
-export function TreatmentOptions({ options, units, onTry }: { options: TreatmentOption[]; units: Units; onTry: (keys: TreatmentKey[]) => void }) {
+type OptionsProps = { options: TreatmentOption[]; units: Units; onTry: (keys: TreatmentKey[]) => void; fieldId: number; season: string };
+
+export function TreatmentOptions({ options, units, onTry, fieldId, season }: OptionsProps) {
   const [all, setAll] = useState(false);
   const shown = all ? options : options.slice(0, FIRST_SHOWN);
   const unit = units === 'ac' ? 'US t/ac/yr' : 't/ha/yr';
@@ -90,7 +96,7 @@ export function TreatmentOptions({ options, units, onTry }: { options: Treatment
       </div>
       <ul>
         {shown.map((o) => (
-          <OptionRow key={o.id} o={o} units={units} onTry={onTry} />
+          <OptionRow key={o.id} o={o} units={units} onTry={onTry} fieldId={fieldId} season={season} />
         ))}
       </ul>
       {options.length > FIRST_SHOWN ? (

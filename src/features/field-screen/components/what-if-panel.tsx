@@ -10,7 +10,7 @@ import { Notice } from '../../../components/ui/notice';
 import { formatFigure } from '../../../lib/format-figure';
 import { lossFigure, runoffFigure, tonnesFigure } from '../../../lib/loss-units';
 import { formatMoney } from '../../../lib/money';
-import { RiskBadge } from '../../board/components/risk-badge';
+import { RiskBadge } from '../../../components/risk/risk-badge';
 import { TreatmentChoices } from './treatment-choices';
 import { Cautions, CostLines, Effects, Quantities } from './treatment-details';
 

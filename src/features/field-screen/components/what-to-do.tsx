@@ -17,6 +17,7 @@ import type { FieldTab } from './field-tabs';
 import { Cautions, Quantities } from './treatment-details';
 import { TreatmentOptions } from './treatment-options';
 import { WhatIfPanel } from './what-if-panel';
+import { OptionExtraSlot } from './option-extra';
 
 const NEEDS_TAB: Record<NonNullable<Unavailable['needs']>, FieldTab> = {
   'soil-check': 'soil',
@@ -25,7 +26,7 @@ const NEEDS_TAB: Record<NonNullable<Unavailable['needs']>, FieldTab> = {
   terrain: 'ground',
 };
 
-function CheapestUnderT({ o, units, aboveT }: { o: TreatmentOption | undefined; units: Units; aboveT: boolean }) {
+function CheapestUnderT({ o, units, aboveT, fieldId, season }: { o: TreatmentOption | undefined; units: Units; aboveT: boolean; fieldId: number; season: string }) {
   if (!aboveT)
     return (
       <Notice testId="already-under-t" title="Already under T">
@@ -55,6 +56,7 @@ function CheapestUnderT({ o, units, aboveT }: { o: TreatmentOption | undefined; 
       </p>
       <Quantities quantities={o.quantities} units={units} />
       <Cautions cautions={o.cautions} />
+      <OptionExtraSlot fieldId={fieldId} season={season} option={o} />
     </section>
   );
 }
@@ -120,9 +122,9 @@ export function WhatToDo({ farmId, fieldId, season, units, onOpenTab }: Props) {
     };
     body = (
       <>
-        <CheapestUnderT o={t.options.find((o) => o.cheapestUnderT)} units={units} aboveT={t.current.aOverT > 1} />
+        <CheapestUnderT o={t.options.find((o) => o.cheapestUnderT)} units={units} aboveT={t.current.aOverT > 1} fieldId={fieldId} season={season} />
         <WhatIfPanel site={t.site} current={t.current} titles={TREATMENT_TITLES} unavailable={t.unavailable} chosen={chosen} onChange={setChosen} units={units} />
-        <TreatmentOptions options={t.options} units={units} onTry={tryKeys} />
+        <TreatmentOptions options={t.options} units={units} onTry={tryKeys} fieldId={fieldId} season={season} />
         <NotYet unavailable={t.unavailable} onOpenTab={onOpenTab} />
         <p className="text-xs text-ink-soft">
           {CAUTION_PLANNING_AID} Costs use the farm’s price list;{' '}

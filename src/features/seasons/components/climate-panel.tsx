@@ -6,6 +6,7 @@ import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { ChoiceGroup } from '../../../components/ui/choice-group';
+import { LastChange } from '../../../components/last-change';
 import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { R_PRECIPITATION_HINT } from '../../../../shared/erosion/erosivity';
@@ -160,6 +161,7 @@ export function ClimatePanel({ farmId, canEdit, units }: { farmId: number; canEd
               />
             ) : null}
             {canEdit ? <RainfallRecordUpload farmId={farmId} climate={climate.data} /> : null}
+            <LastChange change={climate.data?.lastChange} testId="climate-last-change" />
             {update.isError ? <Notice tone="error">{saveErrorMessage(update.error, 'climate')}</Notice> : null}
             {update.isSuccess && !update.isPending ? (
               <p role="status" className="text-sm text-ink-soft">

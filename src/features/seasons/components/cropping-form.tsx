@@ -4,6 +4,7 @@
 // person's record. Cautions sit beside the practice that needs them.
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
+import { LastChange } from '../../../components/last-change';
 import { Notice } from '../../../components/ui/notice';
 import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
@@ -268,6 +269,7 @@ export function CroppingPanel({ fieldId, season, canEdit, units }: Props) {
           {cropping.data.practice === 'terraces' ? <Notice tone="caution">{TERRACE_CAUTION}</Notice> : null}
         </>
       ) : null}
+      <LastChange change={cropping.data?.lastChange} testId="cropping-last-change" />
       {update.isError ? (
         <Notice tone="error" testId="cropping-error">
           {saveErrorMessage(update.error, 'cropping')}

@@ -6,6 +6,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '../../../components/ui/button';
+import { LastChange } from '../../../components/last-change';
 import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { formatLength } from '../../../lib/units';
@@ -120,6 +121,7 @@ export function GroundPanel({ fieldId, hasTerrain, canEdit, units }: Props) {
           </dd>
         </dl>
       )}
+      <LastChange change={g.lastChange} testId="ground-last-change" />
       {update.isError ? (
         <Notice tone="error" testId="ground-error">
           {saveErrorMessage(update.error, 'slope')}

@@ -1,8 +1,10 @@
-// Which season the screen shows, and for a farmer a small form to add one ("2028").
+// Which season the screen shows, and for a farmer a small form to add one ("2028"), starting
+// with the last season's cropping when wanted, and a way to delete an empty season.
 import { useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { SeasonLabel, type Season } from '../../../../shared/schemas/season';
 import { useCreateSeason } from '../api/create-season';
+import { useDeleteSeason } from '../api/delete-season';
 
 type Props = {
   farmId: number;
@@ -22,7 +24,12 @@ export function SeasonPicker({ farmId, seasons, season, onChange, canAdd }: Prop
   const [adding, setAdding] = useState(false);
   const [label, setLabel] = useState('');
   const [error, setError] = useState<string | null>(null);
+  const [copy, setCopy] = useState(true);
   const create = useCreateSeason(farmId);
+  const remove = useDeleteSeason(farmId);
+  // The newest season with cropping: what a new season most likely repeats.
+  const source = seasons.find((s) => (s.croppedFields ?? 0) > 0);
+  const shown = seasons.find((s) => s.label === season);
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -32,7 +39,7 @@ export function SeasonPicker({ farmId, seasons, season, onChange, canAdd }: Prop
       return;
     }
     setError(null);
-    create.mutate(parsed.data, {
+    create.mutate({ label: parsed.data, ...(copy && source ? { copyCroppingFrom: source.label } : {}) }, {
       onSuccess: (s) => {
         onChange(s.label);
         setAdding(false);
@@ -56,6 +63,7 @@ export function SeasonPicker({ farmId, seasons, season, onChange, canAdd }: Prop
           {seasons.map((s) => (
             <option key={s.id} value={s.label}>
               {s.label}
+              {s.empty ? ' (empty)' : ''}
             </option>
           ))}
         </select>
@@ -74,6 +82,27 @@ export function SeasonPicker({ farmId, seasons, season, onChange, canAdd }: Prop
           Add a season
         </Button>
       ) : null}
+      {canAdd && !adding && shown?.empty ? (
+        <Button
+          variant="quiet"
+          size="sm"
+          className="mb-1"
+          data-testid="season-delete"
+          disabled={remove.isPending}
+          onClick={() => {
+            if (!window.confirm(`Delete season ${shown.label}? It holds no cropping and no plan.`)) return;
+            remove.mutate(shown.label, {
+              onSuccess: () => {
+                const next = seasons.find((s) => s.label !== shown.label && s.current) ?? seasons.find((s) => s.label !== shown.label);
+                if (next) onChange(next.label);
+              },
+              onError: (err) => setError(err.message),
+            });
+          }}
+        >
+          Delete this empty season
+        </Button>
+      ) : null}
       {adding ? (
         <form onSubmit={submit} className="flex flex-wrap items-end gap-2" aria-label="Add a season">
           <label className="flex flex-col gap-1 text-sm font-medium">
@@ -86,6 +115,12 @@ export function SeasonPicker({ farmId, seasons, season, onChange, canAdd }: Prop
               autoFocus
             />
           </label>
+          {source ? (
+            <label className="mb-1.5 flex items-center gap-1.5 text-sm">
+              <input type="checkbox" checked={copy} onChange={(e) => setCopy(e.target.checked)} data-testid="season-copy-cropping" />
+              Start with the cropping of {source.label}
+            </label>
+          ) : null}
           <Button type="submit" size="sm" className="mb-1" disabled={create.isPending} data-testid="season-create">
             {create.isPending ? 'Adding…' : 'Add'}
           </Button>

@@ -1,5 +1,6 @@
 // The season in view, kept in the URL (?season=2027) so a link opens the same season; without
-// one (or with one the farm does not have), the farm's newest season.
+// one (or with one the farm does not have), the farm's current season (the newest holding
+// cropping or a plan, as the server marks it), never an empty newer one.
 import { useCallback } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { useSeasons } from '../api/get-seasons';
@@ -9,7 +10,7 @@ export function useSeasonChoice(farmId: number) {
   const seasons = useSeasons(farmId);
   const wanted = params.get('season');
   const list = seasons.data ?? [];
-  const season = wanted && list.some((s) => s.label === wanted) ? wanted : (list[0]?.label ?? null);
+  const season = wanted && list.some((s) => s.label === wanted) ? wanted : (list.find((s) => s.current)?.label ?? list[0]?.label ?? null);
   const setSeason = useCallback(
     (label: string) =>
       setParams(

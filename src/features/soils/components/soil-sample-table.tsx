@@ -1,6 +1,7 @@
 // The field's soil samples, one row each: what kind, when and how deep, the separates, the
 // texture class, organic matter, pH, the drainage verdict. Farmer and advisor change or
 // delete a row in place (delete asks once more).
+import { LastChange } from '../../../components/last-change';
 import { Fragment, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
@@ -87,6 +88,7 @@ export function SoilSampleTable({ fieldId, samples, canEdit }: Props) {
                       .filter(Boolean)
                       .join(' · ')}
                   </span>
+                  <LastChange change={s.lastChange} testId="soil-sample-last-change" />
                 </td>
                 <td className="px-2 py-1.5">
                   <Separates s={s} />

@@ -1,6 +1,6 @@
 // The choropleth's key: every risk class by colour and name with its A/T range, and the grey
 // "not assessed" fill.
-import { RISK_CLASSES } from '../../../../shared/erosion/risk-class';
+import { RISK_CLASSES } from '../../../shared/erosion/risk-class';
 import { NOT_ASSESSED_LABEL, RiskSwatchIcon } from './risk-badge';
 
 const rangeText = (i: number) => {

@@ -1,6 +1,6 @@
 // A field's risk class: the YlOrBr colour always beside its name; "not assessed" (grey,
 // hatched) when the assessment is waiting for inputs.
-import type { RiskClass } from '../../../../shared/erosion/risk-class';
+import type { RiskClass } from '../../../shared/erosion/risk-class';
 
 export const NOT_ASSESSED_LABEL = 'Not assessed';
 export const NOT_ASSESSED_FILL = '#cfc8bb';
