@@ -19,10 +19,11 @@ export function neutraliseCell(cell: CsvCell): string | number {
 }
 
 /**
- * The whole CSV text, header first, lines ending CRLF as RFC 4180 has them; a byte order mark
+ * The whole CSV text, header first, lines ending CRLF as RFC 4180 has them, and any cell holding a
+ * line break quoted (with CRLF lines the writer would not quote a lone LF); a byte order mark
  * first, so spreadsheet programs read it as UTF-8 (names with accents, "×").
  */
 export function csvText<R>(columns: CsvColumn<R>[], rows: R[]): string {
   const records = rows.map((r) => columns.map((c) => neutraliseCell(c.value(r))));
-  return `\ufeff${stringify([columns.map((c) => neutraliseCell(c.header)), ...records], { record_delimiter: 'windows' })}`;
+  return `\ufeff${stringify([columns.map((c) => neutraliseCell(c.header)), ...records], { record_delimiter: 'windows', quoted_match: /[\r\n]/ })}`;
 }

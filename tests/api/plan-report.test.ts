@@ -2,7 +2,6 @@
 // holds the farm, every field, the figures of the stored assessments and the cautions; a
 // landowner's copy holds only their fields, as the plan was approved.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { writeFileSync } from 'node:fs';
 import { makeTestApp, makeUser, signedIn } from '../helpers/test-app';
 import { makePlanFarm } from '../helpers/plan-farm';
 import { pdfPageTexts } from '../helpers/pdf-text';
@@ -30,7 +29,6 @@ async function report(agent: Awaited<ReturnType<typeof signedIn>>) {
 describe('plan report PDF', () => {
   it('holds the farm, the season, the state, every field with its figures, and the cautions', async () => {
     const { res, pages, all } = await report(farm.agents.farmer);
-    if (process.env.KEEP_REPORT) writeFileSync(process.env.KEEP_REPORT, res.body as Buffer);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="test-farm-[a-z0-9]+-2027-season-plan\.pdf"$/);
     expect(pages[0]).toContain(farm.farm.name);
     expect(pages[0]).toContain('Season 2027');
