@@ -16,7 +16,7 @@ export function actionWhen(a: When): string {
 }
 
 /** "420 m" or null. */
-export const actionQuantity = (a: Pick<PlanAction, 'quantity' | 'unit'>): string | null =>
+const actionQuantity = (a: Pick<PlanAction, 'quantity' | 'unit'>): string | null =>
   a.quantity != null ? `${formatFigure(a.quantity)}${a.unit ? ` ${a.unit}` : ''}` : null;
 
 /** "Grassed waterway: 420 m, $15,960, 2027-08-25 (planned)". */

@@ -1,7 +1,9 @@
 // Plan actions as table rows: what, how much, what it costs, when, its status and who does it.
 // A row of careful work names it, so its page carries the cautions.
 import { TREATMENT_KEYS, type TreatmentKey } from '../../../../shared/erosion/treatments/types';
-import { actionQuantity, actionWhen } from '../../../../shared/exports/action-words';
+import { actionWhen } from '../../../../shared/exports/action-words';
+import { amountWords } from '../../../../shared/format/amount-words';
+import type { Units } from '../../../../shared/schemas/auth';
 import { formatMoney } from '../../../../shared/format/money';
 import type { PlanAction } from '../../../../shared/schemas/plans';
 import type { Column, Row } from './table';
@@ -17,12 +19,12 @@ export const ACTION_COLUMNS: Column[] = [
   { header: 'Done by', width: 0.17 },
 ];
 
-export function actionRow(a: PlanAction, lead: string[] = []): Row {
+/** An action's cells under ACTION_COLUMNS; amounts in the reader's units (ha or ac, m or ft, t or US tons). */
+export function actionRow(a: PlanAction, units: Units): Row {
   return {
     cells: [
-      ...lead,
       a.notes ? { text: a.title, note: a.notes } : a.title,
-      actionQuantity(a) ?? '—',
+      a.quantity != null ? amountWords(a.quantity, a.unit ?? '', units) : '—',
       a.cost != null ? formatMoney(a.cost, a.currency) : '—',
       actionWhen(a),
       a.status,

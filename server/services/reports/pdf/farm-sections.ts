@@ -100,7 +100,7 @@ export function drawSchedule(frame: PageFrame, data: ReportData): void {
       columns,
       group.actions.map((a) => {
         // The field's pages carry the notes and who does the work; here, what happens when.
-        const row = actionRow({ ...a, notes: null });
+        const row = actionRow({ ...a, notes: null }, data.reader.units);
         return { ...row, cells: [a.fieldName, ...row.cells.slice(0, 5)] };
       }),
     );

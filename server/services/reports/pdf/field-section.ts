@@ -58,7 +58,7 @@ export function drawFieldSection(frame: PageFrame, field: ReportField, plan: Pla
 
   const actions = plan.actions.filter((x) => x.fieldId === field.fieldId);
   label(frame, 'Planned work');
-  if (actions.length) drawTable(frame, ACTION_COLUMNS, actions.map((x) => actionRow(x)));
+  if (actions.length) drawTable(frame, ACTION_COLUMNS, actions.map((x) => actionRow(x, units)));
   else paragraph(frame, 'No work planned on this field this season.', { colour: INK.soft });
   afterThePlan(frame, field, plan, units);
   frame.doc.moveDown(0.8);

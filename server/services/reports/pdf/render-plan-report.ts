@@ -40,7 +40,7 @@ export function renderPlanReport(data: ReportData): Promise<Buffer> {
   heading(frame, 'The map: each field by its risk class');
   if (data.fields.length) {
     const box = { x: frame.left, y: doc.y + 4, w: frame.width, h: Math.min(frame.width * 0.9, doc.page.height * 0.55) };
-    doc.y = drawRiskMap(doc, box, data.fields, data.relief) + 12;
+    doc.y = drawRiskMap(doc, box, data.fields, data.relief, data.reader.units) + 12;
     drawRanking(frame, ranked(data.fields), data);
   } else {
     paragraph(frame, 'There are no fields to show.');

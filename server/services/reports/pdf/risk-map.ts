@@ -3,6 +3,9 @@
 // both placed in Web Mercator (EPSG:3857), the frame the relief picture was drawn on, so they
 // line up; a farm is small enough that the scale bar's one ground scale holds across it.
 import { RISK_CLASSES } from '../../../../shared/erosion/risk-class';
+import { FT_PER_MI, mToFt } from '../../../../shared/erosion/units';
+import { formatFigure } from '../../../../shared/format/figure';
+import type { Units } from '../../../../shared/schemas/auth';
 import type { ReportField, ReliefPicture } from '../report-data';
 import { INK } from './fonts';
 
@@ -29,7 +32,7 @@ function niceLength(max: number): number {
 }
 
 /** Draws the map inside the box and its legend below it; returns the y under the legend. */
-export function drawRiskMap(doc: PDFKit.PDFDocument, box: Box, fields: ReportField[], relief: ReliefPicture | null): number {
+export function drawRiskMap(doc: PDFKit.PDFDocument, box: Box, fields: ReportField[], relief: ReliefPicture | null, units: Units): number {
   const e = extent(fields);
   const pad = 0.08 * Math.max(e.maxX - e.minX, e.maxY - e.minY) + 30;
   const [minX, minY, maxX, maxY] = [e.minX - pad, e.minY - pad, e.maxX + pad, e.maxY + pad];
@@ -75,14 +78,17 @@ export function drawRiskMap(doc: PDFKit.PDFDocument, box: Box, fields: ReportFie
 
   // Scale bar: ground metres per Mercator metre is cos(latitude) at the map's middle.
   const midLat = (Math.atan(Math.sinh((minY + maxY) / 2 / R_EARTH_M)) * 180) / Math.PI;
-  const groundPerPt = Math.cos((midLat * Math.PI) / 180) / scale;
-  const barM = niceLength(groundPerPt * w * 0.25);
-  const barPt = barM / groundPerPt;
+  const metresPerPt = Math.cos((midLat * Math.PI) / 180) / scale;
+  // Feet for readers who work in acres, metres for hectares.
+  const perPt = units === 'ac' ? mToFt(metresPerPt) : metresPerPt;
+  const bar = niceLength(perPt * w * 0.25);
+  const barPt = bar / perPt;
+  const barWords = units === 'ac' ? (bar >= FT_PER_MI ? `${formatFigure(bar / FT_PER_MI)} mi` : `${formatFigure(bar)} ft`) : bar >= 1000 ? `${bar / 1000} km` : `${bar} m`;
   const bx = ox + 10;
   const by = oy + h - 14;
   doc.save().rect(bx - 4, by - 12, barPt + 44, 20).fillOpacity(0.85).fill('#ffffff').restore();
   doc.rect(bx, by, barPt, 3).fill(INK.text);
-  doc.font('body').fontSize(7).fillColor(INK.text).text(barM >= 1000 ? `${barM / 1000} km` : `${barM} m`, bx, by - 10, { lineBreak: false });
+  doc.font('body').fontSize(7).fillColor(INK.text).text(barWords, bx, by - 10, { lineBreak: false });
   // North is up in Web Mercator.
   const nx = ox + w - 18;
   const ny = oy + 10;
