@@ -6,7 +6,7 @@ import { parseDbf, parseShp } from 'shpjs';
 import { parse } from 'csv-parse/sync';
 import type { MultiPolygon, Polygon } from 'geojson';
 import { QueryTypes } from 'sequelize';
-import { makeTestApp, makeUser, signedIn } from '../helpers/test-app';
+import { makeFarm, makeTestApp, makeUser, signedIn, squareFeature } from '../helpers/test-app';
 import { FORMULA_TITLE, makePlanFarm } from '../helpers/plan-farm';
 
 const ctx = makeTestApp();
@@ -60,11 +60,11 @@ describe('farm export', () => {
     const files = Object.keys(zip.files).sort();
     const base = files.find((f) => f.endsWith('.shp'))!.slice(0, -4);
     expect(base).toMatch(/-fields$/);
-    expect(files).toEqual(['.dbf', '.prj', '.shp', '.shx'].map((e) => base + e));
+    expect(files).toEqual(['.cpg', '.dbf', '.prj', '.shp', '.shx'].map((e) => base + e));
     const prj = await zip.file(`${base}.prj`)!.async('string');
     expect(prj).toContain('WGS_1984');
     const shapes = parseShp(await zip.file(`${base}.shp`)!.async('arraybuffer'), prj);
-    const rows = parseDbf(await zip.file(`${base}.dbf`)!.async('arraybuffer'));
+    const rows = parseDbf(await zip.file(`${base}.dbf`)!.async('arraybuffer'), await zip.file(`${base}.cpg`)!.async('string'));
     expect(rows.map((r) => r.name).sort()).toEqual(['Hay Ground', 'Long Slope', 'Mill Hill']);
     const areas = await postgisAreas();
     for (const [i, row] of rows.entries()) {
@@ -77,6 +77,21 @@ describe('farm export', () => {
       expect(lng).toBeLessThan(-91);
       expect(lat).toBeCloseTo(42.3, 1);
     }
+  });
+
+  it("keeps a field's name readable in the shapefile's one-byte text (Latin-1, named in the .cpg)", async () => {
+    const { farm: other, users } = await makeFarm(['farmer']);
+    const agent = await signedIn(ctx.app, users.farmer);
+    await agent.post(`/api/farms/${other.id}/fields`).send(squareFeature(-91.7, 42.3, 200, 'Écluse – Nord'));
+    await agent.post(`/api/farms/${other.id}/seasons`).send({ label: '2027' });
+    const res = await agent.get(`/api/farms/${other.id}/export?format=shapefile&season=2027`).responseType('blob');
+    const zip = await JSZip.loadAsync(res.body as Buffer);
+    const file = (ext: string) => zip.file(Object.keys(zip.files).find((f) => f.endsWith(ext))!)!;
+    expect(await file('.cpg').async('string')).toBe('ISO-8859-1');
+    const [row] = parseDbf(await file('.dbf').async('arraybuffer'), 'ISO-8859-1');
+    expect(row.name).toBe('Écluse - Nord');
+    const csv = await agent.get(`/api/farms/${other.id}/export?format=csv&season=2027`);
+    expect(csv.text).toContain('Écluse – Nord');
   });
 
   it('writes one CSV row per field and neutralises cells a spreadsheet would run as a formula', async () => {

@@ -4,12 +4,14 @@
 // neutralised).
 import type { Sequelize } from 'sequelize';
 import { zip } from '@mapbox/shp-write';
+import JSZip from 'jszip';
 import type { FeatureCollection, MultiPolygon } from 'geojson';
 import { csvText } from '../../../shared/exports/csv';
 import { exportFileName } from '../../../shared/exports/file-names';
 import type { ExportQuery } from '../../../shared/schemas/exports';
 import type { DownloadFile } from '../../lib/download';
 import type { PlanViewer } from '../plans/plan-read.service';
+import { DBF_CODE_PAGE, dbfText } from './dbf-text';
 import { EXPORT_COLUMNS, exportProperties } from './export-columns';
 import { farmExportRecords, type ExportRecords } from './export-records';
 
@@ -36,14 +38,17 @@ export async function farmExport(sequelize: Sequelize, viewer: PlanViewer, query
     }
     case 'shapefile': {
       const layer = exportFileName(r.farmName, r.season, 'fields', 'x').slice(0, -2);
+      const fc = featureCollection(r, 'dbf');
+      for (const f of fc.features) {
+        const p = f.properties!;
+        for (const k of Object.keys(p)) if (typeof p[k] === 'string') p[k] = dbfText(p[k]);
+      }
       // Every field is a MultiPolygon, so shp-write writes one polygon layer under this name.
-      const body = (await zip(featureCollection(r, 'dbf') as FeatureCollection, {
-        outputType: 'nodebuffer',
-        compression: 'DEFLATE',
-        prj: WGS84_PRJ,
-        types: { polygon: layer, multipolygon: layer },
-      })) as Buffer;
-      return { body, contentType: 'application/zip', fileName: name('zip') };
+      const written = (await zip(fc as FeatureCollection, { outputType: 'nodebuffer', compression: 'STORE', prj: WGS84_PRJ, types: { polygon: layer, multipolygon: layer } })) as Buffer;
+      // The .cpg names the .dbf's code page, which GIS programs and shpjs read.
+      const zipped = await JSZip.loadAsync(written);
+      zipped.file(`${layer}.cpg`, DBF_CODE_PAGE);
+      return { body: await zipped.generateAsync({ type: 'nodebuffer', compression: 'DEFLATE' }), contentType: 'application/zip', fileName: name('zip') };
     }
   }
 }
