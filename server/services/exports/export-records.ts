@@ -8,7 +8,7 @@ import type { BoardRow } from '../../../shared/schemas/assessment';
 import type { PlanAction } from '../../../shared/schemas/plans';
 import { HttpError } from '../../lib/http-error';
 import { Farm } from '../../models';
-import { selectFieldFeatureRows } from '../../models/field.queries';
+import { visibleFields } from '../visible-fields';
 import { farmBoard } from '../assessments/read-assessments';
 import { planForSeason, type PlanViewer } from '../plans/plan-read.service';
 
@@ -38,21 +38,20 @@ async function plannedActions(viewer: PlanViewer, season: string): Promise<{ act
 export async function farmExportRecords(sequelize: Sequelize, viewer: PlanViewer, seasonLabel: string | undefined): Promise<ExportRecords> {
   const board = await farmBoard(sequelize, viewer, seasonLabel);
   const farm = await Farm.findByPk(viewer.farmId, { attributes: ['name'], rejectOnEmpty: true });
-  const owner = viewer.role === 'landowner' ? { ownerMembershipId: viewer.membershipId, visibleToOwner: viewer.membershipId } : {};
-  const rows = await selectFieldFeatureRows(sequelize, { farmId: viewer.farmId, ...owner });
+  const fields = await visibleFields(sequelize, viewer);
   const { actions, currency } = await plannedActions(viewer, board.season);
   const figures = new Map(board.rows.map((r) => [r.fieldId, r]));
   return {
     farmName: farm.name,
     season: board.season,
     currency,
-    fields: rows.map((r) => ({
-      fieldId: r.id,
-      name: r.name,
-      areaHa: r.areaM2 / 10_000,
-      geometry: JSON.parse(r.geometryJson) as MultiPolygon,
-      figures: figures.get(r.id) ?? null,
-      actions: actions.filter((a) => a.fieldId === r.id),
+    fields: fields.map((f) => ({
+      fieldId: f.fieldId,
+      name: f.name,
+      areaHa: f.areaHa,
+      geometry: f.geometry,
+      figures: figures.get(f.fieldId) ?? null,
+      actions: actions.filter((a) => a.fieldId === f.fieldId),
     })),
   };
 }

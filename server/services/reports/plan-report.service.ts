@@ -8,7 +8,7 @@ import type { Units } from '../../../shared/schemas/auth';
 import { exportFileName } from '../../../shared/exports/file-names';
 import type { DownloadFile } from '../../lib/download';
 import { Farm, Season, TerrainLayer } from '../../models';
-import { selectFieldFeatureRows } from '../../models/field.queries';
+import { visibleFields } from '../visible-fields';
 import type { FileStorage } from '../storage/file-storage';
 import { seasonAssessments } from '../assessments/read-assessments';
 import { readPlan, type PlanViewer } from '../plans/plan-read.service';
@@ -27,20 +27,12 @@ export async function planReportData(deps: { sequelize: Sequelize; storage: File
   const plan = await readPlan(viewer, planId);
   const farm = await Farm.findByPk(viewer.farmId, { attributes: ['name'], rejectOnEmpty: true });
   const season = await Season.findOne({ where: { farmId: viewer.farmId, label: plan.season }, attributes: ['id'], rejectOnEmpty: true });
-  const owner = viewer.role === 'landowner' ? { ownerMembershipId: viewer.membershipId, visibleToOwner: viewer.membershipId } : {};
-  const rows = await selectFieldFeatureRows(deps.sequelize, { farmId: viewer.farmId, ...owner });
-  const assessments = await seasonAssessments(deps.sequelize, viewer.farmId, season.id, rows.map((r) => r.id));
+  const fields = await visibleFields(deps.sequelize, viewer);
+  const assessments = await seasonAssessments(deps.sequelize, viewer.farmId, season.id, fields.map((f) => f.fieldId));
   return {
     farmName: farm.name,
     plan,
-    fields: rows.map((r) => ({
-      fieldId: r.id,
-      name: r.name,
-      areaHa: r.areaM2 / 10_000,
-      geometry: JSON.parse(r.geometryJson),
-      labelAt: JSON.parse(r.centroidJson).coordinates,
-      assessment: assessments.get(r.id) ?? null,
-    })),
+    fields: fields.map(({ centroid, ...f }) => ({ ...f, labelAt: centroid, assessment: assessments.get(f.fieldId) ?? null })),
     relief: await relief(deps.storage, viewer.farmId),
     reader: { ...reader, role: viewer.role },
     madeAt: now.toISOString(),
