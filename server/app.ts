@@ -24,6 +24,7 @@ import { plansRoutes } from './routes/plans.routes';
 import { changesRoutes } from './routes/changes.routes';
 import { peopleRoutes } from './routes/people.routes';
 import { devMailboxRoutes } from './routes/dev-mailbox.routes';
+import { exportsRoutes } from './routes/exports.routes';
 import { setMailContext } from './services/mail/outbox';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
@@ -100,6 +101,9 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/plans', plans.plans);
   api.use('/plan-actions', plans.actions);
   api.use('/farms', changesRoutes());
+  const exportsApi = exportsRoutes({ sequelize, storage });
+  api.use('/farms', exportsApi.farms);
+  api.use('/plans', exportsApi.plans);
   api.use(notFoundApi);
   app.use('/api', api);
 

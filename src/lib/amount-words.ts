@@ -1,13 +1,2 @@
-// An amount in the user's units: hectares or acres, metres or feet, tonnes or US tons; any
-// other unit as typed. Used by the treatment options and the season plan.
-import { tToShortTon } from '../../shared/erosion/units';
-import type { Units } from '../../shared/schemas/auth';
-import { formatFigure } from './format-figure';
-import { formatArea, formatLength } from './units';
-
-export function amountWords(amount: number, unit: string, units: Units): string {
-  if (unit === 'ha') return formatArea(amount, units);
-  if (unit === 'm') return formatLength(amount, units);
-  if (unit === 't') return units === 'ac' ? `${formatFigure(tToShortTon(amount))} US tons` : `${formatFigure(amount)} t`;
-  return `${formatFigure(amount)} ${unit}`;
-}
+// The client writes amounts as the server's reports do: one definition, in shared/format.
+export { amountWords } from '../../shared/format/amount-words';

@@ -36,7 +36,8 @@ const FALLBACK_MESSAGES: Record<number, string> = {
   429: 'Too many attempts. Wait a minute and try again.',
 };
 
-async function toApiError(res: Response): Promise<ApiError> {
+/** The ApiError for a failed response: the server's { error, message, details }, or words for its status. */
+export async function toApiError(res: Response): Promise<ApiError> {
   type ErrorBody = { error?: unknown; message?: unknown; details?: unknown };
   const body: ErrorBody | null = await res.json().then(
     (b: unknown) => (b && typeof b === 'object' ? (b as ErrorBody) : null),

@@ -21,6 +21,8 @@ import { getSeasonsQueryOptions } from '../features/seasons/api/get-seasons';
 import { ClimatePanel } from '../features/seasons/components/climate-panel';
 import { SeasonPicker } from '../features/seasons/components/season-picker';
 import { useSeasonChoice } from '../features/seasons/components/use-season-choice';
+import { useSeasonPlan } from '../features/plans/api/get-season-plan';
+import { PlanReportButton } from '../features/reports/components/plan-report-button';
 import { paths } from '../lib/paths';
 
 const INTRO =
@@ -34,6 +36,8 @@ export function BoardPage() {
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
   const board = useBoard(farmId, season);
   const fields = useFields(farmId);
+  // The season's plan, where there is one (for a landowner: an approved one), for its report.
+  const plan = useSeasonPlan(farmId, season);
   const header = <AppHeader screen="Priority board" farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
@@ -61,7 +65,10 @@ export function BoardPage() {
             </div>
             <p className="text-sm text-ink-soft">{INTRO}</p>
           </div>
-          <SeasonPicker farmId={farmId} seasons={seasons.data ?? []} season={season} onChange={setSeason} canAdd={role === 'farmer'} />
+          <div className="flex flex-wrap items-end gap-3">
+            {plan.data ? <PlanReportButton planId={plan.data.id} season={plan.data.season} /> : null}
+            <SeasonPicker farmId={farmId} seasons={seasons.data ?? []} season={season} onChange={setSeason} canAdd={role === 'farmer'} />
+          </div>
         </div>
         {role === 'landowner' ? (
           <Notice testId="landowner-banner" title="Landowner view">
@@ -94,6 +101,7 @@ export function BoardPage() {
             tileUrl={config.data?.tileUrl ?? null}
             tileAttribution={config.data?.tileAttribution ?? null}
             treatmentsFarmId={role === 'landowner' ? undefined : farmId}
+            fileStem={farm.data.name}
           />
         )}
       </main>
@@ -190,6 +198,7 @@ export function ClientBoardPage() {
               units={me.data.units}
               season={season}
               showFarm
+              fileStem="client farms"
               tileUrl={config.data?.tileUrl ?? null}
               tileAttribution={config.data?.tileAttribution ?? null}
             />

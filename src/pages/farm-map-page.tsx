@@ -15,6 +15,10 @@ import { SoilMapPanel } from '../features/soils/components/soil-map-panel';
 import { RecentChanges } from '../features/changes/components/recent-changes';
 import { FieldTerrainFigures } from '../features/terrain/components/field-terrain-figures';
 import { TerrainMapLayers } from '../features/terrain/components/terrain-map-layers';
+import { useSeasonChoice } from '../features/seasons/components/use-season-choice';
+import { useSeasonPlan } from '../features/plans/api/get-season-plan';
+import { FarmFiles } from '../features/reports/components/farm-files';
+import { PlanReportButton } from '../features/reports/components/plan-report-button';
 import type { Role } from '../../shared/schemas/auth';
 
 function RoleBanner({ role }: { role: Role }) {
@@ -36,6 +40,9 @@ export function FarmMapPage() {
   const farm = useFarm(farmId);
   const me = useMe();
   const config = useConfig();
+  // Files are made for the season in the address (?season=), else the newest; the plan's report where it has one.
+  const { season } = useSeasonChoice(farmId);
+  const plan = useSeasonPlan(farmId, season);
 
   const header = (
     <AppHeader screen={farm.data?.role === 'landowner' ? 'Landowner view' : 'Farm map'} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />
@@ -72,14 +79,19 @@ export function FarmMapPage() {
             <FieldTerrainFigures fieldId={field.id} fieldVersion={field.properties.version} farmId={farmId} units={units} />
           )}
           panelSections={
-            // A landowner sees their own fields, not the farm's survey data.
-            farm.data.role === 'landowner' ? null : (
-              <>
-                <ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />
-                <SoilMapPanel farmId={farmId} role={farm.data.role} />
-                <RecentChanges farmId={farmId} />
-              </>
-            )
+            <>
+              {season ? (
+                <FarmFiles farmId={farmId} season={season} planReport={plan.data ? <PlanReportButton planId={plan.data.id} season={plan.data.season} /> : null} />
+              ) : null}
+              {/* A landowner sees their own fields, not the farm's survey data. */}
+              {farm.data.role === 'landowner' ? null : (
+                <>
+                  <ElevationPanel farmId={farmId} canEdit={farm.data.role === 'farmer'} />
+                  <SoilMapPanel farmId={farmId} role={farm.data.role} />
+                  <RecentChanges farmId={farmId} />
+                </>
+              )}
+            </>
           }
           banner={
             <div className="flex flex-col gap-2">

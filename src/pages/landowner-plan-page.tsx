@@ -3,6 +3,8 @@
 // what the landowners read. Loaded lazily (the maps are large).
 import { useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
+import { useSeasonPlan } from '../features/plans/api/get-season-plan';
+import { PlanReportButton } from '../features/reports/components/plan-report-button';
 import { CannotOpen } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { Notice } from '../components/ui/notice';
@@ -24,6 +26,8 @@ export function LandownerPlanPage() {
   const config = useConfig();
   const fields = useFields(farmId);
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
+  // The season's plan on paper, once there is one (for a landowner: an approved one).
+  const plan = useSeasonPlan(farmId, season);
   const header = <AppHeader screen={SCREEN} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
@@ -50,7 +54,10 @@ export function LandownerPlanPage() {
                 : 'Each landowner reads the newest approved revision of the plan, cut to the fields they own. You see every field here.'}
             </p>
           </div>
-          <SeasonPicker farmId={farmId} seasons={seasons.data ?? []} season={season} onChange={setSeason} canAdd={false} />
+          <div className="flex flex-wrap items-end gap-3">
+            {plan.data ? <PlanReportButton planId={plan.data.id} season={plan.data.season} /> : null}
+            <SeasonPicker farmId={farmId} seasons={seasons.data ?? []} season={season} onChange={setSeason} canAdd={false} />
+          </div>
         </div>
         {seasons.isPending || fields.isPending ? (
           <Loading label="Loading…" />

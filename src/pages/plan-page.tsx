@@ -2,6 +2,8 @@
 // advisor. A landowner is sent to the approved plan of their fields. Loaded lazily.
 import { Navigate, useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
+import { useSeasonPlan } from '../features/plans/api/get-season-plan';
+import { PlanReportButton } from '../features/reports/components/plan-report-button';
 import { CannotOpen } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { Notice } from '../components/ui/notice';
@@ -23,6 +25,8 @@ export function PlanPage() {
   const me = useMe();
   const fields = useFields(farmId);
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
+  // The season's plan on paper, once there is one (for a landowner: an approved one).
+  const plan = useSeasonPlan(farmId, season);
   const header = <AppHeader screen={SCREEN} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
   if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
@@ -55,7 +59,10 @@ export function PlanPage() {
               The work agreed for each field this season, what it costs and what it should save. The farmer sends it to the advisor, who sends it back with comments or approves it; the landowner then reads it for their fields.
             </p>
           </div>
-          <SeasonPicker farmId={farmId} seasons={list} season={season} onChange={setSeason} canAdd={role === 'farmer'} />
+          <div className="flex flex-wrap items-end gap-3">
+            {plan.data ? <PlanReportButton planId={plan.data.id} season={plan.data.season} /> : null}
+            <SeasonPicker farmId={farmId} seasons={list} season={season} onChange={setSeason} canAdd={role === 'farmer'} />
+          </div>
         </div>
         {seasons.isPending ? (
           <Loading label="Loading the seasons…" />

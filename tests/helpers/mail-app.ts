@@ -24,7 +24,7 @@ export async function startMailApp() {
   const app = createApp({ sequelize, config, jobs, clientDir: '/nonexistent', devMailbox: true });
 
   /** The messages caught for an address, newest first, once there are at least `count`. */
-  async function mailTo(address: string, count = 1, timeoutMs = 15_000): Promise<MailboxMessage[]> {
+  async function mailTo(address: string, count = 1, timeoutMs = 25_000): Promise<MailboxMessage[]> {
     const until = Date.now() + timeoutMs;
     for (;;) {
       const res = await request(app).get('/api/dev/mailbox').query({ to: address });

@@ -63,3 +63,15 @@ export async function storedEstimates(sequelize: Sequelize, farmId: number, seas
   }
   return new Map(rows.map((r) => [r.fieldId, r.results.estimate]));
 }
+
+/** The stored assessments of some fields for one season, storing any missing first; by field id. */
+export async function seasonAssessments(sequelize: Sequelize, farmId: number, seasonId: number, fieldIds: number[]): Promise<Map<number, FieldAssessment>> {
+  const read = () => Assessment.findAll({ where: { seasonId, fieldId: fieldIds }, attributes: ['fieldId', 'results'] });
+  let rows = await read();
+  if (rows.length < fieldIds.length) {
+    const have = new Set(rows.map((r) => r.fieldId));
+    await refreshAssessments(sequelize, { farmId, fieldIds: fieldIds.filter((id) => !have.has(id)) });
+    rows = await read();
+  }
+  return new Map(rows.map((r) => [r.fieldId, r.results]));
+}

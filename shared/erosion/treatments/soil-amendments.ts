@@ -8,7 +8,7 @@ import { ASSUMED_OM_RISE_PCT, kAfterOrganicMatterRise } from '../organic-matter-
 import type { Quantity } from '../amendments';
 import type { PermeabilityCode, StructureCode } from '../k-factor';
 import { kSiToUs } from '../units';
-import { CAUTIONS } from './cautions';
+import { cautionsFor } from './cautions';
 import { cannot, costLine, offer, round2, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
 
@@ -49,7 +49,7 @@ export function limePlan(ctx: SiteContext): PlanResult {
     ],
     costLines: spreadCosts(ctx, 'lime-per-t', v),
     effects: [`Raises soil pH toward ${v.targetPh} over a season or two.`, 'Lime changes no RUSLE factor: A stays as it is.'],
-    cautions: [CAUTIONS.dust, CAUTIONS.label],
+    cautions: cautionsFor('lime'),
   });
 }
 
@@ -96,7 +96,7 @@ export function gypsumPlan(ctx: SiteContext): PlanResult {
       sodic ? 'Replaces exchangeable sodium with calcium so the clay holds together and takes in water.' : 'May improve clay structure and water entry; results vary by soil.',
       'The engine predicts no change in K or the curve number for gypsum (no published factor): A and runoff stay as they are.',
     ],
-    cautions: [CAUTIONS.dust, CAUTIONS.label],
+    cautions: cautionsFor('gypsum'),
   });
 }
 
@@ -136,6 +136,6 @@ export function organicMatterPlan(ctx: SiteContext): PlanResult {
     ],
     costLines: spreadCosts(ctx, 'compost-per-t', q),
     effects: ['The K change is what the nomograph shows for more organic matter; it comes slowly.', 'It does not change C, P, LS or the curve number here.'],
-    cautions: [CAUTIONS.nutrients, CAUTIONS.label],
+    cautions: cautionsFor('organic-matter'),
   });
 }

@@ -4,7 +4,7 @@
 // (contoured; contoured and terraced).
 import { STRIP_ROTATION_WORDS, supportPractice, type Practice, type StripRotation } from '../support-practice';
 import { ftToM, mToFt } from '../units';
-import { CAUTIONS } from './cautions';
+import { cautionsFor } from './cautions';
 import { cannot, costLine, isPlanResult, offer, practiceP, round1, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
 
@@ -111,6 +111,6 @@ export function terracesPlan(ctx: SiteContext): PlanResult {
     ],
     costLines: [costLine(ctx.site, 'terrace-per-m', Math.round(lengthM), 'm')],
     effects: [...sp.notes, 'Terrace channels and outlets carry the water off; their design sets the real spacing.', 'It does not change C or K.'],
-    cautions: [CAUTIONS.earthwork, CAUTIONS.utilities, CAUTIONS.sizing],
+    cautions: cautionsFor('terraces'),
   });
 }

@@ -1,7 +1,7 @@
 // Grassed waterway (NRCS 412) where water gathers, and a filter strip (NRCS 393) on the
 // downslope edge. Neither changes a RUSLE factor: a waterway stops a gully forming in the flow
 // path, a filter strip traps sediment leaving the field. Said so; A stays as it is.
-import { CAUTIONS } from './cautions';
+import { cautionsFor } from './cautions';
 import { cannot, costLine, offer, type PlanResult, type SiteContext } from './plan';
 
 /** Sizing estimate of a waterway's top width, m (rule of thumb; the design's peak flow sets it). */
@@ -26,7 +26,7 @@ export function grassedWaterwayPlan(ctx: SiteContext): PlanResult {
     ],
     costLines: [costLine(ctx.site, 'waterway-per-m', Math.round(lengthM), 'm')],
     effects: ['Gully control: carries the water that gathers in the flow path over grass, so no gully cuts there.', NOT_A],
-    cautions: [CAUTIONS.earthwork, CAUTIONS.utilities, CAUTIONS.sizing],
+    cautions: cautionsFor('grassed-waterway'),
   });
 }
 
@@ -45,6 +45,6 @@ export function filterStripPlan(ctx: SiteContext): PlanResult {
     ],
     costLines: [costLine(ctx.site, 'filter-strip-per-ha', Math.round(stripHa * 100) / 100, 'ha')],
     effects: ['Sediment trapping: grass on the downslope edge catches part of the soil washing off before it reaches water.', NOT_A],
-    cautions: [CAUTIONS.sizing],
+    cautions: cautionsFor('filter-strip'),
   });
 }

@@ -2,7 +2,7 @@
 // designed subsurface drainage (NRCS 606) or permanent cover (NRCS 327) instead of amendments.
 // Offered only on such ground.
 import { ADEQUATELY_DRAINED_MIN_DEPTH_CM } from '../runoff';
-import { CAUTIONS } from './cautions';
+import { cautionsFor } from './cautions';
 import { cannot, costLine, isPlanResult, offer, tableC, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
 
@@ -21,7 +21,7 @@ export function raisedBedsPlan(ctx: SiteContext): PlanResult {
     quantities: area(ctx),
     costLines: [costLine(ctx.site, 'raised-beds-per-ha', ctx.site.areaHa, 'ha')],
     effects: ['Lifts the root zone above the wet subsoil.', 'No RUSLE or curve-number change is predicted for beds: A and runoff stay as they are.'],
-    cautions: [CAUTIONS.utilities],
+    cautions: cautionsFor('raised-beds'),
   });
 }
 
@@ -48,7 +48,7 @@ export function drainagePlan(ctx: SiteContext): PlanResult {
       dual ? 'Runoff follows the drained soil group.' : 'No curve-number change is predicted: the soil group is not a dual (drained/undrained) group.',
       'RUSLE A does not change.',
     ],
-    cautions: [CAUTIONS.drainage, CAUTIONS.utilities],
+    cautions: cautionsFor('drainage'),
   });
 }
 

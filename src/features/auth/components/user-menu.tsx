@@ -18,7 +18,7 @@ export function UserMenu() {
   if (!user) return null;
 
   return (
-    <div className="flex flex-wrap items-center gap-3 text-sm">
+    <div className="flex flex-wrap items-center gap-3 text-sm print:hidden">
       <div role="group" aria-label="Area units" className="flex items-center gap-1">
         <span className="text-ink-soft">Area in</span>
         {UNIT_CHOICES.map((u) => (

@@ -14,6 +14,7 @@ import { useFarmTreatments } from '../api/get-farm-treatments';
 import { BoardMap } from './board-map';
 import { BoardTable, type RankedRow } from './board-table';
 import { lossFigure } from '../../../lib/loss-units';
+import { BoardCsvButton } from './board-csv-button';
 import { RiskBadge } from '../../../components/risk/risk-badge';
 import { RiskLegend } from '../../../components/risk/risk-legend';
 import type { BoardTreatments } from './treatment-columns';
@@ -36,6 +37,8 @@ type Props = {
   tileAttribution?: string | null;
   /** The farm whose treatments the table may show (one farm's board, farmer or advisor); none hides the switch. */
   treatmentsFarmId?: number;
+  /** Names the board's CSV file: the farm's name, or "client farms" on an advisor's board. */
+  fileStem: string;
 };
 
 type TableView = 'risk' | 'treatments';
@@ -47,7 +50,7 @@ const VIEW_CHOICES: { value: TableView; label: string }[] = [
 const pill = (on: boolean) =>
   `rounded border px-2 py-0.5 font-medium ${on ? 'border-clay-dark bg-clay text-paper' : 'border-ink-faint bg-paper text-ink hover:bg-paper-deep'}`;
 
-export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution, treatmentsFarmId }: Props) {
+export function BoardWorkspace({ rows, fields, units, season, showFarm = false, tileUrl, tileAttribution, treatmentsFarmId, fileStem }: Props) {
   const navigate = useNavigate();
   const [view, setView] = useState<TableView>('risk');
   const treatmentsQuery = useFarmTreatments(treatmentsFarmId ?? 0, season, treatmentsFarmId !== undefined && view === 'treatments');
@@ -71,21 +74,24 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
 
   return (
     <div className="flex flex-col gap-4">
-      <div role="group" aria-label="Units of soil loss" className="flex items-center gap-1 text-sm" data-testid="board-loss-units">
-        <span className="text-ink-soft">Soil loss and runoff in</span>
-        {LOSS_UNIT_CHOICES.map((c) => (
-          <button
-            key={c.value}
-            type="button"
-            aria-pressed={lossUnits === c.value}
-            onClick={() => setLossUnits(c.value)}
-            data-testid={`board-loss-units-${c.value === 'ha' ? 'si' : 'us'}`}
-            className={pill(lossUnits === c.value)}
-          >
-            {c.label}
-          </button>
-        ))}
-        <span className="text-xs text-ink-soft">(hover a figure for the other units)</span>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <div role="group" aria-label="Units of soil loss" className="flex flex-wrap items-center gap-1 text-sm" data-testid="board-loss-units">
+          <span className="text-ink-soft">Soil loss and runoff in</span>
+          {LOSS_UNIT_CHOICES.map((c) => (
+            <button
+              key={c.value}
+              type="button"
+              aria-pressed={lossUnits === c.value}
+              onClick={() => setLossUnits(c.value)}
+              data-testid={`board-loss-units-${c.value === 'ha' ? 'si' : 'us'}`}
+              className={pill(lossUnits === c.value)}
+            >
+              {c.label}
+            </button>
+          ))}
+          <span className="text-xs text-ink-soft">(hover a figure for the other units)</span>
+        </div>
+        <BoardCsvButton rows={rows} units={units} lossUnits={lossUnits} showFarm={showFarm} season={season} fileStem={fileStem} />
       </div>
       {treatmentsFarmId !== undefined ? (
         <div className="flex flex-col gap-2">
@@ -125,7 +131,7 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
           treatments={treatments}
         />
         <div className="flex flex-col gap-2 xl:sticky xl:top-2 xl:self-start">
-          <div className="flex min-h-12 flex-wrap items-center gap-2 rounded-md border border-paper-edge bg-white/50 px-3 py-2 text-sm" data-testid="board-selection" aria-live="polite">
+          <div className="flex min-h-12 flex-wrap items-center gap-2 rounded-md border border-paper-edge bg-white/50 px-3 py-2 text-sm print:hidden" data-testid="board-selection" aria-live="polite">
             {selected ? (
               <>
                 <span className="num font-semibold">{selected.rank}.</span>
@@ -140,7 +146,8 @@ export function BoardWorkspace({ rows, fields, units, season, showFarm = false, 
               <span className="text-ink-soft">Pick a row or a field on the map to see it here.</span>
             )}
           </div>
-          <div className="h-[420px] overflow-hidden rounded-md border border-paper-edge">
+          {/* A live map does not redraw for paper: the table and the chart carry the same figures there. */}
+          <div className="h-[420px] overflow-hidden rounded-md border border-paper-edge print:hidden">
             <BoardMap fields={fields} rows={rows} selectedId={selectedId} onSelect={onMapSelect} tileUrl={tileUrl} tileAttribution={tileAttribution} />
           </div>
           <RiskLegend counts={counts} />

@@ -21,7 +21,7 @@ type Props = { field: FieldFeature; others: FieldFeature[]; fillColour: string |
 export function FieldMiniMap({ field, others, fillColour, tileUrl, tileAttribution }: Props) {
   const positions = useMemo(() => geometryToLatLngs(field.geometry), [field.geometry]);
   return (
-    <div className="h-64 w-full overflow-hidden rounded-md border border-paper-edge" data-testid="field-mini-map">
+    <div className="h-64 w-full overflow-hidden rounded-md border border-paper-edge print:hidden" data-testid="field-mini-map">
       <MapContainer className="fs-map h-full w-full" center={[20, 0]} zoom={2} zoomSnap={0.25} scrollWheelZoom={false} attributionControl={Boolean(tileUrl)}>
         {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} maxZoom={19} /> : null}
         {others

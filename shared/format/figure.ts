@@ -1,0 +1,11 @@
+// How every screen writes its figures: enough digits to compare, not more than the
+// inputs can carry (three significant figures for small values, whole numbers for large).
+export function formatFigure(x: number): string {
+  if (!Number.isFinite(x)) return '—';
+  const a = Math.abs(x);
+  if (a === 0) return '0';
+  if (a >= 100) return x.toLocaleString('en-US', { maximumFractionDigits: 0 });
+  if (a >= 10) return x.toLocaleString('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+  if (a >= 1) return x.toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+  return x.toLocaleString('en-US', { maximumSignificantDigits: 3 });
+}
