@@ -57,6 +57,8 @@ describe('printing and downloads in Chromium', () => {
     const { page, errors } = await signInPage(app.browser, app.baseUrl, farm.users.advisor.email, TEST_PASSWORD);
     await page.goto(`${app.baseUrl}/farms/${farm.farm.id}/board?season=${farm.season}`);
     await page.getByTestId('board-csv').waitFor({ timeout: 15_000 });
+    // The chart loads on demand: print once it is there.
+    await page.getByTestId('board-chart').waitFor({ timeout: 15_000 });
     const all = (await printed(page, 'test-results/board-print.pdf')).join(' ');
     for (const name of ['Long Slope', 'Mill Hill', 'Hay Ground']) expect(all).toContain(name);
     expect(all).toContain('Soil lost against what the soil can stand');
