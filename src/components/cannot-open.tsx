@@ -3,6 +3,7 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from './ui/notice';
+import { Loading } from './ui/spinner';
 import { isApiError } from '../lib/api-client';
 import { paths } from '../lib/paths';
 
@@ -21,4 +22,29 @@ export function CannotOpen({ header, title, error, notFoundText }: { header: Rea
       </main>
     </div>
   );
+}
+
+/**
+ * What a farm screen shows before its own content: the farm cannot be opened, or it (or the
+ * signed-in person) is still loading. Null once both are there.
+ */
+export function farmScreenWaiting(args: {
+  farmId: number;
+  farm: { isError: boolean; isPending: boolean; error: unknown };
+  meLoaded: boolean;
+  header: ReactNode;
+  title: string;
+  loadingLabel: string;
+}): ReactNode | null {
+  const { farmId, farm, header } = args;
+  if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
+    return <CannotOpen header={header} title={args.title} error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
+  if (farm.isPending || !args.meLoaded)
+    return (
+      <div className="flex min-h-full flex-col">
+        {header}
+        <Loading label={args.loadingLabel} />
+      </div>
+    );
+  return null;
 }

@@ -5,7 +5,7 @@ import { useQueries } from '@tanstack/react-query';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
 import { Notice } from '../components/ui/notice';
-import { CannotOpen } from '../components/cannot-open';
+import { farmScreenWaiting } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
@@ -40,15 +40,8 @@ export function BoardPage() {
   const plan = useSeasonPlan(farmId, season);
   const header = <AppHeader screen="Priority board" farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
-  if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
-    return <CannotOpen header={header} title="This board cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
-  if (farm.isPending || !me.data)
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <Loading label="Opening the board…" />
-      </div>
-    );
+  const waiting = farmScreenWaiting({ farmId, farm, meLoaded: !!me.data, header, title: 'This board cannot be opened', loadingLabel: 'Opening the board…' });
+  if (waiting || !farm.data || !me.data) return waiting;
 
   const role = farm.data.role;
   const units = me.data.units;

@@ -2,7 +2,7 @@
 // farm's price list. For farmers and advisors; a landowner is told it is not theirs to see.
 import { Link, useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
-import { CannotOpen } from '../components/cannot-open';
+import { farmScreenWaiting } from '../components/cannot-open';
 import { Notice } from '../components/ui/notice';
 import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
@@ -27,15 +27,8 @@ export function BudgetPage() {
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
   const header = <AppHeader screen={SCREEN} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
-  if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
-    return <CannotOpen header={header} title="This screen cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
-  if (farm.isPending || !me.data)
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <Loading label="Opening the budget…" />
-      </div>
-    );
+  const waiting = farmScreenWaiting({ farmId, farm, meLoaded: !!me.data, header, title: 'This screen cannot be opened', loadingLabel: 'Opening the budget…' });
+  if (waiting || !farm.data || !me.data) return waiting;
 
   const role = farm.data.role;
   if (role === 'landowner')

@@ -5,7 +5,7 @@ import { useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
 import { useSeasonPlan } from '../features/plans/api/get-season-plan';
 import { PlanReportButton } from '../features/reports/components/plan-report-button';
-import { CannotOpen } from '../components/cannot-open';
+import { farmScreenWaiting } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { Notice } from '../components/ui/notice';
 import { useMe } from '../features/auth/api/get-me';
@@ -30,15 +30,8 @@ export function LandownerPlanPage() {
   const plan = useSeasonPlan(farmId, season);
   const header = <AppHeader screen={SCREEN} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
-  if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
-    return <CannotOpen header={header} title="This plan cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
-  if (farm.isPending || !me.data)
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <Loading label="Opening the approved plan…" />
-      </div>
-    );
+  const waiting = farmScreenWaiting({ farmId, farm, meLoaded: !!me.data, header, title: 'This plan cannot be opened', loadingLabel: 'Opening the approved plan…' });
+  if (waiting || !farm.data || !me.data) return waiting;
   const landowner = farm.data.role === 'landowner';
 
   return (

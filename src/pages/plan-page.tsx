@@ -4,7 +4,7 @@ import { Navigate, useParams } from 'react-router-dom';
 import { AppHeader } from '../components/app-header';
 import { useSeasonPlan } from '../features/plans/api/get-season-plan';
 import { PlanReportButton } from '../features/reports/components/plan-report-button';
-import { CannotOpen } from '../components/cannot-open';
+import { farmScreenWaiting } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { Notice } from '../components/ui/notice';
 import { useMe } from '../features/auth/api/get-me';
@@ -29,15 +29,8 @@ export function PlanPage() {
   const plan = useSeasonPlan(farmId, season);
   const header = <AppHeader screen={SCREEN} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
 
-  if (!Number.isInteger(farmId) || farmId <= 0 || farm.isError)
-    return <CannotOpen header={header} title="This plan cannot be opened" error={farm.error} notFoundText="There is no such farm, or you are not a member of it." />;
-  if (farm.isPending || !me.data)
-    return (
-      <div className="flex min-h-full flex-col">
-        {header}
-        <Loading label="Opening the plan…" />
-      </div>
-    );
+  const waiting = farmScreenWaiting({ farmId, farm, meLoaded: !!me.data, header, title: 'This plan cannot be opened', loadingLabel: 'Opening the plan…' });
+  if (waiting || !farm.data || !me.data) return waiting;
   const role = farm.data.role;
   if (role === 'landowner') return <Navigate to={paths.landownerPlan.getHref(farmId, season)} replace />;
   const list = seasons.data ?? [];
