@@ -55,19 +55,33 @@ beforeAll(async () => {
   const field = await farmer.post(`/api/farms/${farm.id}/fields`).send(squareFeature(-91.6, 42.3, 300, 'Target'));
   const plan = await farmer.post(`/api/farms/${farm.id}/plans`).send({ season: '2027' });
   if (field.status !== 201 || plan.status !== 201) throw new Error('corpus set-up failed');
-  ids = { farmId: farm.id, fieldId: field.body.id, planId: plan.body.id };
+  ids = { farmId: farm.id, fieldId: field.body.id, planId: plan.body.id, userId: users.farmer.id };
 });
 afterAll(async () => {
   await sequelize.close();
   rmSync(uploads, { recursive: true, force: true });
 });
 
-/** Row counts of every table the app has a model for. */
+/**
+ * Row counts, in every table the app has a model for, of the rows that belong to the corpus's
+ * farm, its fields or its farmer (other test files write to the same database at the same time),
+ * plus accounts under any address the corpus's payloads name.
+ */
 async function rowCounts(): Promise<Record<string, number>> {
+  const fieldIds = (await sequelize.models.Field.findAll({ attributes: ['id'], where: { farmId: ids.farmId } })).map((f) => f.get('id'));
   const out: Record<string, number> = {};
-  for (const [name, model] of Object.entries(sequelize.models)) out[name] = await model.count();
+  for (const [name, model] of Object.entries(sequelize.models)) {
+    const attrs = model.getAttributes();
+    if (name === 'Field' || 'farmId' in attrs) out[name] = await model.count({ where: { farmId: ids.farmId } });
+    else if ('fieldId' in attrs) out[name] = await model.count({ where: { fieldId: fieldIds } });
+    else if ('userId' in attrs) out[name] = await model.count({ where: { userId: ids.userId } });
+    else if (name === 'User') out[name] = await model.count({ where: { email: payloadEmails } });
+  }
   return out;
 }
+
+/** Every e-mail address the payloads carry, so an account made by a hostile payload is counted. */
+const payloadEmails = [...new Set(JSON.stringify(cases).match(/[\w.+-]+@[\w.-]+/g) ?? [])];
 
 const filesLeft = () => readdirSync(uploads, { recursive: true, withFileTypes: true }).filter((d) => d.isFile()).length;
 
