@@ -37,7 +37,8 @@ const HEMISPHERES: Record<string, 'N' | 'S' | 'E' | 'W'> = {
   n: 'N', north: 'N', s: 'S', south: 'S', e: 'E', east: 'E', w: 'W', west: 'W',
 };
 
-const fail = (reason: CoordinateProblem, message: string): CoordinateParse => ({ ok: false, reason, message });
+type Failure = Extract<CoordinateParse, { ok: false }>;
+const fail = (reason: CoordinateProblem, message: string): Failure => ({ ok: false, reason, message });
 
 /** Typographic marks people paste from documents and maps, turned into plain ones. */
 function normalise(text: string): string {
@@ -117,7 +118,7 @@ function splitParts(tokens: Token[]): Part[] | null {
 const UNIT_ORDER = ['°', "'", '"'];
 
 /** Degrees (signed) of one part, or a problem. */
-function partDegrees(part: Part): { ok: true; degrees: number } | CoordinateParse {
+function partDegrees(part: Part): { ok: true; degrees: number } | Failure {
   const ns = part.numbers;
   if (ns.length === 0 || ns.length > 3) return fail('badly-formed', 'Each coordinate needs degrees, and may have minutes and seconds.');
   // Marks, where given, must run degrees → minutes → seconds in place.
