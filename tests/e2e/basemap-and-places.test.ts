@@ -117,7 +117,7 @@ describe('basemaps and place search in Chromium', () => {
     await page.getByTestId('field-row').first().click();
     await page.getByTestId('basemap-picker').selectOption('imagery');
     await page.getByTestId('basemap-unreachable').waitFor({ timeout: 15_000 });
-    expect(await page.getByTestId('basemap-unreachable').innerText()).toContain('could not be reached');
+    expect(await page.getByTestId('basemap-unreachable').innerText()).toContain('“Aerial photos” could not be reached');
     expect(await page.locator('.leaflet-control-attribution').innerText()).toContain('© Test imagery');
     expect(await page.locator('img[alt="Shaded relief of the farm"]').isVisible()).toBe(true);
     expect(await page.locator('.leaflet-overlay-pane path').count()).toBeGreaterThanOrEqual(1);

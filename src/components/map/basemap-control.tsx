@@ -56,7 +56,7 @@ export function BasemapControl({ basemaps, basemap, chosenKey, onChoose, noneKey
             {basemap && reach === 'unreachable' ? (
               <div role="status" data-testid="basemap-unreachable" className="flex max-w-xs items-start gap-2 text-ink-soft">
                 <p className="flex-1">
-                  The basemap “{basemap.name}” could not be reached. The farm's own relief and fields are shown.
+                  “{basemap.name}” could not be reached; the farm's own relief and fields are shown.
                 </p>
                 <button type="button" className="shrink-0 text-xs underline" onClick={() => setAttempt((n) => n + 1)}>
                   Try again

@@ -82,8 +82,8 @@ export function PlaceSearch() {
 
   return (
     <>
-      <div className="absolute left-12 right-2 top-2.5 z-[1000] sm:right-auto sm:w-80">
-        <div ref={boxRef} data-testid="place-search" className="rounded-md border border-paper-edge bg-paper/95 text-sm shadow">
+      <div className="absolute left-12 right-2 top-2.5 z-[1001] sm:right-auto sm:w-80">
+        <div ref={boxRef} data-testid="place-search" className="rounded-md border border-paper-edge bg-paper text-sm shadow">
           <form role="search" onSubmit={onSubmit} className="flex items-center gap-1 p-1">
             <label htmlFor={inputId} className="sr-only">
               Find a place: a name, an address or coordinates
