@@ -19,7 +19,7 @@ const displayName = (p: Entry) => {
 };
 
 /** Nominatim-shaped matches for the typed text, best first, at most `limit`. */
-export function searchGazetteer(q: string, limit: number) {
+function searchGazetteer(q: string, limit: number) {
   const wanted = words(q);
   if (wanted.length === 0) return [];
   return gazetteer.places

@@ -9,7 +9,7 @@ export type PlaceSearchOutcome = { ok: true; places: Place[] } | { ok: false; re
 export type PlaceSearch = { search: (q: string) => Promise<PlaceSearchOutcome> };
 
 /** How many matches a search offers. */
-export const PLACE_RESULTS_MAX = 6;
+const PLACE_RESULTS_MAX = 6;
 /** A service slower than this counts as out of reach. */
 const TIMEOUT_MS = 8_000;
 /** node-geocoder's fetch adapter keeps our error's code: it tells "not reached" from "bad answer". */

@@ -27,7 +27,7 @@ export function FieldMiniMap({ field, others, fillColour, basemap }: Props) {
   return (
     <div className="print:hidden">
       <div className="h-64 w-full overflow-hidden rounded-md border border-paper-edge" data-testid="field-mini-map">
-        <MapContainer className="fs-map h-full w-full" center={[20, 0]} zoom={2} zoomSnap={0.25} scrollWheelZoom={false} attributionControl={Boolean(basemap)}>
+        <MapContainer className="fs-map h-full w-full" center={[20, 0]} zoom={2} zoomSnap={0.25} scrollWheelZoom={false}>
           {basemap ? <BasemapTiles basemap={basemap} onReach={setReach} /> : null}
           {others
             .filter((o) => o.id !== field.id)
