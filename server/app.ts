@@ -25,10 +25,14 @@ import { changesRoutes } from './routes/changes.routes';
 import { peopleRoutes } from './routes/people.routes';
 import { devMailboxRoutes } from './routes/dev-mailbox.routes';
 import { exportsRoutes } from './routes/exports.routes';
+import { placesRoutes } from './routes/places.routes';
+import { placeSearchFor } from './services/places/place-search.service';
+import { tileOrigins } from './lib/tile-origins';
 import { setMailContext } from './services/mail/outbox';
 import { LocalFileStorage, type FileStorage } from './services/storage/file-storage';
 import type { JobQueue } from './services/jobs/job-queue';
 import { JSON_BODY_MAX_BYTES } from '../shared/limits';
+import type { ClientConfig } from '../shared/schemas/config';
 
 export type AppOptions = {
   sequelize: Sequelize;
@@ -40,9 +44,11 @@ export type AppOptions = {
   clientDir?: string;
   /** True while mail goes to the local fake mail server: GET /api/dev/mailbox then shows its catch. */
   devMailbox?: boolean;
+  /** The geocoding service place search uses when config.geocoderUrl is unset (npm start's local fake). */
+  geocoderUrl?: string;
 };
 
-export function createApp({ sequelize, config, clientDir, jobs, storage: givenStorage, devMailbox = false }: AppOptions): Express {
+export function createApp({ sequelize, config, clientDir, jobs, storage: givenStorage, devMailbox = false, geocoderUrl }: AppOptions): Express {
   // Mail written to the outbox goes to the job queue once its transaction commits.
   setMailContext({ dispatch: jobs ? (id) => jobs.sendMail(id) : null, publicUrl: config.publicUrl });
   const storage = givenStorage ?? new LocalFileStorage(path.join(config.dataDir, 'uploads'));
@@ -55,8 +61,8 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
     helmet({
       contentSecurityPolicy: {
         directives: {
-          // Leaflet draws tiles and overlays as <img>; a configured basemap host must be allowed.
-          'img-src': ["'self'", 'data:', 'blob:', ...(config.tileUrl ? [new URL(config.tileUrl.replace(/\{[a-z]\}/g, 'a')).origin] : [])],
+          // Leaflet draws tiles and overlays as <img>; every configured basemap host must be allowed.
+          'img-src': ["'self'", 'data:', 'blob:', ...tileOrigins(config.basemaps.map((b) => b.url))],
           'upgrade-insecure-requests': config.isProduction ? [] : null,
         },
       },
@@ -71,7 +77,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
     res.status(db ? 200 : 503).json({ ok: db, db });
   });
   api.get('/config', (_req, res) => {
-    res.json({ tileUrl: config.tileUrl, tileAttribution: config.tileAttribution, devMailbox });
+    res.json({ basemaps: config.basemaps, devMailbox } satisfies ClientConfig);
   });
   api.use('/auth', authRoutes(sequelize, config));
   const people = peopleRoutes(sequelize, config);
@@ -87,6 +93,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   api.use('/fields', terrain.fields);
   api.use('/jobs', terrain.jobs);
   api.use('/estimate', estimateRoutes());
+  api.use('/places', placesRoutes(placeSearchFor(config.geocoderUrl ?? geocoderUrl ?? null, `Fieldshed (${config.publicUrl})`)));
   api.use('/', soilsRoutes({ sequelize, storage }));
   const seasons = seasonsRoutes(sequelize, jobs);
   api.use('/farms', seasons.farms);

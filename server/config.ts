@@ -1,10 +1,22 @@
 // The only reader of process.env. Parsed once with zod; every problem is listed at start-up.
 import { z } from 'zod';
 import path from 'node:path';
+import type { Basemap } from '../shared/schemas/config';
 
 const boolish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
   .transform((v) => v === 'true' || v === '1' || v === 'yes');
+
+const OFF = /^(off|none)?$/i;
+
+/** A tile URL template Leaflet can draw ({z}/{x}/{y}, optional {s} subdomain), checked at start-up. */
+const tileTemplate = (key: string) =>
+  z
+    .string()
+    .refine((v) => OFF.test(v) || (/^https?:\/\//.test(v) && ['{z}', '{x}', '{y}'].every((p) => v.includes(p))), {
+      message: `${key} must be an http(s) URL with {z}, {x} and {y} (or "off")`,
+    })
+    .optional();
 
 const Env = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
@@ -16,8 +28,14 @@ const Env = z.object({
   PUBLIC_URL: z.string().url().optional(),
   MAIL_FROM: z.string().min(3).default('Fieldshed <no-reply@fieldshed.localhost>'),
   REMINDER_DAYS: z.coerce.number().int().min(1).max(60).default(7),
-  TILE_URL: z.string().optional(),
+  STREET_TILE_URL: tileTemplate('STREET_TILE_URL'),
+  STREET_TILE_ATTRIBUTION: z.string().optional(),
+  TOPO_TILE_URL: tileTemplate('TOPO_TILE_URL'),
+  TOPO_TILE_ATTRIBUTION: z.string().optional(),
+  TILE_URL: tileTemplate('TILE_URL'),
   TILE_ATTRIBUTION: z.string().optional(),
+  TILE_NAME: z.string().min(1).max(40).optional(),
+  GEOCODER_URL: z.string().url().optional(),
   SEED_DEMO: boolish.default(true),
   SESSION_SECRET: z.string().min(16).optional(),
   SESSION_HOURS: z.coerce.number().positive().default(12),
@@ -38,13 +56,35 @@ export type Config = {
   mailFrom: string;
   /** How many days before a planned action's date its reminder goes out. */
   reminderDays: number;
-  tileUrl: string | null;
-  tileAttribution: string | null;
+  /** The web basemaps a user may pick, the default first; see basemapsFrom. */
+  basemaps: Basemap[];
+  /** A Nominatim-style geocoding service for place search; unset: `npm start` runs a local fake. */
+  geocoderUrl: string | null;
   seedDemo: boolean;
   sessionSecret: string;
   sessionHours: number;
   isProduction: boolean;
 };
+
+/**
+ * The web basemaps, in the order the picker lists them (the first is the default): roads and
+ * places from OpenStreetMap's tile service, hills and contours from OpenTopoMap, and the
+ * installation's own imagery from TILE_URL. Each *_TILE_URL set to "off" leaves that base out.
+ * Under NODE_ENV=test the two public services are off unless a test names a URL, so no test
+ * reaches the internet.
+ */
+function basemapsFrom(e: z.infer<typeof Env>, publicDefaults: boolean): Basemap[] {
+  const street = e.STREET_TILE_URL ?? (publicDefaults ? 'https://tile.openstreetmap.org/{z}/{x}/{y}.png' : 'off');
+  const topo = e.TOPO_TILE_URL ?? (publicDefaults ? 'https://{s}.tile.opentopomap.org/{z}/{x}/{y}.png' : 'off');
+  const all: (Basemap | null)[] = [
+    OFF.test(street) ? null : { key: 'streets', name: 'Roads and places', url: street, attribution: e.STREET_TILE_ATTRIBUTION ?? '© OpenStreetMap contributors', maxNativeZoom: 19 },
+    OFF.test(topo)
+      ? null
+      : { key: 'topo', name: 'Hills and contours', url: topo, attribution: e.TOPO_TILE_ATTRIBUTION ?? 'Map data: © OpenStreetMap contributors, SRTM · Map style: © OpenTopoMap (CC-BY-SA)', maxNativeZoom: 17 },
+    !e.TILE_URL || OFF.test(e.TILE_URL) ? null : { key: 'imagery', name: e.TILE_NAME ?? 'Aerial photos', url: e.TILE_URL, attribution: e.TILE_ATTRIBUTION ?? '', maxNativeZoom: 19 },
+  ];
+  return all.filter((b): b is Basemap => b !== null);
+}
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const parsed = Env.safeParse(env);
@@ -65,8 +105,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST === '0.0.0.0' ? '127.0.0.1' : e.HOST}:${e.PORT}`).replace(/\/+$/, ''),
     mailFrom: e.MAIL_FROM,
     reminderDays: e.REMINDER_DAYS,
-    tileUrl: e.TILE_URL ?? null,
-    tileAttribution: e.TILE_ATTRIBUTION ?? null,
+    basemaps: basemapsFrom(e, e.NODE_ENV !== 'test'),
+    geocoderUrl: e.GEOCODER_URL ?? null,
     seedDemo: e.SEED_DEMO,
     // A development default keeps `npm start` to one command; production must set its own.
     sessionSecret: e.SESSION_SECRET ?? 'fieldshed-development-secret-not-for-production',

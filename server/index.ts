@@ -7,6 +7,7 @@ import { seedDemoFarm, DEMO_ACCOUNTS, DEMO_PASSWORD } from './db/seeders/demo-fa
 import { createApp } from './app';
 import { openBackend, jobHandlers, taskHandlers, stopOnSignals } from './backend';
 import { openMailTransport } from './services/mail/mail-transport';
+import { openGeocoderService } from './services/places/geocoder-service';
 import { requeueStuckMail, setMailContext } from './services/mail/outbox';
 import { JobQueue } from './services/jobs/job-queue';
 import { seedDemoTerrain } from './db/seeders/demo-terrain';
@@ -42,6 +43,8 @@ async function main(): Promise<void> {
   startedClusterDir = db.localClusterDir;
   // SMTP_URL unset: a local fake mail server on loopback catches the mail (the Dev mailbox).
   const mail = await openMailTransport(config);
+  // GEOCODER_URL unset: a local fake geocoding service answers place searches from the demo gazetteer.
+  const geocoder = await openGeocoderService(config);
   // One worker in this process; `npm run worker` adds more, here or on other machines.
   const jobs = await JobQueue.start(db.url, jobHandlers(backend), '', taskHandlers(backend, mail));
   // Before the demo seed, so the seeded plan's notice to the advisor goes out at once.
@@ -57,7 +60,7 @@ async function main(): Promise<void> {
   const refreshedFarms = await refreshStaleAssessments(db.sequelize);
   if (refreshedFarms) console.log(`Brought the stored assessments of ${refreshedFarms} farm${refreshedFarms === 1 ? '' : 's'} up to date.`);
   await buildClientIfStale();
-  const app = createApp({ sequelize: db.sequelize, config, storage, jobs, devMailbox: !!mail.fake });
+  const app = createApp({ sequelize: db.sequelize, config, storage, jobs, devMailbox: !!mail.fake, geocoderUrl: geocoder.url });
   const requeued = await requeueStuckMail();
   if (requeued) console.log(`Queued again ${requeued} mail${requeued === 1 ? '' : 's'} left unsent by an earlier run.`);
   const server: Server = app.listen(config.port, config.host);
@@ -69,6 +72,7 @@ async function main(): Promise<void> {
   });
   console.log(`\nFieldshed is running at http://${config.host}:${config.port}`);
   if (mail.fake) console.log(`Mail goes to a local fake mail server (127.0.0.1:${mail.fake.port}); read it at ${config.publicUrl}/dev/mailbox`);
+  if (geocoder.fake) console.log(`Place search goes to a local fake geocoding service (${geocoder.url}) that knows only the demo's invented places.`);
   if (config.seedDemo) {
     console.log(`Demo sign-ins (password ${DEMO_PASSWORD}):`);
     for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(9)} ${a.email}`);
@@ -77,6 +81,7 @@ async function main(): Promise<void> {
     server.close();
     await jobs.stop();
     await mail.close();
+    await geocoder.close();
     await db.sequelize.close().catch(() => undefined);
     if (db.localClusterDir) await stopLocalCluster(db.localClusterDir).catch(() => undefined);
   });

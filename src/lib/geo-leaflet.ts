@@ -47,6 +47,11 @@ export function layerToGeometry(layer: L.Layer): AreaGeometry | null {
   return null;
 }
 
+/** The Leaflet position of one GeoJSON-ordered [lng, lat] point. */
+export function positionToLatLng([lng, lat]: [number, number]): L.LatLngTuple {
+  return [lat, lng];
+}
+
 /** Leaflet positions for GeoJSON-ordered [lng, lat] points. */
 export function pointsToLatLngs(points: [number, number][]): L.LatLngTuple[] {
   return points.map(([lng, lat]) => [lat, lng] as L.LatLngTuple);

@@ -12,7 +12,7 @@ import { UserMenu } from '../features/auth/components/user-menu';
 import { useBoard } from '../features/board/api/get-board';
 import { useClientBoard } from '../features/board/api/get-client-board';
 import { BoardWorkspace } from '../features/board/components/board-workspace';
-import { useConfig } from '../features/config/api/get-config';
+import { useBasemap } from '../features/config/use-basemap';
 import { useFarm } from '../features/farms/api/get-farm';
 import { useFarms } from '../features/farms/api/get-farms';
 import { RoleBadge } from '../features/farms/components/role-badge';
@@ -32,7 +32,7 @@ export function BoardPage() {
   const farmId = Number(useParams().farmId);
   const farm = useFarm(farmId);
   const me = useMe();
-  const config = useConfig();
+  const { basemap } = useBasemap();
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
   const board = useBoard(farmId, season);
   const fields = useFields(farmId);
@@ -91,8 +91,8 @@ export function BoardPage() {
             fields={fields.data?.features ?? []}
             units={units}
             season={season}
-            tileUrl={config.data?.tileUrl ?? null}
-            tileAttribution={config.data?.tileAttribution ?? null}
+            tileUrl={basemap?.url ?? null}
+            tileAttribution={basemap?.attribution ?? null}
             treatmentsFarmId={role === 'landowner' ? undefined : farmId}
             fileStem={farm.data.name}
           />
@@ -104,7 +104,7 @@ export function BoardPage() {
 
 export function ClientBoardPage() {
   const me = useMe();
-  const config = useConfig();
+  const { basemap } = useBasemap();
   const farms = useFarms();
   const [params, setParams] = useSearchParams();
   const season = params.get('season');
@@ -192,8 +192,8 @@ export function ClientBoardPage() {
               season={season}
               showFarm
               fileStem="client farms"
-              tileUrl={config.data?.tileUrl ?? null}
-              tileAttribution={config.data?.tileAttribution ?? null}
+              tileUrl={basemap?.url ?? null}
+              tileAttribution={basemap?.attribution ?? null}
             />
           </>
         )}

@@ -6,7 +6,9 @@ import { CannotOpen } from '../components/cannot-open';
 import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
-import { useConfig } from '../features/config/api/get-config';
+import { NO_BASEMAP, useBasemap } from '../features/config/use-basemap';
+import { BasemapControl } from '../components/map/basemap-control';
+import { PlaceSearch } from '../features/places/components/place-search';
 import { useFarm } from '../features/farms/api/get-farm';
 import { RoleBadge } from '../features/farms/components/role-badge';
 import { FarmMapWorkspace } from '../features/fields/components/farm-map-workspace';
@@ -39,7 +41,7 @@ export function FarmMapPage() {
   const farmId = Number(useParams().farmId);
   const farm = useFarm(farmId);
   const me = useMe();
-  const config = useConfig();
+  const base = useBasemap();
   // Files are made for the season in the address (?season=), else the newest; the plan's report where it has one.
   const { season } = useSeasonChoice(farmId);
   const plan = useSeasonPlan(farmId, season);
@@ -65,15 +67,18 @@ export function FarmMapPage() {
           farmBbox={farm.data.bbox}
           canEdit={farm.data.role === 'farmer'}
           units={me.data.units}
-          tileUrl={config.data?.tileUrl ?? null}
-          tileAttribution={config.data?.tileAttribution ?? null}
           mapLayers={(selected) => (
-            <TerrainMapLayers
-              farmId={farmId}
-              selectedField={
-                selected ? { id: selected.id, version: selected.properties.version, name: selected.properties.name } : null
-              }
-            />
+            <>
+              <BasemapControl basemaps={base.basemaps} basemap={base.basemap} chosenKey={base.chosenKey} onChoose={base.choose} noneKey={NO_BASEMAP} />
+              <PlaceSearch />
+              <TerrainMapLayers
+                farmId={farmId}
+                overBasemap={base.basemap !== null}
+                selectedField={
+                  selected ? { id: selected.id, version: selected.properties.version, name: selected.properties.name } : null
+                }
+              />
+            </>
           )}
           fieldExtra={(field) => (
             <FieldTerrainFigures fieldId={field.id} fieldVersion={field.properties.version} farmId={farmId} units={units} />

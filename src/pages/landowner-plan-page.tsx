@@ -10,7 +10,7 @@ import { Loading } from '../components/ui/spinner';
 import { Notice } from '../components/ui/notice';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
-import { useConfig } from '../features/config/api/get-config';
+import { useBasemap } from '../features/config/use-basemap';
 import { useFarm } from '../features/farms/api/get-farm';
 import { useFields } from '../features/fields/api/get-fields';
 import { LandownerPlan } from '../features/plans/components/landowner-plan';
@@ -23,7 +23,7 @@ export function LandownerPlanPage() {
   const farmId = Number(useParams().farmId);
   const farm = useFarm(farmId);
   const me = useMe();
-  const config = useConfig();
+  const { basemap } = useBasemap();
   const fields = useFields(farmId);
   const { seasons, season, setSeason } = useSeasonChoice(farmId);
   // The season's plan on paper, once there is one (for a landowner: an approved one).
@@ -63,8 +63,8 @@ export function LandownerPlanPage() {
             season={season}
             fields={fields.data?.features ?? []}
             units={me.data.units}
-            tileUrl={config.data?.tileUrl ?? null}
-            tileAttribution={config.data?.tileAttribution ?? null}
+            tileUrl={basemap?.url ?? null}
+            tileAttribution={basemap?.attribution ?? null}
           />
         )}
       </main>

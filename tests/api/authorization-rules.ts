@@ -56,6 +56,8 @@ export const RULES: Record<string, Rule> = {
   'GET /api/farms/': { kind: 'signed-in', allowed: 200 },
   'GET /api/board/': { kind: 'signed-in', allowed: 200 },
   'POST /api/estimate/': { kind: 'signed-in', allowed: 400 },
+  // 400: no q asked for.
+  'GET /api/places/': { kind: 'signed-in', allowed: 400 },
   'GET /api/jobs/:jobId': farm(EVERY),
 
   'GET /api/farms/:farmId': farm(EVERY),

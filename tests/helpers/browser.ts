@@ -27,7 +27,7 @@ export async function listen(app: Express): Promise<{ url: string; server: Serve
 }
 
 /** The real build served by the app on the shared test database, with Chromium, for one test file. */
-export async function startBrowserApp(options: { withJobs?: boolean } = {}) {
+export async function startBrowserApp(options: { withJobs?: boolean; env?: Record<string, string> } = {}) {
   const { inject } = await import('vitest');
   const { randomUUID } = await import('node:crypto');
   const { mkdtempSync, rmSync } = await import('node:fs');
@@ -51,7 +51,8 @@ export async function startBrowserApp(options: { withJobs?: boolean } = {}) {
   const jobs = options.withJobs
     ? await JobQueue.start(inject('databaseUrl'), { terrain: terrainJobHandler({ sequelize, storage }) }, `t${randomUUID().slice(0, 8)}-`)
     : undefined;
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}` });
+  // `env` adds settings, e.g. basemaps and a geocoder on local fakes.
+  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}`, ...options.env });
   const { url, server } = await listen(createApp({ sequelize, config, storage, jobs, clientDir: dist }));
   const browser = await launchChromium();
   return {

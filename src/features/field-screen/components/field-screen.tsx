@@ -9,7 +9,7 @@ import { formatArea } from '../../../lib/units';
 import type { Farm, Units } from '../../../../shared/schemas/auth';
 import { RiskBadge } from '../../../components/risk/risk-badge';
 import { lossFigure } from '../../../lib/loss-units';
-import { useConfig } from '../../config/api/get-config';
+import { useBasemap } from '../../config/use-basemap';
 import { RoleBadge } from '../../farms/components/role-badge';
 import { useField } from '../../fields/api/get-field';
 import { useFields } from '../../fields/api/get-fields';
@@ -30,7 +30,7 @@ type Props = { farm: Farm; fieldId: number; units: Units; optionExtra?: OptionEx
 export function FieldScreen({ farm, fieldId, units, optionExtra }: Props) {
   const field = useField(fieldId);
   const fields = useFields(farm.id);
-  const config = useConfig();
+  const { basemap } = useBasemap();
   const { seasons, season, setSeason } = useSeasonChoice(farm.id);
   const [tab, setTab] = useFieldTab();
   const assessment = useAssessment(fieldId, season);
@@ -131,8 +131,7 @@ export function FieldScreen({ farm, fieldId, units, optionExtra }: Props) {
           field={f}
           others={fields.data?.features ?? []}
           fillColour={a?.riskClass?.colour ?? null}
-          tileUrl={config.data?.tileUrl ?? null}
-          tileAttribution={config.data?.tileAttribution ?? null}
+          basemap={basemap}
         />
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm" data-testid="field-side-facts">
           <dt className="text-ink-soft">Area</dt>

@@ -1,10 +1,10 @@
-// Shown on the map of a farm without fields: without a basemap there is nothing to aim at, so
-// offer the device's location, and point to the import.
+// Shown on the map of a farm without fields: point to the place search and the import, and offer
+// the device's location (standing in the field).
 import { useEffect, useRef, useState } from 'react';
 import L from 'leaflet';
 import { useMap } from 'react-leaflet';
 
-export function EmptyMapHint({ canEdit, hasBasemap }: { canEdit: boolean; hasBasemap: boolean }) {
+export function EmptyMapHint({ canEdit }: { canEdit: boolean }) {
   const map = useMap();
   const [locating, setLocating] = useState(false);
   const [problem, setProblem] = useState<string | null>(null);
@@ -34,13 +34,13 @@ export function EmptyMapHint({ canEdit, hasBasemap }: { canEdit: boolean; hasBas
   };
 
   return (
-    <div className="absolute inset-x-0 bottom-8 z-[1000] flex justify-center px-4">
-      <div ref={boxRef} className="max-w-md rounded-md border border-paper-edge bg-paper px-4 py-3 text-sm shadow" data-testid="empty-map-hint">
+    <div className="pointer-events-none absolute inset-x-0 bottom-20 z-[1000] flex justify-center px-4 sm:bottom-8">
+      <div ref={boxRef} className="pointer-events-auto max-w-md rounded-md border border-paper-edge bg-paper px-4 py-3 text-sm shadow" data-testid="empty-map-hint">
         <p className="font-semibold">No fields on this farm yet.</p>
         {canEdit ? (
           <p className="mt-1">
-            Import outlines from a file to place the farm on the map
-            {hasBasemap ? ', or zoom to the farm and draw the first field.' : '. Without a basemap, you can also go to where you stand and draw there.'}
+            Find the farm with the search box at the top (a place name, an address or coordinates) and draw the
+            first field, or import outlines from a file.
           </p>
         ) : (
           <p className="mt-1">The farmer has not added any fields yet.</p>

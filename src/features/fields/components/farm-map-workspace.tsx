@@ -30,11 +30,9 @@ type Props = {
   farmBbox: [number, number, number, number] | null;
   canEdit: boolean;
   units: Units;
-  tileUrl: string | null;
-  tileAttribution: string | null;
   /** Role notes shown at the top of the panel. */
   banner?: ReactNode;
-  /** More map layers (other features' overlays), given the selected field. */
+  /** More map layers (the basemap, place search, other features' overlays), given the selected field. */
   mapLayers?: (selected: FieldFeature | null) => ReactNode;
   /** More of the selected field's details, under its own. */
   fieldExtra?: (field: FieldFeature) => ReactNode;
@@ -48,7 +46,7 @@ const overlapText = (field: FieldFeature, units: Units) =>
     : '';
 
 export function FarmMapWorkspace(props: Props) {
-  const { farmId, farmBbox, canEdit, units, tileUrl, tileAttribution, banner } = props;
+  const { farmId, farmBbox, canEdit, units, banner } = props;
   const fields = useFields(farmId);
   const createField = useCreateField(farmId);
   const updateField = useUpdateField(farmId);
@@ -155,8 +153,6 @@ export function FarmMapWorkspace(props: Props) {
             selectedId={selectedId}
             focus={focus}
             canEdit={canEdit}
-            tileUrl={tileUrl}
-            tileAttribution={tileAttribution}
             layerEpoch={layerEpoch}
             preview={shapeProblem ? { drawn: shapeProblem.drawn, repaired: shapeProblem.repaired } : null}
             onSelect={setSelectedId}
@@ -166,7 +162,7 @@ export function FarmMapWorkspace(props: Props) {
             onDrawError={(text) => setMessage({ tone: 'error', text })}
           >
             {props.mapLayers?.(selected)}
-            {features.length === 0 ? <EmptyMapHint canEdit={canEdit} hasBasemap={Boolean(tileUrl)} /> : null}
+            {features.length === 0 ? <EmptyMapHint canEdit={canEdit} /> : null}
           </FieldsMap>
         )}
         <div className="pointer-events-none absolute inset-x-0 top-2 z-[1000] flex flex-col items-center gap-2 px-14">

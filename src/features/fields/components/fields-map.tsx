@@ -1,8 +1,8 @@
-// The farm's map: its fields on a plain paper base (or a web basemap when the server
-// configures one), labels with field names, and for farmers the drawing tools.
+// The farm's map: its fields with labels, and for farmers the drawing tools. What lies under
+// them (a web basemap, the farm's relief) comes in as children from the page.
 import { lazy, Suspense } from 'react';
 import type { ReactNode } from 'react';
-import { MapContainer, TileLayer } from 'react-leaflet';
+import { MapContainer } from 'react-leaflet';
 import '../../../lib/leaflet-setup';
 import { useLatest } from '../../../lib/use-latest';
 import type { FieldFeature } from '../../../../shared/schemas/field';
@@ -20,8 +20,6 @@ type Props = FieldLayerHandlers & {
   selectedId: number | null;
   focus: FocusRequest;
   canEdit: boolean;
-  tileUrl: string | null;
-  tileAttribution: string | null;
   /** Bumped to redraw every field from the cache (after a refused edit or removal). */
   layerEpoch: number;
   /** A refused outline and its repaired version, drawn until the user decides. */
@@ -32,7 +30,7 @@ type Props = FieldLayerHandlers & {
 };
 
 export function FieldsMap(props: Props) {
-  const { fields, farmBbox, selectedId, focus, canEdit, tileUrl, tileAttribution, layerEpoch } = props;
+  const { fields, farmBbox, selectedId, focus, canEdit, layerEpoch } = props;
   const handlers = useLatest<FieldLayerHandlers>({
     onSelect: props.onSelect,
     onEdited: props.onEdited,
@@ -49,7 +47,6 @@ export function FieldsMap(props: Props) {
       zoomSnap={0.25}
       preferCanvas={false}
     >
-      {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} maxZoom={19} /> : null}
       {fields.map((field) => (
         <FieldPolygon
           key={`${field.id}:${field.properties.version}:${layerEpoch}`}

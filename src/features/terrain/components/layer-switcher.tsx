@@ -31,8 +31,9 @@ export function LayerSwitcher({ layers, active, onChange, reliefUnder, onReliefU
   const activeLayer = layers.find((l) => l.key === active) ?? null;
   const hasRelief = layers.some((l) => l.key === 'hillshade');
 
+  // Below the place search on a phone, beside it on wider screens.
   return (
-    <div className="absolute right-2 top-2 z-[1000] max-h-[calc(100%-1rem)] w-64 max-w-[calc(100%-4rem)] overflow-y-auto">
+    <div className="absolute right-2 top-14 z-[1000] max-h-[calc(100%-4.5rem)] w-64 max-w-[calc(100%-4rem)] overflow-y-auto sm:top-2 sm:max-h-[calc(100%-1rem)]">
       <div ref={boxRef} data-testid="layer-switcher" className="rounded-md border border-paper-edge bg-paper/95 text-sm shadow">
         {/* Open on wide screens; folded on a phone, where it would cover the fields. */}
         <details open={typeof window === 'undefined' || window.innerWidth >= 640}>

@@ -1,6 +1,7 @@
 // Everything terrain draws on the farm map: the active layer as an image overlay in its own
 // pane under the field outlines (the shaded relief is on by default: it is the offline map
-// base), the selected field's concentrated-flow dots above them, and the layer switcher.
+// base, and over a web basemap it shades it), the selected field's concentrated-flow dots above
+// them, and the layer switcher.
 import { useMemo, useState } from 'react';
 import { ImageOverlay, Pane } from 'react-leaflet';
 import { useElevation } from '../api/get-elevation';
@@ -14,6 +15,8 @@ const RELIEF_PANE = 'fs-terrain-relief';
 const THEME_PANE = 'fs-terrain-theme';
 /** A coloured layer lets the relief and outlines show through. */
 const THEME_OPACITY = 0.72;
+/** Over a web basemap the relief darkens it (multiplied) without hiding roads and names. */
+const RELIEF_OVER_BASEMAP_OPACITY = 0.55;
 /** The switcher lists the base first, then the themes from overview to detail. */
 const LAYER_ORDER: LayerKey[] = ['hillshade', 'slope-classes', 'ls', 'soil-loss', 'concentrated-flow'];
 const rank = (key: LayerKey) => {
@@ -21,9 +24,14 @@ const rank = (key: LayerKey) => {
   return i === -1 ? LAYER_ORDER.length : i;
 };
 
-type Props = { farmId: number; selectedField: { id: number; version: number; name: string } | null };
+type Props = {
+  farmId: number;
+  selectedField: { id: number; version: number; name: string } | null;
+  /** True when a web basemap is drawn underneath. */
+  overBasemap?: boolean;
+};
 
-export function TerrainMapLayers({ farmId, selectedField }: Props) {
+export function TerrainMapLayers({ farmId, selectedField, overBasemap = false }: Props) {
   const layers = useLayers(farmId);
   const elevation = useElevation(farmId);
   const terrain = useFieldTerrain(selectedField);
@@ -46,13 +54,13 @@ export function TerrainMapLayers({ farmId, selectedField }: Props) {
   return (
     <>
       {/* Overlays go inside their panes: a pane's children render once the pane exists. */}
-      <Pane name={RELIEF_PANE} style={{ zIndex: 350 }}>
+      <Pane name={RELIEF_PANE} style={{ zIndex: 350, mixBlendMode: 'multiply' }}>
         {showRelief ? (
           <ImageOverlay
             key={`relief:${src(relief)}`}
             url={src(relief)}
             bounds={relief.bounds}
-            opacity={1}
+            opacity={overBasemap ? RELIEF_OVER_BASEMAP_OPACITY : 1}
             interactive={false}
             pmIgnore
             snapIgnore
