@@ -11,7 +11,7 @@ import type { AreaGeometry } from '../../shared/schemas/geojson';
 import type { ImportResult } from '../../shared/schemas/field';
 import type { ImportOptions, ImportRejection } from '../../shared/schemas/field-import';
 import { badRequest, HttpError, invalid } from '../lib/http-error';
-import { nameFrom } from './imports/feature-attributes';
+import { nameFromAttribute as nameFrom } from '../../shared/feature-name';
 import { parseBoundaryFile, type ParsedBoundary, type ParsedItem } from './imports/parse-boundaries';
 import { insertField, listFieldFeatures } from './fields.service';
 import { assessOutline } from './import-outline';

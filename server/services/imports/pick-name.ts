@@ -1,5 +1,5 @@
 // The field name of an imported feature, from the first name-like property that holds one.
-import { nameFrom } from './feature-attributes';
+import { nameFromAttribute as nameFrom } from '../../../shared/feature-name';
 
 /** Property keys tried in this order, compared without regard to case. */
 export const NAME_KEYS = ['name', 'fieldname', 'field', 'field_name', 'label', 'title', 'id'] as const;
