@@ -144,6 +144,43 @@ async function zipOf(entries: [string, Buffer | string][]): Promise<Buffer> {
 const layerEntries = (layer: string, files: Map<string, Buffer>, skip: string[] = []): [string, Buffer][] =>
   [...files].filter(([ext]) => !skip.includes(ext)).map(([ext, data]) => [`${layer}.${ext}`, data]);
 
+// ---- Preview fixtures: names from FIELD_NAME, the same field again, an overlap ---------------
+
+/** UTM 15N features with their attributes as given (no NAME added). */
+function utmWithAttributes(features: { props: Record<string, unknown>; ring: Xy[] }[]): unknown {
+  return {
+    type: 'FeatureCollection',
+    crs: { type: 'name', properties: { name: 'urn:ogc:def:crs:EPSG::32615' } },
+    features: features.map((f) => ({ type: 'Feature', properties: f.props, geometry: { type: 'Polygon', coordinates: [closed(f.ring)] } })),
+  };
+}
+
+const shift = (ring: Xy[], de: number, dn: number): Xy[] => ring.map(([e, n]) => [e + de, n + dn]);
+
+function sameAsNorthRidge(): unknown {
+  // North Ridge as fields-utm15n-shp.zip stores it, written again at 6 decimals (about 10 cm).
+  const ring = ringLngLat(northRidge).map(([x, y]) => [Number(x.toFixed(6)), Number(y.toFixed(6))]);
+  return { type: 'FeatureCollection', features: [geojsonFeature({ name: 'North Ridge (from the old map)' }, { type: 'Polygon', coordinates: [ring] })] };
+}
+
+function overlapsNorthRidge(): unknown {
+  // 200 m east of North Ridge: about 290 m of its 490 m width lies on that field.
+  return {
+    type: 'FeatureCollection',
+    features: [geojsonFeature({ name: 'Ridge Extension' }, { type: 'Polygon', coordinates: [ringLngLat(shift(northRidge, 200, 0))] })],
+  };
+}
+
+function bowTieField(): unknown {
+  return {
+    type: 'FeatureCollection',
+    features: [
+      geojsonFeature({ name: 'Crossed Corner' }, { type: 'Polygon', coordinates: [ringLngLat(bowTie)] }),
+      geojsonFeature({ name: 'Upper Flat' }, { type: 'Polygon', coordinates: [ringLngLat(upperFlat)] }),
+    ],
+  };
+}
+
 // ---- KML -----------------------------------------------------------------------------------
 
 const kmlRing = (ring: Xy[], close: boolean) =>
@@ -245,6 +282,15 @@ async function main(): Promise<void> {
       ...layerEntries('layers/fields-utm15n', utm),
       ...layerEntries('layers/fields-wgs84', wgs),
     ]));
+    const named = shapefile(work, 'named-fields', utmWithAttributes([
+      { props: { FIELD_NAME: 'Mill Hill', CROP: 'corn', PLOT: 'A1' }, ring: millHill },
+      { props: { FIELD_NAME: 'Hay Ground', CROP: 'hay', PLOT: 'A2' }, ring: hayGround },
+      { props: { FIELD_NAME: 'Upper Flat', CROP: 'soybean', PLOT: 'A3' }, ring: upperFlat },
+    ]), 'EPSG:32615');
+    write('named-fields-shp.zip', await zipOf(layerEntries('named-fields', named)));
+    write('same-as-north-ridge.geojson', json(sameAsNorthRidge()));
+    write('overlaps-north-ridge.geojson', json(overlapsNorthRidge()));
+    write('bow-tie-field.geojson', json(bowTieField()));
     write('no-shp.zip', await zipOf([['readme.txt', 'Field notes, no shapefile here.\n'], ['fields.dbf', utm.get('dbf')!]]));
 
     // 65 MiB of zeros deflate to about 64 KiB: more than the importer unpacks (64 MiB).

@@ -13,6 +13,12 @@ export type GeometryCheck =
   | { ok: true; geometry: MultiPolygon; areaM2: number; perimeterM: number }
   | { ok: false; code: 'invalid_geometry' | 'area_out_of_range'; message: string; repaired: MultiPolygon | null };
 
+/** Why a field of this area is not plausible, or null when it is. */
+export function areaRangeProblem(areaHa: number): string | null {
+  if (areaHa >= MIN_AREA_HA && areaHa <= MAX_AREA_HA) return null;
+  return `The field's area is ${areaHa < 1 ? areaHa.toFixed(4) : areaHa.toFixed(1)} ha; a field must be between ${MIN_AREA_HA} ha and ${MAX_AREA_HA.toLocaleString('en')} ha. Check the coordinates' order ([longitude, latitude]) and units.`;
+}
+
 export async function checkGeometry(sequelize: Sequelize, geometry: AreaGeometry, transaction?: Transaction): Promise<GeometryCheck> {
   const m = await measureBoundary(sequelize, geometry, transaction);
   if (!m.valid) {
@@ -21,14 +27,7 @@ export async function checkGeometry(sequelize: Sequelize, geometry: AreaGeometry
       : '';
     return { ok: false, code: 'invalid_geometry', message: `The boundary is not a valid shape: ${m.invalidReason}.${offer}`, repaired: m.repaired };
   }
-  const areaHa = m.areaM2 / M2_PER_HA;
-  if (areaHa < MIN_AREA_HA || areaHa > MAX_AREA_HA) {
-    return {
-      ok: false,
-      code: 'area_out_of_range',
-      message: `The field's area is ${areaHa < 1 ? areaHa.toFixed(4) : areaHa.toFixed(1)} ha; a field must be between ${MIN_AREA_HA} ha and ${MAX_AREA_HA.toLocaleString('en')} ha. Check the coordinates' order ([longitude, latitude]) and units.`,
-      repaired: null,
-    };
-  }
+  const outOfRange = areaRangeProblem(m.areaM2 / M2_PER_HA);
+  if (outOfRange) return { ok: false, code: 'area_out_of_range', message: outOfRange, repaired: null };
   return { ok: true, geometry: m.geometry, areaM2: m.areaM2, perimeterM: m.perimeterM };
 }

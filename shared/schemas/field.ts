@@ -3,6 +3,7 @@
 import { z } from 'zod';
 import { AreaGeometry } from './geojson';
 import { plainText } from './plain-text';
+import type { ImportRejection } from './field-import';
 
 export const FieldName = plainText('name', 120);
 
@@ -52,4 +53,4 @@ export type FieldFeature = {
 export type FieldCollection = { type: 'FeatureCollection'; features: FieldFeature[] };
 
 /** POST /api/farms/:farmId/fields/import answer. */
-export type ImportResult = { created: FieldFeature[]; rejected: { index: number; reason: string }[] };
+export type ImportResult = { created: FieldFeature[]; rejected: ImportRejection[] };

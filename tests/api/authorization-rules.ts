@@ -64,6 +64,7 @@ export const RULES: Record<string, Rule> = {
   'GET /api/farms/:farmId/fields': farm(EVERY),
   'POST /api/farms/:farmId/fields': farm(FARMER, 400),
   'POST /api/farms/:farmId/fields/import': farm(FARMER, 400),
+  'POST /api/farms/:farmId/fields/import/preview': farm(FARMER, 400),
   'GET /api/farms/:farmId/people': farm(PLANNERS),
   'POST /api/farms/:farmId/invitations': farm(FARMER, 400),
   'DELETE /api/farms/:farmId/invitations/:invitationId': farm(FARMER, 'not-called', 'people-invitations.test.ts'),

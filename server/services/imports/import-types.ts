@@ -1,5 +1,6 @@
 // Result types of boundary-file parsing (POST /api/farms/:farmId/fields/import).
 import type { MultiPolygon, Polygon } from 'geojson';
+import type { ImportWarning } from '../../../shared/schemas/field-import';
 
 export type ImportFormat = 'geojson' | 'shapefile' | 'kml';
 
@@ -11,10 +12,14 @@ export type ParsedBoundary = {
   geometry: Polygon | MultiPolygon;
   /** Things changed on the way in that the user may want to know (parts left out). */
   warnings?: string[];
+  /** The same things as typed values, for the preview. */
+  notes: ImportWarning[];
+  /** The feature's attributes as found in the file. */
+  properties: Record<string, unknown> | null;
 };
 
 /** A feature that did not, with the reason for a person ("feature 3: a LineString is ..."). */
-export type RejectedFeature = { index: number; rejected: string };
+export type RejectedFeature = { index: number; rejected: string; properties: Record<string, unknown> | null };
 
 /**
  * One input feature, in file order. `index` is 1-based and is the number used in messages;
@@ -41,6 +46,8 @@ export type RawFeature = {
   properties: Record<string, unknown> | null;
   /** Why the reader could not take this entry as a feature at all. */
   problem?: string;
+  /** What the reader had to assume for this feature (a layer without .prj). */
+  notes?: ImportWarning[];
 };
 
 /** What each format reader gives back. */

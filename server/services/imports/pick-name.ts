@@ -1,9 +1,8 @@
 // The field name of an imported feature, from the first name-like property that holds one.
+import { nameFromAttribute as nameFrom } from '../../../shared/feature-name';
 
 /** Property keys tried in this order, compared without regard to case. */
-export const NAME_KEYS = ['name', 'field', 'field_name', 'label', 'title', 'id'] as const;
-/** Longest name kept (the FieldName schema in shared/schemas/field.ts allows 120). */
-export const MAX_NAME_LENGTH = 120;
+export const NAME_KEYS = ['name', 'fieldname', 'field', 'field_name', 'label', 'title', 'id'] as const;
 
 /** The first non-empty string or finite number under a name-like key, trimmed; null if none. */
 export function pickName(properties: Record<string, unknown> | null): string | null {
@@ -12,11 +11,18 @@ export function pickName(properties: Record<string, unknown> | null): string | n
   for (const wanted of NAME_KEYS) {
     for (const key of keys) {
       if (key.toLowerCase() !== wanted) continue;
-      const value = properties[key];
-      const text = typeof value === 'string' ? value.replace(/\s+/g, ' ').trim()
-        : typeof value === 'number' && Number.isFinite(value) ? String(value)
-        : '';
-      if (text) return text.slice(0, MAX_NAME_LENGTH).trimEnd();
+      const name = nameFrom(properties, key);
+      if (name) return name;
+    }
+  }
+  return null;
+}
+
+/** The first key (in NAME_KEYS order) among `keys` that gives a name in at least one of `rows`. */
+export function proposeNameAttribute(keys: string[], rows: (Record<string, unknown> | null)[]): string | null {
+  for (const wanted of NAME_KEYS) {
+    for (const key of keys) {
+      if (key.toLowerCase() === wanted && rows.some((row) => nameFrom(row, key) !== null)) return key;
     }
   }
   return null;

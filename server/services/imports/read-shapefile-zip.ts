@@ -95,7 +95,8 @@ async function readLayer(zip: OpenedZip, layer: Layer): Promise<{ features: RawF
   } else {
     warnings.push(`${label} has no .dbf, so its fields have no names`);
   }
-  return { features: geometries.map((geometry, i) => ({ geometry, properties: rows[i] ?? null })), warnings };
+  const notes = prj === undefined ? [{ kind: 'no_prj_assumed_wgs84' as const, layer: layer.name }] : undefined;
+  return { features: geometries.map((geometry, i) => ({ geometry, properties: rows[i] ?? null, ...(notes ? { notes } : {}) })), warnings };
 }
 
 /** Reads all layers; a zip without a .shp is a 400 listing what it holds. */

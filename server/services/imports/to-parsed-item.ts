@@ -12,16 +12,18 @@ const PROJECTED_HINT =
 export function toParsedItem(raw: RawFeature, index: number): ParsedItem {
   const name = pickName(raw.properties);
   const label = name ? `feature ${index} ("${name}")` : `feature ${index}`;
-  if (raw.problem) return { index, rejected: `${label}: ${raw.problem}` };
+  const properties = raw.properties;
+  if (raw.problem) return { index, rejected: `${label}: ${raw.problem}`, properties };
   const normalized = normalizeGeometry(raw.geometry);
-  if (!normalized.ok) return { index, rejected: `${label}: ${normalized.reason}` };
+  if (!normalized.ok) return { index, rejected: `${label}: ${normalized.reason}`, properties };
   const checked = AreaGeometry.safeParse(normalized.geometry);
   if (!checked.success) {
     const outOfRange = checked.error.issues.some((i) => /^(longitude|latitude) must be/.test(i.message));
     const hint = outOfRange ? PROJECTED_HINT : '';
-    return { index, rejected: `${label}: ${describeIssue(normalized.geometry.type, checked.error)}${hint}` };
+    return { index, rejected: `${label}: ${describeIssue(normalized.geometry.type, checked.error)}${hint}`, properties };
   }
-  const item: ParsedBoundary = { index, name, geometry: checked.data };
+  const notes = [...(raw.notes ?? []), ...normalized.warnings.map((detail) => ({ kind: 'parts_left_out' as const, detail }))];
+  const item: ParsedBoundary = { index, name, geometry: checked.data, notes, properties };
   if (normalized.warnings.length) item.warnings = normalized.warnings.map((w) => `${label}: ${w}`);
   return item;
 }

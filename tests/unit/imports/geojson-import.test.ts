@@ -54,7 +54,7 @@ describe('GeoJSON boundary import', () => {
   it('reads a single Feature', async () => {
     const text = JSON.stringify({ type: 'Feature', properties: { NAME: 'Lone Field' }, geometry: { type: 'Polygon', coordinates: [square] } });
     const [item] = itemsOf(await parseText(text)).map(boundary);
-    expect(item).toEqual({ index: 1, name: 'Lone Field', geometry: { type: 'Polygon', coordinates: [square] } });
+    expect(item).toEqual({ index: 1, name: 'Lone Field', geometry: { type: 'Polygon', coordinates: [square] }, notes: [], properties: { NAME: 'Lone Field' } });
   });
 
   it('reads a bare Polygon, MultiPolygon and GeometryCollection of polygons', async () => {

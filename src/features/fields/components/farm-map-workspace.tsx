@@ -233,7 +233,9 @@ export function FarmMapWorkspace(props: Props) {
         {props.panelSections}
       </aside>
 
-      {importOpen ? <ImportDialog farmId={farmId} onClose={closeImport} /> : null}
+      {importOpen ? (
+        <ImportDialog farmId={farmId} units={units} tileUrl={tileUrl} tileAttribution={tileAttribution} onClose={closeImport} />
+      ) : null}
     </div>
   );
 }
