@@ -234,7 +234,7 @@ export function FarmMapWorkspace(props: Props) {
       </aside>
 
       {importOpen ? (
-        <ImportDialog farmId={farmId} units={units} tileUrl={tileUrl} tileAttribution={tileAttribution} onClose={closeImport} />
+        <ImportDialog farmId={farmId} units={units} onClose={closeImport} />
       ) : null}
     </div>
   );

@@ -18,8 +18,6 @@ import { ImportPreviewStep } from './import-preview-step';
 type Props = {
   farmId: number;
   units: Units;
-  tileUrl: string | null;
-  tileAttribution: string | null;
   onClose: () => void;
 };
 
@@ -41,7 +39,7 @@ function ImportedNotice({ result }: { result: ImportResult }) {
   );
 }
 
-export function ImportDialog({ farmId, units, tileUrl, tileAttribution, onClose }: Props) {
+export function ImportDialog({ farmId, units, onClose }: Props) {
   const titleId = useId();
   const preview = usePreviewImport(farmId);
   const importFields = useImportFields(farmId);
@@ -92,8 +90,6 @@ export function ImportDialog({ farmId, units, tileUrl, tileAttribution, onClose 
               preview={preview.data}
               existing={fields.data?.features ?? []}
               units={units}
-              tileUrl={tileUrl}
-              tileAttribution={tileAttribution}
               pending={importFields.isPending}
               onConfirm={confirm}
             />

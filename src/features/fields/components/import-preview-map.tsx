@@ -2,7 +2,7 @@
 // its number (filled when ticked, dashed when not), a repaired outline over its dashed original.
 // Loaded on demand with Leaflet, like the farm map.
 import { Fragment, useEffect, useMemo } from 'react';
-import { MapContainer, Polygon, TileLayer, Tooltip, useMap } from 'react-leaflet';
+import { MapContainer, Polygon, Tooltip, useMap } from 'react-leaflet';
 import type { PathOptions } from 'leaflet';
 import '../../../lib/leaflet-setup';
 import { geometriesBounds, geometryBounds, geometryToLatLngs } from '../../../lib/geo-leaflet';
@@ -10,6 +10,8 @@ import type { FieldFeature } from '../../../../shared/schemas/field';
 import type { PreviewFeature } from '../../../../shared/schemas/field-import';
 import type { AreaGeometry } from '../../../../shared/schemas/geojson';
 import { FIELD_COLOR, FIELD_SELECTED_COLOR, refusedStyle } from './field-style';
+import { BasemapTiles } from '../../../components/map/basemap-tiles';
+import { useBasemap } from '../../config/use-basemap';
 
 const existingStyle: PathOptions = { color: '#6b6459', weight: 1, fillColor: '#6b6459', fillOpacity: 0.12, dashArray: '2,3' };
 const tickedStyle = (focused: boolean): PathOptions => ({ color: FIELD_SELECTED_COLOR, weight: focused ? 4 : 2, fillColor: FIELD_COLOR, fillOpacity: 0.4 });
@@ -21,8 +23,6 @@ type Props = {
   /** The feature the list last asked to show; the map fits it. */
   focusIndex: number | null;
   existing: FieldFeature[];
-  tileUrl: string | null;
-  tileAttribution: string | null;
 };
 
 function FitView({ geometries, focus }: { geometries: AreaGeometry[]; focus: AreaGeometry | null }) {
@@ -43,13 +43,14 @@ function Outline({ geometry, style, label }: { geometry: AreaGeometry; style: Pa
   );
 }
 
-export default function ImportPreviewMap({ features, ticked, focusIndex, existing, tileUrl, tileAttribution }: Props) {
+export default function ImportPreviewMap({ features, ticked, focusIndex, existing }: Props) {
+  const { basemap } = useBasemap();
   const shown = useMemo(() => features.filter((f): f is PreviewFeature & { geometry: AreaGeometry } => f.geometry !== null), [features]);
   const geometries = useMemo(() => shown.map((f) => f.geometry), [shown]);
   const focus = shown.find((f) => f.index === focusIndex)?.geometry ?? null;
   return (
-    <MapContainer className="fs-map h-full w-full" center={[20, 0]} zoom={2} zoomSnap={0.25} attributionControl={tileUrl !== null}>
-      {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} maxZoom={19} /> : null}
+    <MapContainer className="fs-map h-full w-full" center={[20, 0]} zoom={2} zoomSnap={0.25} attributionControl={basemap !== null}>
+      {basemap ? <BasemapTiles basemap={basemap} /> : null}
       {existing.map((field) => (
         <Outline key={`field-${field.id}`} geometry={field.geometry} style={existingStyle} />
       ))}

@@ -15,8 +15,6 @@ type Props = {
   preview: ImportPreview;
   existing: FieldFeature[];
   units: Units;
-  tileUrl: string | null;
-  tileAttribution: string | null;
   pending: boolean;
   onConfirm: (options: ImportOptions) => void;
 };
@@ -25,7 +23,7 @@ type Props = {
 const firstTicked = (preview: ImportPreview) =>
   new Set(preview.features.filter((f) => f.geometry && !isDuplicate(f) && !isRepaired(f)).map((f) => f.index));
 
-export function ImportPreviewStep({ preview, existing, units, tileUrl, tileAttribution, pending, onConfirm }: Props) {
+export function ImportPreviewStep({ preview, existing, units, pending, onConfirm }: Props) {
   const [nameAttribute, setNameAttribute] = useState<string | null>(preview.proposedNameAttribute);
   const [ticked, setTicked] = useState<ReadonlySet<number>>(() => firstTicked(preview));
   const [focusIndex, setFocusIndex] = useState<number | null>(null);
@@ -67,8 +65,6 @@ export function ImportPreviewStep({ preview, existing, units, tileUrl, tileAttri
             ticked={ticked}
             focusIndex={focusIndex}
             existing={existing}
-            tileUrl={tileUrl}
-            tileAttribution={tileAttribution}
           />
         </Suspense>
       </div>
