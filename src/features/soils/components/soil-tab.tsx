@@ -9,6 +9,7 @@ import type { Separates, TextureClass } from '../../../../shared/erosion/texture
 import { useMe } from '../../auth/api/get-me';
 import { useSoilSamples } from '../api/get-soil-samples';
 import { useSoilSummary } from '../api/get-soil-summary';
+import { WaitingChecksNotice } from '../offline/waiting-checks-notice';
 import { FeelTestWizard } from './feel-test-wizard';
 import { FieldSoilMapUnits } from './field-soil-map-units';
 import { SampleForm } from './sample-form';
@@ -60,6 +61,7 @@ export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
             </div>
           ) : null}
         </div>
+        <WaitingChecksNotice />
         {adding === 'lab' ? <SampleForm fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
         {adding === 'feel' ? <FeelTestWizard fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
         {samples.isPending ? (
