@@ -63,7 +63,8 @@ export default defineConfig({
               cacheName: API_CACHE,
               networkTimeoutSeconds: 8,
               expiration: { maxEntries: 500, maxAgeSeconds: 30 * DAY_S },
-              cacheableResponse: { statuses: [200] },
+              // 404 too: "no plan for this season yet" is an answer the screens show offline as they did online.
+              cacheableResponse: { statuses: [200, 404] },
             },
           },
         ],
