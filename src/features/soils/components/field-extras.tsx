@@ -73,7 +73,7 @@ function PhotoInput({ photo, onChange }: { photo: File | null; onChange: (f: Fil
       </label>
       {photo ? (
         <p className="num text-sm text-ink-soft">
-          {photo.name}, {fmt(photo.size / MB, 1)} MB
+          {photo.name}, {photo.size < MB / 10 ? `${fmt(photo.size / 1024, 0)} kB` : `${fmt(photo.size / MB, 1)} MB`}
         </p>
       ) : null}
       {tooBig ? <p className="text-sm text-alert">A photo may be up to {PHOTO_MAX_BYTES / MB} MB; take a smaller one.</p> : null}
