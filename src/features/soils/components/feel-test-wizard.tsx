@@ -9,6 +9,7 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { DEFAULT_FEEL_KEY, textureByFeel, type FeelClass } from '../../../../shared/erosion/texture';
 import type { FeelGrit, SoilSampleCreate } from '../../../../shared/schemas/soils';
+import { useMe } from '../../auth/api/get-me';
 import { useKeepSoilCheck } from '../offline/waiting-checks-queries';
 import { FieldExtrasInputs, photoTooBig, type FieldExtras } from './field-extras';
 import { fmt } from './format-soil';
@@ -82,6 +83,7 @@ export function FeelTestWizard({ fieldId, onDone }: { fieldId: number; onDone: (
   const [answers, setAnswers] = useState<Answers>({});
   const [typedCm, setTypedCm] = useState('');
   const keep = useKeepSoilCheck();
+  const userId = useMe().data?.id;
   const [extras, setExtras] = useState<FieldExtras>({ photo: null, position: null });
   const form = useForm<SampleFormValues, unknown, SoilSampleCreate>({ resolver: sampleResolver, defaultValues: { kind: 'feel' } });
 
@@ -107,10 +109,11 @@ export function FeelTestWizard({ fieldId, onDone }: { fieldId: number; onDone: (
   }, [answers, form]);
 
   const save = form.handleSubmit((checked) => {
-    if (!result?.ok || photoTooBig(extras)) return;
+    if (!result?.ok || photoTooBig(extras) || userId === undefined) return;
     const { photo, position } = extras;
     keep.mutate(
       {
+        userId,
         fieldId,
         title: `Feel test, ${result.value.textureClass}${checked.label ? ` (${checked.label})` : ''}`,
         input: { ...checked, position, clientKey: crypto.randomUUID() },

@@ -27,7 +27,8 @@ type Adding = 'lab' | 'feel' | null;
 
 export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
   const canEdit = role === 'farmer' || role === 'advisor';
-  const units = useMe().data?.units ?? 'ha';
+  const me = useMe().data;
+  const units = me?.units ?? 'ha';
   const samples = useSoilSamples(fieldId);
   const summary = useSoilSummary(fieldId);
   const [adding, setAdding] = useState<Adding>(null);
@@ -61,7 +62,7 @@ export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
             </div>
           ) : null}
         </div>
-        <WaitingChecksNotice />
+        {me ? <WaitingChecksNotice userId={me.id} /> : null}
         {adding === 'lab' ? <SampleForm fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
         {adding === 'feel' ? <FeelTestWizard fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
         {samples.isPending ? (

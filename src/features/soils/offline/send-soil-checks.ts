@@ -27,12 +27,12 @@ export type SendResult = { sentFieldIds: number[] };
 
 let running: Promise<SendResult> | null = null;
 
-/** Tries every waiting check once; the fields that got a check, so their screens can refresh. */
-export function sendWaitingChecks(): Promise<SendResult> {
+/** Tries every waiting check of the signed-in person once; the fields that got a check, so their screens can refresh. */
+export function sendWaitingChecks(userId: number): Promise<SendResult> {
   running ??= (async () => {
     const sentFieldIds: number[] = [];
     try {
-      for (const check of await listChecks()) {
+      for (const check of await listChecks(userId)) {
         if (check.state !== 'waiting') continue;
         try {
           await sendOne(check);

@@ -1,6 +1,8 @@
 // Soil checks made in the field wait here, in the browser's IndexedDB (idb-keyval), until the
 // server has them: the check as the API takes it, its photo as a Blob, and where sending got to.
 // Each check carries a key made once (clientKey); the server stores a check sent twice once.
+// A check belongs to the person who made it: only their session sends it or lists it, so a
+// phone shared by two people never sends one's check as the other's.
 import { createStore, del, entries, get, set } from 'idb-keyval';
 import type { SoilSampleCreate } from '../../../../shared/schemas/soils';
 
@@ -9,6 +11,8 @@ const store = createStore('fieldshed-soil-checks', 'waiting');
 export type WaitingCheck = {
   /** The check's clientKey, also its key in the store. */
   key: string;
+  /** Who made it. */
+  userId: number;
   fieldId: number;
   /** What the person sees in the list ("Feel test, silty clay loam"). */
   title: string;
@@ -28,9 +32,9 @@ export async function keepCheck(check: Omit<WaitingCheck, 'key' | 'sampleId' | '
   return kept;
 }
 
-/** Every check still here, oldest first. */
-export async function listChecks(): Promise<WaitingCheck[]> {
-  const all = (await entries<string, WaitingCheck>(store)).map(([, c]) => c);
+/** The person's checks still here, oldest first. */
+export async function listChecks(userId: number): Promise<WaitingCheck[]> {
+  const all = (await entries<string, WaitingCheck>(store)).map(([, c]) => c).filter((c) => c.userId === userId);
   return all.sort((a, b) => a.madeAt.localeCompare(b.madeAt));
 }
 

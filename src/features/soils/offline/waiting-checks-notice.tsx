@@ -6,9 +6,9 @@ import { useSendWaitingChecks, useSettleFailedCheck, useWaitingChecks } from './
 
 const checks = (n: number) => `${n} soil ${n === 1 ? 'check' : 'checks'}`;
 
-export function WaitingChecksNotice() {
-  const all = useWaitingChecks().data ?? [];
-  const send = useSendWaitingChecks();
+export function WaitingChecksNotice({ userId }: { userId: number }) {
+  const all = useWaitingChecks(userId).data ?? [];
+  const send = useSendWaitingChecks(userId);
   const settle = useSettleFailedCheck();
   const waiting = all.filter((c) => c.state === 'waiting');
   const failed = all.filter((c) => c.state === 'failed');

@@ -7,14 +7,14 @@ import { invalidateFieldSoils } from '../api/soil-query-keys';
 import { keepCheck, listChecks, changeCheck, dropCheck, type WaitingCheck } from './soil-check-outbox';
 import { sendWaitingChecks } from './send-soil-checks';
 
-export const getWaitingChecksQueryOptions = () =>
-  queryOptions({ queryKey: ['soil-checks', 'waiting'], queryFn: listChecks, networkMode: 'always', staleTime: Infinity });
+export const getWaitingChecksQueryOptions = (userId: number) =>
+  queryOptions({ queryKey: ['soil-checks', 'waiting', userId], queryFn: () => listChecks(userId), networkMode: 'always', staleTime: Infinity });
 
-export const useWaitingChecks = () => useQuery(getWaitingChecksQueryOptions());
+export const useWaitingChecks = (userId: number) => useQuery(getWaitingChecksQueryOptions(userId));
 
-async function sendAndRefresh(queryClient: QueryClient): Promise<void> {
-  const { sentFieldIds } = await sendWaitingChecks();
-  await queryClient.invalidateQueries({ queryKey: getWaitingChecksQueryOptions().queryKey });
+async function sendAndRefresh(queryClient: QueryClient, userId: number): Promise<void> {
+  const { sentFieldIds } = await sendWaitingChecks(userId);
+  await queryClient.invalidateQueries({ queryKey: getWaitingChecksQueryOptions(userId).queryKey });
   for (const fieldId of new Set(sentFieldIds)) {
     await invalidateFieldSoils(queryClient, fieldId);
     await queryClient.invalidateQueries({ queryKey: getSoilPhotosQueryOptions(fieldId).queryKey });
@@ -22,9 +22,9 @@ async function sendAndRefresh(queryClient: QueryClient): Promise<void> {
 }
 
 /** Sends what waits (a no-op when nothing does). */
-export function useSendWaitingChecks(): () => Promise<void> {
+export function useSendWaitingChecks(userId: number): () => Promise<void> {
   const queryClient = useQueryClient();
-  return useCallback(() => sendAndRefresh(queryClient), [queryClient]);
+  return useCallback(() => sendAndRefresh(queryClient, userId), [queryClient, userId]);
 }
 
 /** Keeps a new check in the browser first, then tries to send it at once. */
@@ -34,8 +34,8 @@ export function useKeepSoilCheck() {
     networkMode: 'always',
     mutationFn: async (check: Parameters<typeof keepCheck>[0]) => {
       await keepCheck(check);
-      await queryClient.invalidateQueries({ queryKey: getWaitingChecksQueryOptions().queryKey });
-      void sendAndRefresh(queryClient);
+      await queryClient.invalidateQueries({ queryKey: getWaitingChecksQueryOptions(check.userId).queryKey });
+      void sendAndRefresh(queryClient, check.userId);
     },
   });
 }
@@ -48,8 +48,8 @@ export function useSettleFailedCheck() {
     mutationFn: async ({ check, action }: { check: WaitingCheck; action: 'retry' | 'discard' }) => {
       if (action === 'discard') await dropCheck(check.key);
       else await changeCheck(check.key, { state: 'waiting', reason: null });
-      await queryClient.invalidateQueries({ queryKey: getWaitingChecksQueryOptions().queryKey });
-      if (action === 'retry') await sendAndRefresh(queryClient);
+      await queryClient.invalidateQueries({ queryKey: getWaitingChecksQueryOptions(check.userId).queryKey });
+      if (action === 'retry') await sendAndRefresh(queryClient, check.userId);
     },
   });
 }
