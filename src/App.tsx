@@ -4,6 +4,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { Loading } from './components/ui/spinner';
 import { RequireAuth } from './features/auth/components/require-auth';
+import { SoilCheckSender } from './features/soils/offline/soil-check-sender';
 import { paths } from './lib/paths';
 import { queryClient } from './lib/query-client';
 import { FarmsPage } from './pages/farms-page';
@@ -71,6 +72,7 @@ export function App() {
   return (
     <QueryClientProvider client={queryClient}>
       <RouterProvider router={router} />
+      <SoilCheckSender />
     </QueryClientProvider>
   );
 }

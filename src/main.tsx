@@ -4,6 +4,7 @@ import '@fontsource-variable/literata';
 import '@fontsource-variable/inter';
 import './index.css';
 import { App } from './App';
+import { registerServiceWorker } from './lib/service-worker';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html must contain <div id="root">');
@@ -13,3 +14,5 @@ createRoot(root).render(
     <App />
   </StrictMode>,
 );
+
+registerServiceWorker();

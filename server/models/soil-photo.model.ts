@@ -17,6 +17,8 @@ export class SoilPhoto extends Model<InferAttributes<SoilPhoto>, InferCreationAt
   declare height: number;
   declare thumbnailWidth: number;
   declare thumbnailHeight: number;
+  /** The browser's key for this photo (a UUID): a photo sent twice is stored once. */
+  declare clientKey: string | null;
   declare createdBy: number | null;
   declare createdAt: CreationOptional<Date>;
   /** Loaded only when included. */
@@ -38,6 +40,7 @@ export class SoilPhoto extends Model<InferAttributes<SoilPhoto>, InferCreationAt
         height: required(DataTypes.INTEGER),
         thumbnailWidth: required(DataTypes.INTEGER),
         thumbnailHeight: required(DataTypes.INTEGER),
+        clientKey: DataTypes.UUID,
         createdBy: DataTypes.INTEGER,
         createdAt: DataTypes.DATE,
       },

@@ -30,6 +30,11 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
   declare bulkDensityMgM3: number | null;
   declare cecCmolKg: number | null;
   declare espPct: number | null;
+  /** GeoJSON Point in WGS84 where the check was taken (Sequelize adds a `crs` member when reading). */
+  declare position: { type: 'Point'; coordinates: number[] } | null;
+  declare positionAccuracyM: number | null;
+  /** The browser's key for this check (a UUID): a check sent twice is stored once. */
+  declare clientKey: string | null;
   declare feelBalls: boolean | null;
   declare feelRibbonCm: number | null;
   declare feelGrit: FeelGrit | null;
@@ -72,6 +77,9 @@ export class SoilSample extends Model<InferAttributes<SoilSample>, InferCreation
         bulkDensityMgM3: double(),
         cecCmolKg: double(),
         espPct: double(),
+        position: { type: DataTypes.GEOMETRY('POINT', 4326), allowNull: true },
+        positionAccuracyM: double(),
+        clientKey: DataTypes.UUID,
         feelBalls: DataTypes.BOOLEAN,
         feelRibbonCm: double(),
         feelGrit: DataTypes.TEXT,

@@ -25,6 +25,7 @@ export function presentSample(s: SoilSample): SoilSampleBody {
     bulkDensity: s.bulkDensityMgM3,
     cecCmolPerKg: s.cecCmolKg,
     espPct: s.espPct,
+    position: s.position ? { lng: s.position.coordinates[0], lat: s.position.coordinates[1], accuracyM: s.positionAccuracyM ?? 0 } : null,
     feelTest: s.kind === 'feel' ? { balls: s.feelBalls ?? false, ribbonCm: s.feelRibbonCm, feel: s.feelGrit, ribbonClass: s.ribbonClass } : null,
     textureClass: s.textureClass,
     textureSource: s.textureSource,

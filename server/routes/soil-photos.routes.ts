@@ -18,11 +18,12 @@ export function soilPhotosRoutes(deps: { sequelize: Sequelize; storage: FileStor
     res.json(presentPhotos(await listPhotos(fieldIdOf(res))));
   });
   r.post('/fields/:fieldId/soil-photos', loadFieldMembership, editsSoils, photoUpload, requireFile('the photo'), async (req, res) => {
-    const body = (req.body ?? {}) as { caption?: unknown; sampleId?: unknown };
+    const body = (req.body ?? {}) as { caption?: unknown; sampleId?: unknown; clientKey?: unknown };
     const photo = await uploadPhoto(deps, actorOf(req), fieldIdOf(res), {
       buffer: req.file!.buffer,
       caption: typeof body.caption === 'string' ? body.caption : undefined,
       sampleId: typeof body.sampleId === 'string' ? body.sampleId : undefined,
+      clientKey: typeof body.clientKey === 'string' ? body.clientKey : undefined,
     });
     res.status(201).json(presentPhoto(photo));
   });

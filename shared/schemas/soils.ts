@@ -25,6 +25,23 @@ export type FeelGrit = z.infer<typeof FeelGrit>;
 export const BufferMethod = z.enum(['smp', 'mehlich'], { error: "bufferMethod must be 'smp' or 'mehlich'" });
 export const BUFFER_METHOD_NAMES: Record<z.infer<typeof BufferMethod>, string> = { smp: 'SMP buffer', mehlich: 'Mehlich buffer' };
 
+/** A GPS point in WGS84 degrees with the accuracy the device reported (radius, m). */
+export const FieldPosition = z.object(
+  {
+    lng: num('position.lng', -180, 180, '°'),
+    lat: num('position.lat', -90, 90, '°'),
+    accuracyM: num('position.accuracyM', 0, 100_000, ' m'),
+  },
+  { error: 'position must be { lng, lat, accuracyM }' },
+);
+export type FieldPosition = z.infer<typeof FieldPosition>;
+
+/**
+ * A key the browser makes once per soil check (a UUID): a check sent again, after an answer that
+ * never arrived, is stored once and the stored one is answered.
+ */
+export const ClientKey = z.uuid({ error: 'clientKey must be a UUID' });
+
 const common = {
   label: opt(z.string().trim().max(120, 'label must be at most 120 characters')),
   sampledOn: opt(z.iso.date({ error: 'sampledOn must be a date written YYYY-MM-DD' })),
@@ -45,6 +62,8 @@ const common = {
   cecCmolPerKg: opt(num('cecCmolPerKg', 0, 300, ' cmolc/kg')),
   /** Exchangeable sodium percentage. */
   espPct: opt(num('espPct', 0, 100, ' %')),
+  /** Where the check was taken: a GPS point ([lng, lat] order as GeoJSON) and how sure the phone was of it. */
+  position: opt(FieldPosition),
 };
 
 const separates = {
@@ -93,8 +112,9 @@ function checkFeel(s: { balls?: boolean; ribbonCm?: number | null; feel?: FeelGr
   else if (s.ribbonCm > 0 && s.feel == null) ctx.addIssue({ code: 'custom', path: ['feel'], message: "feel is needed when the soil ribbons: 'gritty', 'smooth' or 'neither'" });
 }
 
-export const LabSampleInput = z.object({ kind: z.literal('lab'), ...common, ...separates });
-export const FeelSampleInput = z.object({ kind: z.literal('feel'), ...common, ...feel });
+const createOnly = { clientKey: ClientKey.optional() };
+export const LabSampleInput = z.object({ kind: z.literal('lab'), ...common, ...separates, ...createOnly });
+export const FeelSampleInput = z.object({ kind: z.literal('feel'), ...common, ...feel, ...createOnly });
 
 /** POST /api/fields/:fieldId/soil-samples: lab results or a feel test. */
 export const SoilSampleCreate = z
@@ -141,6 +161,7 @@ export type SoilSample = {
   bulkDensity: number | null;
   cecCmolPerKg: number | null;
   espPct: number | null;
+  position: FieldPosition | null;
   feelTest: { balls: boolean; ribbonCm: number | null; feel: FeelGrit | null; ribbonClass: string | null } | null;
   textureClass: string | null;
   textureSource: string | null;

@@ -1,5 +1,5 @@
 // The bar across every signed-in screen: product name, the farm in view, the quick-estimate
-// link and a slot for the user menu.
+// link and a slot for the user menu. On a phone the links and the menu share one row that scrolls sideways.
 import type { ReactNode } from 'react';
 import type { Role } from '../../shared/schemas/auth';
 import { Link, NavLink, useMatch } from 'react-router-dom';
@@ -39,7 +39,7 @@ export function AppHeader({ farmName, screen, role, menu }: Props) {
           </>
         ) : null}
       </nav>
-      <div className="ml-auto flex flex-wrap items-center gap-x-2 gap-y-2">
+      <div className="ml-auto flex flex-wrap items-center gap-x-2 gap-y-2 max-sm:-mx-4 max-sm:w-[calc(100%+2rem)] max-sm:flex-nowrap max-sm:overflow-x-auto max-sm:whitespace-nowrap max-sm:px-4 max-sm:pb-1">
         {farmId && /^\d+$/.test(farmId) ? (
           <>
             <NavLink to={paths.farmMap.getHref(farmId)} end data-testid="nav-farm-map" className={navClass}>

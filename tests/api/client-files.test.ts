@@ -29,6 +29,9 @@ beforeAll(() => {
   writeFileSync(path.join(dist, 'assets/app-Ab12Cd34.js.gz'), gzipSync(script));
   writeFileSync(path.join(dist, 'assets/font-Zz99.woff2'), Buffer.from([0x77, 0x4f, 0x46, 0x32]));
   writeFileSync(path.join(dist, 'icon.svg'), '<svg xmlns="http://www.w3.org/2000/svg"/>');
+  writeFileSync(path.join(dist, 'sw.js'), script);
+  writeFileSync(path.join(dist, 'sw.js.br'), brotliCompressSync(script));
+  writeFileSync(path.join(dist, 'manifest.webmanifest'), JSON.stringify({ name: 'Fieldshed', start_url: '/farms' }));
   sequelize = createSequelize(inject('databaseUrl'));
   initModels(sequelize);
   app = createApp({ sequelize, config: loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'client-files-test' }), clientDir: dist });
@@ -68,6 +71,20 @@ describe('client files', () => {
     expect(font.headers['cache-control']).toBe('public, max-age=31536000, immutable');
     const icon = await request(app).get('/icon.svg').set('Accept-Encoding', 'br');
     expect(icon.headers['cache-control']).toBe('no-cache');
+  });
+
+  // Service Workers (W3C): a worker's scope is its script's folder, and the browser checks the script for a new
+  // version on navigation; a long cache on it would keep an old app running.
+  it('serves the service worker from the root as JavaScript, revalidated every time, and the web app manifest', async () => {
+    const sw = await request(app).get('/sw.js').set('Accept-Encoding', 'br');
+    expect(sw.status).toBe(200);
+    expect(sw.headers['content-type']).toMatch(/javascript/);
+    expect(sw.headers['cache-control']).toBe('no-cache');
+    expect(sw.text).toBe(script);
+    const manifest = await request(app).get('/manifest.webmanifest');
+    expect(manifest.headers['content-type']).toMatch(/^application\/manifest\+json/);
+    expect(manifest.headers['cache-control']).toBe('no-cache');
+    expect(JSON.parse(manifest.text).start_url).toBe('/farms');
   });
 
   it('answers client-side routes with the app shell and never reads outside the build', async () => {

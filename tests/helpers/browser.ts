@@ -1,6 +1,6 @@
 // Debian's Chromium driven by playwright-core: never a
 // downloaded browser. The app under test is the real build in dist/ on an ephemeral port.
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type BrowserContextOptions } from 'playwright-core';
 import { existsSync } from 'node:fs';
 import type { Server } from 'node:http';
 import type { Express } from 'express';
@@ -71,12 +71,14 @@ export async function startBrowserApp(options: { withJobs?: boolean; env?: Recor
 }
 
 /**
- * A page signed in through the sign-in screen. `errors` collects script errors and 5xx answers;
+ * A page signed in through the sign-in screen (desktop size unless `context` says otherwise). `errors` collects script errors and 5xx answers;
  * 4xx answers are part of the API (401 signed out, 404 "not set yet") and Chromium logs each as
  * a console error, so those are left out.
  */
-export async function signInPage(browser: Browser, baseUrl: string, email: string, password: string) {
-  const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+export async function signInPage(browser: Browser, baseUrl: string, email: string, password: string, context: BrowserContextOptions = {}) {
+  // Without the service worker unless a test asks for it: the other tests read the server's own answers
+  // (and page.route sees every request, which it does not for requests a service worker answers).
+  const page = await browser.newPage({ viewport: { width: 1280, height: 900 }, serviceWorkers: 'block', ...context });
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(e.message));
   page.on('console', (m) => m.type() === 'error' && !/status of 4\d\d/.test(m.text()) && errors.push(m.text()));

@@ -1,8 +1,9 @@
 // Soil profile photos: the type told from content (JPEG, PNG, WebP), a thumbnail made, both
 // files stored under server-made keys; a row that cannot be written leaves no file behind.
 // Photos are evidence for the person, not an input of any assessment.
-import type { Sequelize } from 'sequelize';
-import { badRequest, invalid, notFound, unsupportedType } from '../../lib/http-error';
+import { UniqueConstraintError, type Sequelize } from 'sequelize';
+import { ClientKey } from '../../../shared/schemas/soils';
+import { badRequest, conflict, invalid, notFound, unsupportedType } from '../../lib/http-error';
 import { Field, SoilPhoto, SoilSample } from '../../models';
 import { recordEvent } from '../audit';
 import { newKey, type FileStorage } from '../storage/file-storage';
@@ -26,13 +27,33 @@ async function sampleOfField(fieldId: number, sampleId: string | undefined): Pro
   return sample.id;
 }
 
+/** The photo stored earlier under this browser key, if any; a key used on another field is refused. */
+async function photoWithKey(fieldId: number, clientKey: string | null): Promise<SoilPhoto | null> {
+  if (!clientKey) return null;
+  const earlier = await SoilPhoto.findOne({ where: { clientKey } });
+  if (earlier && earlier.fieldId !== fieldId) throw conflict('client_key_used', 'clientKey was already used for a photo of another field: make a new key for each photo.');
+  return earlier;
+}
+
+/** The optional multipart clientKey part, checked as the JSON routes check it. */
+function clientKeyOf(raw: string | undefined): string | null {
+  if (raw === undefined || raw === '') return null;
+  const parsed = ClientKey.safeParse(raw);
+  if (!parsed.success) throw badRequest('invalid_input', 'clientKey: clientKey must be a UUID', { issues: [{ path: 'clientKey', message: 'clientKey must be a UUID' }] });
+  return parsed.data;
+}
+
+/** Stores a photo; with a clientKey, a photo already stored under it is answered instead (a resend after a lost answer). */
 export async function uploadPhoto(
   deps: Deps,
   actor: { userId: number },
   fieldId: number,
-  input: { buffer: Buffer; caption?: string; sampleId?: string },
+  input: { buffer: Buffer; caption?: string; sampleId?: string; clientKey?: string },
 ): Promise<SoilPhoto> {
   const { sequelize, storage } = deps;
+  const clientKey = clientKeyOf(input.clientKey);
+  const earlier = await photoWithKey(fieldId, clientKey);
+  if (earlier) return earlier;
   if (input.buffer.length === 0) throw badRequest('empty_file', 'The file is empty (0 bytes): attach a JPEG, PNG or WebP photo.');
   const type = detectImageType(input.buffer);
   if (!type) throw unsupportedType('A soil photo must be a JPEG, PNG or WebP image; this file is none of those (its content was checked, not its name).');
@@ -50,7 +71,7 @@ export async function uploadPhoto(
       const photo = await SoilPhoto.create(
         {
           fieldId, sampleId, caption, imageKey, thumbnailKey, contentType: type.mime, byteSize: input.buffer.length,
-          width: thumb.width, height: thumb.height, thumbnailWidth: thumb.thumbnailWidth, thumbnailHeight: thumb.thumbnailHeight, createdBy: actor.userId,
+          width: thumb.width, height: thumb.height, thumbnailWidth: thumb.thumbnailWidth, thumbnailHeight: thumb.thumbnailHeight, clientKey, createdBy: actor.userId,
         },
         { transaction: t },
       );
@@ -61,6 +82,8 @@ export async function uploadPhoto(
   } catch (e) {
     // No orphan files when the row could not be written.
     await Promise.all([storage.remove(imageKey), storage.remove(thumbnailKey)]);
+    const winner = e instanceof UniqueConstraintError ? await photoWithKey(fieldId, clientKey) : null;
+    if (winner) return winner;
     throw e;
   }
 }

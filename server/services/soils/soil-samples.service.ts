@@ -1,7 +1,7 @@
 // Create, change and remove soil samples: one transaction each, version check on change
 // (409 when stale), derived texture and drainage stored with the row, an audit event; then the
 // field's assessments are refreshed, since its soil figures changed.
-import type { Sequelize, Transaction } from 'sequelize';
+import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import { SoilSampleCreate, type SoilSampleUpdate } from '../../../shared/schemas/soils';
 import { badRequest, conflict, notFound } from '../../lib/http-error';
 import { Field, SoilSample } from '../../models';
@@ -52,6 +52,8 @@ function valuesOf(input: SoilSampleCreate) {
     bulkDensityMgM3: input.bulkDensity ?? null,
     cecCmolKg: input.cecCmolPerKg ?? null,
     espPct: input.espPct ?? null,
+    position: input.position ? { type: 'Point' as const, coordinates: [input.position.lng, input.position.lat] } : null,
+    positionAccuracyM: input.position?.accuracyM ?? null,
     feelBalls: feel ? feel.balls : null,
     feelRibbonCm: feel ? (feel.ribbonCm ?? null) : null,
     feelGrit: feel ? (feel.feel ?? null) : null,
@@ -67,7 +69,7 @@ function valuesOf(input: SoilSampleCreate) {
 /** Stores one checked sample inside the caller's transaction. */
 export async function insertSample(actor: Actor, field: SampleField, input: SoilSampleCreate, transaction: Transaction): Promise<SoilSample> {
   const values = valuesOf(input);
-  const sample = await SoilSample.create({ ...values, fieldId: field.id, createdBy: actor.userId, updatedBy: actor.userId }, { transaction });
+  const sample = await SoilSample.create({ ...values, clientKey: input.clientKey ?? null, fieldId: field.id, createdBy: actor.userId, updatedBy: actor.userId }, { transaction });
   await recordEvent(
     { userId: actor.userId, farmId: field.farmId, entity: 'soil_sample', entityId: sample.id, action: 'created', detail: { fieldId: field.id, kind: values.kind, textureClass: values.textureClass } },
     transaction,
@@ -75,12 +77,35 @@ export async function insertSample(actor: Actor, field: SampleField, input: Soil
   return sample;
 }
 
+/** The check stored earlier under this browser key, if any; a key already used on another field is refused. */
+async function sampleWithKey(fieldId: number, clientKey: string): Promise<SoilSample | null> {
+  const earlier = await SoilSample.findOne({ where: { clientKey }, include: [withEditor] });
+  if (earlier && earlier.fieldId !== fieldId) throw conflict('client_key_used', 'clientKey was already used for a soil check of another field: make a new key for each check.');
+  return earlier;
+}
+
+/**
+ * Stores a soil check. With a clientKey, a check already stored under that key is answered
+ * instead of storing it again (a phone resending after a lost answer, or two sends racing: the
+ * unique key lets one insert win and the other read it).
+ */
 export async function createSample(sequelize: Sequelize, actor: Actor, fieldId: number, input: SoilSampleCreate): Promise<SoilSample> {
-  const { sample, field } = await sequelize.transaction(async (t) => {
-    const field = await sampleFieldOf(fieldId, t);
-    const made = await insertSample(actor, field, input, t);
-    return { sample: await made.reload({ include: [withEditor], transaction: t }), field };
-  });
+  const key = input.clientKey;
+  const earlier = key ? await sampleWithKey(fieldId, key) : null;
+  if (earlier) return earlier;
+  let stored: { sample: SoilSample; field: SampleField };
+  try {
+    stored = await sequelize.transaction(async (t) => {
+      const field = await sampleFieldOf(fieldId, t);
+      const made = await insertSample(actor, field, input, t);
+      return { sample: await made.reload({ include: [withEditor], transaction: t }), field };
+    });
+  } catch (e) {
+    const winner = key && e instanceof UniqueConstraintError ? await sampleWithKey(fieldId, key) : null;
+    if (winner) return winner;
+    throw e;
+  }
+  const { sample, field } = stored;
   await afterInputsChange({ sequelize }, { kind: 'soils', farmId: field.farmId, fieldIds: [field.id] }, actor);
   return sample;
 }

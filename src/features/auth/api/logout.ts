@@ -1,6 +1,7 @@
 // POST /api/auth/logout
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { forgetCachedAnswers } from '../../../lib/service-worker';
 import { getMeQueryOptions } from './get-me';
 
 export async function logout(): Promise<void> {
@@ -12,6 +13,7 @@ export function useLogout() {
   return useMutation({
     mutationFn: logout,
     onSettled: () => {
+      void forgetCachedAnswers();
       queryClient.clear();
       queryClient.setQueryData(getMeQueryOptions().queryKey, null);
     },

@@ -1,6 +1,7 @@
 // The priority board as a table (TanStack Table): rank from the server's order, every figure
 // with its unit, sortable by any column, filtered by name, risk class, problem clay and gaps.
-// Clicking a row picks the field on the map; its name opens the Field screen.
+// Clicking a row picks the field on the map; its name opens the Field screen. On a phone the
+// rows are cards (board-cards.tsx) with an order picker in place of the column headers.
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import {
@@ -22,6 +23,9 @@ import { formatArea } from '../../../lib/units';
 import { formatFigure } from '../../../lib/format-figure';
 import { lossFigure, runoffFigure, tonnesFigure, type Figure } from '../../../lib/loss-units';
 import { RiskBadge } from '../../../components/risk/risk-badge';
+import { useNarrowScreen } from '../../../lib/use-narrow-screen';
+import { BoardCards } from './board-cards';
+import { BoardReasons } from './board-reasons';
 import { HIDDEN_IN_TREATMENTS_VIEW, treatmentColumns, type BoardTreatments } from './treatment-columns';
 
 export type RankedRow = BoardRow & { rank: number };
@@ -38,23 +42,15 @@ function FigureCell({ figure, testId }: { figure: Figure | null; testId?: string
   );
 }
 
-/** Under each row, in words: why it ranks where it does, and what its estimate still waits for. */
-function Reasons({ row }: { row: BoardRow }) {
-  return (
-    <p className="flex flex-wrap gap-x-3 gap-y-0.5 text-ink-soft">
-      <span>
-        <span className="font-semibold text-ink">Why: </span>
-        {row.reasons.length ? row.reasons.join(' · ') : row.riskClass ? 'no strong driver' : 'not ranked until the missing inputs are in'}
-      </span>
-      {row.gaps.length ? (
-        <span className="text-caution">
-          <span className="font-semibold">Missing: </span>
-          {row.gaps.map((g) => g.message).join(' · ')}
-        </span>
-      ) : null}
-    </p>
-  );
-}
+/** The phone's order picker: the board's own ranking, or one column. */
+const ORDERS = [
+  { value: '', label: 'Rank (A/T, then soil lost)' },
+  { value: 'aOverT:desc', label: 'A/T, highest first' },
+  { value: 'soilLoss:desc', label: 'Soil loss A, highest first' },
+  { value: 'tonnes:desc', label: 'Soil lost a year, most first' },
+  { value: 'runoff:desc', label: 'Storm runoff, most first' },
+  { value: 'field:asc', label: 'Field name, A to Z' },
+];
 
 const riskFilter: FilterFn<RankedRow> = (row, _id, value: string) =>
   !value || (value === 'not-assessed' ? row.original.riskClass === null : row.original.riskClass?.key === value);
@@ -222,6 +218,8 @@ export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showF
   const gapsOnly = Boolean(table.getColumn('gaps')?.getFilterValue());
   const shown = table.getRowModel().rows;
   const columnCount = table.getVisibleLeafColumns().length;
+  const narrow = useNarrowScreen();
+  const order = sorting[0] ? `${sorting[0].id}:${sorting[0].desc ? 'desc' : 'asc'}` : '';
 
   return (
     <div className="flex min-w-0 flex-col gap-2">
@@ -272,100 +270,124 @@ export function BoardTable({ rows, units, lossUnits, selectedId, onSelect, showF
           />
           Missing inputs only
         </label>
+        {narrow ? (
+          <label className="flex flex-col gap-1 font-medium">
+            Order
+            <select
+              value={order}
+              onChange={(e) => {
+                const [id, dir] = e.target.value.split(':');
+                setSorting(id ? [{ id, desc: dir === 'desc' }] : []);
+              }}
+              className="rounded-md border border-ink-faint bg-white/70 px-2 py-1 text-base"
+              data-testid="board-order"
+            >
+              {ORDERS.map((o) => (
+                <option key={o.value} value={o.value}>
+                  {o.label}
+                </option>
+              ))}
+            </select>
+          </label>
+        ) : null}
         <p className="num pb-1 text-ink-soft" aria-live="polite">
           {shown.length} of {rows.length} fields
         </p>
       </div>
-      <div className="overflow-x-auto rounded-md border border-paper-edge bg-white/40">
-        <table className="w-full border-collapse text-left text-sm" data-testid="board-table">
-          <caption className="sr-only">Fields ranked by A/T, then soil lost a year</caption>
-          <thead>
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id} className="border-b border-ink-faint bg-paper-deep/60 text-ink-soft">
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th
-                      key={h.id}
-                      scope="col"
-                      className="px-1.5 py-1.5 align-bottom font-medium"
-                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                    >
-                      {h.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={h.column.getToggleSortingHandler()}
-                          className="inline-flex items-center gap-1 text-left font-medium hover:text-ink"
-                          data-testid={`board-sort-${h.column.id}`}
-                          title="Sort by this column"
-                        >
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true" className="text-xs">
-                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
-                          </span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {shown.map((row) => {
-              const selected = row.original.fieldId === selectedId;
-              const main = (
-                <tr
-                  key={row.id}
-                  data-testid="board-row"
-                  data-field-id={row.original.fieldId}
-                  aria-selected={selected}
-                  tabIndex={0}
-                  onClick={() => onSelect(row.original)}
-                  onKeyDown={(e) => {
-                    if (e.key === 'Enter' || e.key === ' ') {
-                      e.preventDefault();
-                      onSelect(row.original);
-                    }
-                  }}
-                  className={`cursor-pointer align-top ${
-                    selected ? 'bg-clay-light' : 'hover:bg-paper-deep/60'
-                  }`}
-                >
-                  {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-1.5 pt-1.5">
-                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                    </td>
-                  ))}
+      {narrow ? (
+        <BoardCards rows={shown} selectedId={selectedId} onSelect={onSelect} />
+      ) : (
+        <div className="overflow-x-auto rounded-md border border-paper-edge bg-white/40">
+          <table className="w-full border-collapse text-left text-sm" data-testid="board-table">
+            <caption className="sr-only">Fields ranked by A/T, then soil lost a year</caption>
+            <thead>
+              {table.getHeaderGroups().map((hg) => (
+                <tr key={hg.id} className="border-b border-ink-faint bg-paper-deep/60 text-ink-soft">
+                  {hg.headers.map((h) => {
+                    const sorted = h.column.getIsSorted();
+                    return (
+                      <th
+                        key={h.id}
+                        scope="col"
+                        className="px-1.5 py-1.5 align-bottom font-medium"
+                        aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                      >
+                        {h.column.getCanSort() ? (
+                          <button
+                            type="button"
+                            onClick={h.column.getToggleSortingHandler()}
+                            className="inline-flex items-center gap-1 text-left font-medium hover:text-ink"
+                            data-testid={`board-sort-${h.column.id}`}
+                            title="Sort by this column"
+                          >
+                            {flexRender(h.column.columnDef.header, h.getContext())}
+                            <span aria-hidden="true" className="text-xs">
+                              {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
+                            </span>
+                          </button>
+                        ) : (
+                          flexRender(h.column.columnDef.header, h.getContext())
+                        )}
+                      </th>
+                    );
+                  })}
                 </tr>
-              );
-              const why = (
-                <tr
-                  key={`${row.id}-why`}
-                  onClick={() => onSelect(row.original)}
-                  className={`cursor-pointer border-b border-paper-edge ${selected ? 'bg-clay-light' : ''}`}
-                  data-testid="board-row-reasons"
-                >
-                  <td />
-                  <td colSpan={columnCount - 1} className="px-1.5 pb-1.5 pt-0.5 text-xs">
-                    <Reasons row={row.original} />
+              ))}
+            </thead>
+            <tbody>
+              {shown.map((row) => {
+                const selected = row.original.fieldId === selectedId;
+                const main = (
+                  <tr
+                    key={row.id}
+                    data-testid="board-row"
+                    data-field-id={row.original.fieldId}
+                    aria-selected={selected}
+                    tabIndex={0}
+                    onClick={() => onSelect(row.original)}
+                    onKeyDown={(e) => {
+                      if (e.key === 'Enter' || e.key === ' ') {
+                        e.preventDefault();
+                        onSelect(row.original);
+                      }
+                    }}
+                    className={`cursor-pointer align-top ${
+                      selected ? 'bg-clay-light' : 'hover:bg-paper-deep/60'
+                    }`}
+                  >
+                    {row.getVisibleCells().map((cell) => (
+                      <td key={cell.id} className="px-1.5 pt-1.5">
+                        {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                      </td>
+                    ))}
+                  </tr>
+                );
+                const why = (
+                  <tr
+                    key={`${row.id}-why`}
+                    onClick={() => onSelect(row.original)}
+                    className={`cursor-pointer border-b border-paper-edge ${selected ? 'bg-clay-light' : ''}`}
+                    data-testid="board-row-reasons"
+                  >
+                    <td />
+                    <td colSpan={columnCount - 1} className="px-1.5 pb-1.5 pt-0.5 text-xs">
+                      <BoardReasons row={row.original} />
+                    </td>
+                  </tr>
+                );
+                return [main, why];
+              })}
+              {shown.length === 0 ? (
+                <tr>
+                  <td colSpan={columnCount} className="px-2 py-4 text-center text-ink-soft">
+                    No field matches these filters.
                   </td>
                 </tr>
-              );
-              return [main, why];
-            })}
-            {shown.length === 0 ? (
-              <tr>
-                <td colSpan={columnCount} className="px-2 py-4 text-center text-ink-soft">
-                  No field matches these filters.
-                </td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
-      </div>
+              ) : null}
+            </tbody>
+          </table>
+        </div>
+      )}
     </div>
   );
 }

@@ -2,6 +2,7 @@
 // it came from and how it was worked out; figures to check against the handbook and rules of
 // thumb are marked in plain words, and a figure typed for the field in place of the worked-out
 // one says so with its note. A screen may add a control per factor (the field's override).
+// On a phone each row stacks into a small card (name, value and unit, then source and method).
 import type { ReactNode } from 'react';
 import type { EstimateSuccess, Provenance } from '../../../../shared/schemas/estimate';
 import { formatFigure } from '../../../lib/format-figure';
@@ -45,9 +46,9 @@ export function FactorTable({ factors, units, extra, control }: Props) {
   const rows: { name: string; p: Provenance; key?: FactorKey }[] = [...FACTORS.map((f) => ({ name: f.name, p: factors[f.key], key: f.key })), ...(extra ?? [])];
   return (
     <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-left text-sm" data-testid="factor-table">
-        <caption className="mb-1 text-left font-serif text-lg font-semibold">Where the figures come from</caption>
-        <thead>
+      <table className="w-full border-collapse text-left text-sm max-sm:block" data-testid="factor-table">
+        <caption className="mb-1 text-left font-serif text-lg font-semibold max-sm:block">Where the figures come from</caption>
+        <thead className="max-sm:hidden">
           <tr className="border-b border-ink-faint text-ink-soft">
             <th scope="col" className="py-1 pr-2 font-medium">Factor</th>
             <th scope="col" className="py-1 pr-2 text-right font-medium">Value</th>
@@ -61,15 +62,15 @@ export function FactorTable({ factors, units, extra, control }: Props) {
             ) : null}
           </tr>
         </thead>
-        <tbody>
+        <tbody className="max-sm:block">
           {rows.map(({ name, p, key }) => {
             const shown = units === 'us' && p.us ? p.us : { value: p.value, unit: p.unit };
             return (
-              <tr key={name} className="border-b border-paper-edge align-top">
-                <th scope="row" className="py-1.5 pr-2 font-medium">{name}</th>
-                <td className="num py-1.5 pr-2 text-right whitespace-nowrap">{formatFigure(shown.value)}</td>
-                <td className="py-1.5 pr-2 text-xs text-ink-soft">{shown.unit || 'no unit'}</td>
-                <td className="py-1.5 pr-2">
+              <tr key={name} className="border-b border-paper-edge align-top max-sm:flex max-sm:flex-wrap max-sm:items-baseline max-sm:gap-x-2 max-sm:py-1.5">
+                <th scope="row" className="py-1.5 pr-2 font-medium max-sm:w-full max-sm:py-0">{name}</th>
+                <td className="num py-1.5 pr-2 text-right whitespace-nowrap max-sm:py-0 max-sm:pr-0">{formatFigure(shown.value)}</td>
+                <td className="py-1.5 pr-2 text-xs text-ink-soft max-sm:py-0">{shown.unit || 'no unit'}</td>
+                <td className="py-1.5 pr-2 max-sm:w-full max-sm:py-0">
                   {p.override ? (
                     <span data-testid={`override-${key}`} className="font-medium text-clay-dark">
                       override: {p.override.note}
@@ -82,8 +83,8 @@ export function FactorTable({ factors, units, extra, control }: Props) {
                     </>
                   )}
                 </td>
-                <td className="py-1.5 text-xs text-ink-soft">{p.override ? 'typed for this field in place of the worked-out figure' : p.method}</td>
-                {control ? <td className="py-1.5 pl-2 align-top">{key ? control(key) : null}</td> : null}
+                <td className="py-1.5 text-xs text-ink-soft max-sm:w-full max-sm:py-0">{p.override ? 'typed for this field in place of the worked-out figure' : p.method}</td>
+                {control ? <td className="py-1.5 pl-2 align-top max-sm:w-full max-sm:pl-0">{key ? control(key) : null}</td> : null}
               </tr>
             );
           })}

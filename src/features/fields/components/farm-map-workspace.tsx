@@ -1,11 +1,14 @@
-// Farm map: the map filling the screen with the field panel beside it. Holds the selection and
-// turns map gestures (draw, edit, remove) into mutations; the query cache redraws the map.
+// Farm map: the map filling the screen with the field panel beside it (on a phone, in a sheet
+// over the foot of the map). Holds the selection and turns map gestures (draw, edit, remove)
+// into mutations; the query cache redraws the map.
 import { useCallback, useState, type ReactNode } from 'react';
 import type { Layer } from 'leaflet';
+import { BottomSheet } from '../../../components/ui/bottom-sheet';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { Loading } from '../../../components/ui/spinner';
 import { layerToGeometry } from '../../../lib/geo-leaflet';
+import { useNarrowScreen } from '../../../lib/use-narrow-screen';
 import { formatArea } from '../../../lib/units';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FieldFeature } from '../../../../shared/schemas/field';
@@ -58,6 +61,8 @@ export function FarmMapWorkspace(props: Props) {
   const [message, setMessage] = useState<MapMessage>(null);
   const [shapeProblem, setShapeProblem] = useState<ShapeProblem | null>(null);
   const [layerEpoch, setLayerEpoch] = useState(0);
+  const narrow = useNarrowScreen();
+  const [sheetOpen, setSheetOpen] = useState(false);
   const redrawFromCache = () => setLayerEpoch((n) => n + 1);
 
   const features = fields.data?.features ?? [];
@@ -131,13 +136,55 @@ export function FarmMapWorkspace(props: Props) {
     setSelectedId(fieldId);
     setFocus((f) => ({ fieldId, seq: (f?.seq ?? 0) + 1 }));
   };
+  // On a phone, a field tapped on the map opens the sheet at its details.
+  const selectOnMap = (fieldId: number | null) => {
+    setSelectedId(fieldId);
+    if (fieldId !== null) setSheetOpen(true);
+  };
   const closeImport = useCallback(() => setImportOpen(false), []);
 
   const saving = createField.isPending || updateField.isPending || deleteField.isPending;
 
+  const panel = (
+    <>
+      {banner}
+      {canEdit ? (
+        <div className="flex flex-col gap-2">
+          <Button data-testid="import-button" className="self-start" onClick={() => setImportOpen(true)}>
+            Import outlines from a file
+          </Button>
+          <p className="text-sm text-ink-soft">
+            Or draw on the map: pick the polygon tool at the top left, click each corner, and click the first corner
+            again to finish. The edit tool below it lets you drag corners; pick it again to save. The eraser
+            removes the field you click.
+          </p>
+        </div>
+      ) : null}
+      {selected ? (
+        <FieldDetails
+          key={selected.id}
+          field={selected}
+          units={units}
+          canEdit={canEdit}
+          onClose={() => setSelectedId(null)}
+          onDeleted={() => {
+            setMessage({ tone: 'info', text: `Deleted ${selected.properties.name}.` });
+            setSelectedId(null);
+          }}
+        >
+          {props.fieldExtra?.(selected)}
+        </FieldDetails>
+      ) : null}
+      {fields.data ? (
+        <FieldList fields={features} units={units} selectedId={selectedId} onSelect={selectFromList} />
+      ) : null}
+      {props.panelSections}
+    </>
+  );
+
   return (
-    <div className="flex min-h-0 flex-1 flex-col overflow-y-auto lg:flex-row lg:overflow-hidden">
-      <div className="relative h-[60vh] min-h-[320px] shrink-0 lg:h-auto lg:flex-1" data-testid="farm-map">
+    <div className={narrow ? 'relative min-h-0 flex-1 overflow-hidden' : 'flex min-h-0 flex-1 flex-col overflow-y-auto lg:flex-row lg:overflow-hidden'}>
+      <div className={narrow ? 'absolute inset-x-0 bottom-14 top-0' : 'relative h-[60vh] min-h-[320px] shrink-0 lg:h-auto lg:flex-1'} data-testid="farm-map">
         {fields.isPending ? (
           <Loading label="Loading the farm's fields…" />
         ) : fields.isError ? (
@@ -155,7 +202,7 @@ export function FarmMapWorkspace(props: Props) {
             canEdit={canEdit}
             layerEpoch={layerEpoch}
             preview={shapeProblem ? { drawn: shapeProblem.drawn, repaired: shapeProblem.repaired } : null}
-            onSelect={setSelectedId}
+            onSelect={selectOnMap}
             onEdited={onEdited}
             onRemoved={onRemoved}
             onCreate={saveNew}
@@ -195,43 +242,24 @@ export function FarmMapWorkspace(props: Props) {
         </div>
       </div>
 
-      <aside
-        aria-label="Fields of this farm"
-        className="flex w-full shrink-0 flex-col gap-4 border-t border-paper-edge bg-paper p-4 lg:w-96 lg:overflow-y-auto lg:border-l lg:border-t-0"
-      >
-        {banner}
-        {canEdit ? (
-          <div className="flex flex-col gap-2">
-            <Button data-testid="import-button" className="self-start" onClick={() => setImportOpen(true)}>
-              Import outlines from a file
-            </Button>
-            <p className="text-sm text-ink-soft">
-              Or draw on the map: pick the polygon tool at the top left, click each corner, and click the first corner
-              again to finish. The edit tool below it lets you drag corners; pick it again to save. The eraser
-              removes the field you click.
-            </p>
-          </div>
-        ) : null}
-        {selected ? (
-          <FieldDetails
-            key={selected.id}
-            field={selected}
-            units={units}
-            canEdit={canEdit}
-            onClose={() => setSelectedId(null)}
-            onDeleted={() => {
-              setMessage({ tone: 'info', text: `Deleted ${selected.properties.name}.` });
-              setSelectedId(null);
-            }}
-          >
-            {props.fieldExtra?.(selected)}
-          </FieldDetails>
-        ) : null}
-        {fields.data ? (
-          <FieldList fields={features} units={units} selectedId={selectedId} onSelect={selectFromList} />
-        ) : null}
-        {props.panelSections}
-      </aside>
+      {narrow ? (
+        <BottomSheet
+          label="Fields of this farm"
+          summary={selected ? `${selected.properties.name} · ${features.length} fields` : `Fields of this farm (${features.length})`}
+          open={sheetOpen}
+          onOpenChange={setSheetOpen}
+          testId="field-sheet"
+        >
+          <div className="flex flex-col gap-4 p-4">{panel}</div>
+        </BottomSheet>
+      ) : (
+        <aside
+          aria-label="Fields of this farm"
+          className="flex w-full shrink-0 flex-col gap-4 border-t border-paper-edge bg-paper p-4 lg:w-96 lg:overflow-y-auto lg:border-l lg:border-t-0"
+        >
+          {panel}
+        </aside>
+      )}
 
       {importOpen ? (
         <ImportDialog farmId={farmId} units={units} onClose={closeImport} />

@@ -1,13 +1,17 @@
 // The feel test, one question at a time: does moist soil ball → how long a ribbon → gritty,
 // smooth or neither. The engine's key (shared/erosion textureByFeel, Thien 1979) gives the
-// texture class, shown before anything is saved; then a few optional figures and Save.
+// texture class, shown before anything is saved; then a few optional figures, a photo and the
+// GPS position, and Save. Saving keeps the check in the browser first and sends it from there,
+// so a check made with no network waits on the phone and goes when the network is back.
 import { useEffect, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { DEFAULT_FEEL_KEY, textureByFeel, type FeelClass } from '../../../../shared/erosion/texture';
 import type { FeelGrit, SoilSampleCreate } from '../../../../shared/schemas/soils';
-import { useCreateSoilSample } from '../api/create-soil-sample';
+import { useMe } from '../../auth/api/get-me';
+import { useKeepSoilCheck } from '../offline/waiting-checks-queries';
+import { FieldExtrasInputs, photoTooBig, type FieldExtras } from './field-extras';
 import { fmt } from './format-soil';
 import { BallDiagram, PinchDiagram, RibbonDiagram } from './feel-diagrams';
 import { sampleResolver, type SampleFormValues } from './sample-form-values';
@@ -78,7 +82,9 @@ export function FeelTestWizard({ fieldId, onDone }: { fieldId: number; onDone: (
   const [step, setStep] = useState<1 | 2 | 3 | 4>(1);
   const [answers, setAnswers] = useState<Answers>({});
   const [typedCm, setTypedCm] = useState('');
-  const create = useCreateSoilSample(fieldId);
+  const keep = useKeepSoilCheck();
+  const userId = useMe().data?.id;
+  const [extras, setExtras] = useState<FieldExtras>({ photo: null, position: null });
   const form = useForm<SampleFormValues, unknown, SoilSampleCreate>({ resolver: sampleResolver, defaultValues: { kind: 'feel' } });
 
   const result = classOf(answers);
@@ -102,7 +108,20 @@ export function FeelTestWizard({ fieldId, onDone }: { fieldId: number; onDone: (
     form.setValue('feel', answers.balls && answers.ribbonCm ? answers.feel : undefined);
   }, [answers, form]);
 
-  const save = form.handleSubmit((checked) => create.mutate(checked, { onSuccess: onDone }));
+  const save = form.handleSubmit((checked) => {
+    if (!result?.ok || photoTooBig(extras) || userId === undefined) return;
+    const { photo, position } = extras;
+    keep.mutate(
+      {
+        userId,
+        fieldId,
+        title: `Feel test, ${result.value.textureClass}${checked.label ? ` (${checked.label})` : ''}`,
+        input: { ...checked, position, clientKey: crypto.randomUUID() },
+        photo: photo ? { blob: photo, name: photo.name, clientKey: crypto.randomUUID() } : null,
+      },
+      { onSuccess: onDone },
+    );
+  });
 
   return (
     <section data-testid="feel-wizard" aria-label="Feel test" className="flex flex-col gap-4 rounded-md border border-paper-edge bg-white/40 p-3">
@@ -190,10 +209,11 @@ export function FeelTestWizard({ fieldId, onDone }: { fieldId: number; onDone: (
               <WhereWhenInputs />
               <DrainageInputs />
               <ChemistryInputs full={false} />
-              {create.isError ? <Notice tone="error">{create.error.message}</Notice> : null}
+              <FieldExtrasInputs value={extras} onChange={setExtras} />
+              {keep.isError ? <Notice tone="error">This browser could not keep the check: {keep.error.message}</Notice> : null}
               <div className="flex flex-wrap gap-2">
-                <Button type="submit" disabled={!result.ok || create.isPending} data-testid="feel-save">
-                  {create.isPending ? 'Saving…' : 'Save the feel test'}
+                <Button type="submit" disabled={!result.ok || keep.isPending || photoTooBig(extras)} data-testid="feel-save">
+                  {keep.isPending ? 'Saving…' : 'Save the feel test'}
                 </Button>
                 <Button variant="secondary" onClick={() => setStep(1)}>
                   Start the questions again

@@ -9,6 +9,7 @@ import type { Separates, TextureClass } from '../../../../shared/erosion/texture
 import { useMe } from '../../auth/api/get-me';
 import { useSoilSamples } from '../api/get-soil-samples';
 import { useSoilSummary } from '../api/get-soil-summary';
+import { WaitingChecksNotice } from '../offline/waiting-checks-notice';
 import { FeelTestWizard } from './feel-test-wizard';
 import { FieldSoilMapUnits } from './field-soil-map-units';
 import { SampleForm } from './sample-form';
@@ -26,7 +27,8 @@ type Adding = 'lab' | 'feel' | null;
 
 export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
   const canEdit = role === 'farmer' || role === 'advisor';
-  const units = useMe().data?.units ?? 'ha';
+  const me = useMe().data;
+  const units = me?.units ?? 'ha';
   const samples = useSoilSamples(fieldId);
   const summary = useSoilSummary(fieldId);
   const [adding, setAdding] = useState<Adding>(null);
@@ -60,6 +62,7 @@ export function SoilTab({ fieldId, farmId, role }: SoilTabProps) {
             </div>
           ) : null}
         </div>
+        {me ? <WaitingChecksNotice userId={me.id} /> : null}
         {adding === 'lab' ? <SampleForm fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
         {adding === 'feel' ? <FeelTestWizard fieldId={fieldId} onDone={() => setAdding(null)} /> : null}
         {samples.isPending ? (
