@@ -1,6 +1,8 @@
 // The only reader of process.env. Parsed once with zod; every problem is listed at start-up.
 import { z } from 'zod';
 import path from 'node:path';
+import { randomBytes } from 'node:crypto';
+import { chmodSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 
 const boolish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
@@ -46,6 +48,28 @@ export type Config = {
   isProduction: boolean;
 };
 
+/**
+ * Without SESSION_SECRET (outside production): a random 256-bit secret made on first start and kept
+ * in DATA_DIR/session-secret (mode 0600), so sessions survive restarts and no two installations share one.
+ */
+function keptSessionSecret(dataDir: string): string {
+  const file = path.join(dataDir, 'session-secret');
+  try {
+    return readFileSync(file, 'utf8').trim();
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'ENOENT') throw e;
+  }
+  mkdirSync(dataDir, { recursive: true });
+  try {
+    // 'wx': when two processes start at once, the first one's secret is kept by both.
+    writeFileSync(file, randomBytes(32).toString('base64url'), { mode: 0o600, flag: 'wx' });
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw e;
+  }
+  chmodSync(file, 0o600);
+  return readFileSync(file, 'utf8').trim();
+}
+
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const parsed = Env.safeParse(env);
   if (!parsed.success) {
@@ -68,8 +92,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     tileUrl: e.TILE_URL ?? null,
     tileAttribution: e.TILE_ATTRIBUTION ?? null,
     seedDemo: e.SEED_DEMO,
-    // A development default keeps `npm start` to one command; production must set its own.
-    sessionSecret: e.SESSION_SECRET ?? 'fieldshed-development-secret-not-for-production',
+    sessionSecret: e.SESSION_SECRET ?? keptSessionSecret(path.resolve(e.DATA_DIR)),
     sessionHours: e.SESSION_HOURS,
     isProduction,
   };
