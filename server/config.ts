@@ -16,6 +16,7 @@ const Env = z.object({
   DATABASE_URL: z.string().url().optional(),
   SMTP_URL: z.string().url().optional(),
   PUBLIC_URL: z.string().url().optional(),
+  ALLOWED_ORIGINS: z.string().optional(),
   MAIL_FROM: z.string().min(3).default('Fieldshed <no-reply@fieldshed.localhost>'),
   REMINDER_DAYS: z.coerce.number().int().min(1).max(60).default(7),
   TILE_URL: z.string().optional(),
@@ -36,6 +37,8 @@ export type Config = {
   smtpUrl: string | undefined;
   /** The address people open the product at: links in mail start with it (no trailing slash). */
   publicUrl: string;
+  /** Origins, besides PUBLIC_URL's and the request's own host, whose pages may change data (comma-separated ALLOWED_ORIGINS). */
+  allowedOrigins: string[];
   /** The From of every mail. */
   mailFrom: string;
   /** How many days before a planned action's date its reminder goes out. */
@@ -87,6 +90,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     databaseUrl: e.DATABASE_URL,
     smtpUrl: e.SMTP_URL,
     publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST === '0.0.0.0' ? '127.0.0.1' : e.HOST}:${e.PORT}`).replace(/\/+$/, ''),
+    allowedOrigins: (e.ALLOWED_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
     mailFrom: e.MAIL_FROM,
     reminderDays: e.REMINDER_DAYS,
     tileUrl: e.TILE_URL ?? null,
