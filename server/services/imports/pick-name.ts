@@ -1,4 +1,5 @@
 // The field name of an imported feature, from the first name-like property that holds one.
+import { cleanText } from '../../../shared/schemas/plain-text';
 
 /** Property keys tried in this order, compared without regard to case. */
 export const NAME_KEYS = ['name', 'field', 'field_name', 'label', 'title', 'id'] as const;
@@ -13,7 +14,7 @@ export function pickName(properties: Record<string, unknown> | null): string | n
     for (const key of keys) {
       if (key.toLowerCase() !== wanted) continue;
       const value = properties[key];
-      const text = typeof value === 'string' ? value.replace(/\s+/g, ' ').trim()
+      const text = typeof value === 'string' ? cleanText(value).replace(/\s+/g, ' ').trim()
         : typeof value === 'number' && Number.isFinite(value) ? String(value)
         : '';
       if (text) return text.slice(0, MAX_NAME_LENGTH).trimEnd();
