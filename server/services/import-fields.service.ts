@@ -30,7 +30,7 @@ export async function importFields(
         .transaction({ transaction: t }, (inner) => insertField(sequelize, actor, farmId, { geometry: item.geometry as AreaGeometry, name: item.name }, inner))
         .catch((e: unknown) => e);
       if (typeof sp === 'number') ids.push(sp);
-      else if (sp instanceof HttpError && sp.status === 422) rejected.push({ index: item.index, reason: `feature ${item.index}${item.name ? ` (${item.name})` : ''}: ${sp.message}` });
+      else if (sp instanceof HttpError && (sp.status === 422 || sp.status === 409)) rejected.push({ index: item.index, reason: `feature ${item.index}${item.name ? ` (${item.name})` : ''}: ${sp.message}` });
       else throw sp;
     }
     if (ids.length === 0) {
