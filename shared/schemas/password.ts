@@ -2,7 +2,7 @@
 // length, a check against commonly used passwords and refusing repetitive characters, and no
 // composition rules; bcrypt (Provos & Mazières 1999) reads only the first 72 bytes of a password.
 import { z } from 'zod';
-import commonJson from '../../data/reference/common-passwords.json';
+import commonJson from '../../data/security/common-passwords.json';
 
 export const PASSWORD_MIN_CHARS = 10;
 /** bcrypt's input limit: bytes past it would be ignored without a word, so they are refused. */
