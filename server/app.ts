@@ -8,8 +8,9 @@ import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import { initModels } from './models';
 import { requireUser } from './middleware/auth';
-import { errorHandler, notFoundApi } from './middleware/error-handler';
+import { DATABASE_RETRY_AFTER_S, errorHandler, notFoundApi } from './middleware/error-handler';
 import { clientFiles } from './middleware/client-files';
+import { sameOrigin } from './middleware/same-origin';
 import { authRoutes } from './routes/auth.routes';
 import { farmsRoutes } from './routes/farms.routes';
 import { fieldsRoutes } from './routes/fields.routes';
@@ -72,8 +73,10 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   app.use(cookieParser());
 
   const api = express.Router();
+  api.use(sameOrigin([config.publicUrl, ...config.allowedOrigins]));
   api.get('/health', async (_req, res) => {
     const db = await sequelize.authenticate().then(() => true, () => false);
+    if (!db) res.set('Retry-After', String(DATABASE_RETRY_AFTER_S));
     res.status(db ? 200 : 503).json({ ok: db, db });
   });
   api.get('/config', (_req, res) => {

@@ -2,6 +2,8 @@
 import { z } from 'zod';
 import path from 'node:path';
 import type { Basemap } from '../shared/schemas/config';
+import { randomBytes } from 'node:crypto';
+import { chmodSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 
 const boolish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
@@ -26,6 +28,7 @@ const Env = z.object({
   DATABASE_URL: z.string().url().optional(),
   SMTP_URL: z.string().url().optional(),
   PUBLIC_URL: z.string().url().optional(),
+  ALLOWED_ORIGINS: z.string().optional(),
   MAIL_FROM: z.string().min(3).default('Fieldshed <no-reply@fieldshed.localhost>'),
   REMINDER_DAYS: z.coerce.number().int().min(1).max(60).default(7),
   STREET_TILE_URL: tileTemplate('STREET_TILE_URL'),
@@ -52,6 +55,8 @@ export type Config = {
   smtpUrl: string | undefined;
   /** The address people open the product at: links in mail start with it (no trailing slash). */
   publicUrl: string;
+  /** Origins, besides PUBLIC_URL's and the request's own host, whose pages may change data (comma-separated ALLOWED_ORIGINS). */
+  allowedOrigins: string[];
   /** The From of every mail. */
   mailFrom: string;
   /** How many days before a planned action's date its reminder goes out. */
@@ -86,6 +91,28 @@ function basemapsFrom(e: z.infer<typeof Env>, publicDefaults: boolean): Basemap[
   return all.filter((b): b is Basemap => b !== null);
 }
 
+/**
+ * Without SESSION_SECRET (outside production): a random 256-bit secret made on first start and kept
+ * in DATA_DIR/session-secret (mode 0600), so sessions survive restarts and no two installations share one.
+ */
+function keptSessionSecret(dataDir: string): string {
+  const file = path.join(dataDir, 'session-secret');
+  try {
+    return readFileSync(file, 'utf8').trim();
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'ENOENT') throw e;
+  }
+  mkdirSync(dataDir, { recursive: true });
+  try {
+    // 'wx': when two processes start at once, the first one's secret is kept by both.
+    writeFileSync(file, randomBytes(32).toString('base64url'), { mode: 0o600, flag: 'wx' });
+  } catch (e) {
+    if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw e;
+  }
+  chmodSync(file, 0o600);
+  return readFileSync(file, 'utf8').trim();
+}
+
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const parsed = Env.safeParse(env);
   if (!parsed.success) {
@@ -103,13 +130,13 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     databaseUrl: e.DATABASE_URL,
     smtpUrl: e.SMTP_URL,
     publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST === '0.0.0.0' ? '127.0.0.1' : e.HOST}:${e.PORT}`).replace(/\/+$/, ''),
+    allowedOrigins: (e.ALLOWED_ORIGINS ?? '').split(',').map((o) => o.trim()).filter(Boolean),
     mailFrom: e.MAIL_FROM,
     reminderDays: e.REMINDER_DAYS,
     basemaps: basemapsFrom(e, e.NODE_ENV !== 'test'),
     geocoderUrl: e.GEOCODER_URL ?? null,
     seedDemo: e.SEED_DEMO,
-    // A development default keeps `npm start` to one command; production must set its own.
-    sessionSecret: e.SESSION_SECRET ?? 'fieldshed-development-secret-not-for-production',
+    sessionSecret: e.SESSION_SECRET ?? keptSessionSecret(path.resolve(e.DATA_DIR)),
     sessionHours: e.SESSION_HOURS,
     isProduction,
   };

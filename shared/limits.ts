@@ -20,3 +20,13 @@ export const SOIL_MAP_MAX_BYTES = 8 * BYTES_PER_MIB;
 export const RAINFALL_RECORD_MAX_BYTES = 8 * BYTES_PER_MIB;
 /** Any JSON request body. */
 export const JSON_BODY_MAX_BYTES = 2 * BYTES_PER_MIB;
+
+/** Corners of one field or map-unit outline, all rings together; more is a survey trace to simplify first. */
+export const OUTLINE_MAX_VERTICES = 10_000;
+/**
+ * Fields nearer a pole than this are refused: the web map (Web Mercator) stops at about 85.05°,
+ * and no farmland lies beyond about 71° N or 55° S.
+ */
+export const FIELD_MAX_ABS_LATITUDE_DEG = 85;
+/** A farm's own slope classes (Handbook 18 lists six; a survey area seldom uses more than ten). */
+export const SLOPE_CLASSES_MAX = 20;

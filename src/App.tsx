@@ -13,6 +13,7 @@ import { NotFoundPage } from './pages/not-found-page';
 const router = createBrowserRouter([
   { path: paths.signIn.path, lazy: async () => ({ Component: (await import('./pages/sign-in-page')).SignInPage }) },
   { path: paths.register.path, lazy: async () => ({ Component: (await import('./pages/register-page')).RegisterPage }) },
+  { path: paths.confirmAccount.path, lazy: async () => ({ Component: (await import('./pages/confirm-account-page')).ConfirmAccountPage }) },
   { path: paths.invitation.path, lazy: async () => ({ Component: (await import('./pages/accept-invitation-page')).AcceptInvitationPage }) },
   { path: paths.forgotPassword.path, lazy: async () => ({ Component: (await import('./pages/forgot-password-page')).ForgotPasswordPage }) },
   { path: paths.resetPassword.path, lazy: async () => ({ Component: (await import('./pages/reset-password-page')).ResetPasswordPage }) },

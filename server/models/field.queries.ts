@@ -128,3 +128,14 @@ export async function farmFieldsExtent(sequelize: Sequelize, farmId: number, own
   );
   return box && box.w !== null ? [box.w, box.s, box.e, box.n] : null;
 }
+
+/** A field of the farm with the same outline (ST_Equals: the same point set, wherever its rings start), or null. */
+export async function fieldWithSameOutline(sequelize: Sequelize, farmId: number, geometry: MultiPolygon, transaction: Transaction): Promise<{ id: number; name: string } | null> {
+  const [row] = await sequelize.query<{ id: number; name: string }>(
+    `SELECT id, name FROM fields
+     WHERE farm_id = :farmId AND ST_Equals(geom, ST_SetSRID(ST_GeomFromGeoJSON(:gj), 4326))
+     LIMIT 1`,
+    { replacements: { farmId, gj: JSON.stringify(geometry) }, type: QueryTypes.SELECT, transaction },
+  );
+  return row ?? null;
+}

@@ -33,18 +33,19 @@ import { PasswordReset } from './password-reset.model';
 import { OutgoingMail } from './outgoing-mail.model';
 import { DevMailboxMessage } from './dev-mailbox-message.model';
 import { NoticeSetting } from './notice-setting.model';
+import { RegistrationRequest } from './registration-request.model';
 
 export {
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
   Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride, Plan, PlanAction, PlanComment, PlanVersion,
-  UserSession, Invitation, PasswordReset, OutgoingMail, DevMailboxMessage, NoticeSetting,
+  UserSession, Invitation, PasswordReset, OutgoingMail, DevMailboxMessage, NoticeSetting, RegistrationRequest,
 };
 
 /** Every model, in an order where a table comes after the tables it refers to. */
 const MODELS = [
   User, Farm, Membership, Field, AuditEvent, SoilSample, SoilPhoto, SoilMap, SoilMapUnit, ElevationModel, ProcessingJob, FieldTerrain, TerrainLayer, TerrainGrid,
   Season, FieldCropping, FarmClimate, FieldGround, Assessment, FarmPrices, FieldFactorOverride, Plan, PlanAction, PlanComment, PlanVersion,
-  UserSession, Invitation, PasswordReset, OutgoingMail, DevMailboxMessage, NoticeSetting,
+  UserSession, Invitation, PasswordReset, OutgoingMail, DevMailboxMessage, NoticeSetting, RegistrationRequest,
 ];
 
 let initialised: Sequelize | null = null;

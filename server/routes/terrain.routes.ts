@@ -62,7 +62,7 @@ export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs
 
   const jobs = Router();
   jobs.get('/:jobId', loadJobForMember, (_req, res) => {
-    res.json(presentJob(res.locals.job));
+    res.json(presentJob(res.locals.job, res.locals.jobRole));
   });
   return { farms, fields, jobs };
 }

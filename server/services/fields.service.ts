@@ -4,8 +4,8 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import { FieldName, type FieldFeature, type FieldUpdate } from '../../shared/schemas/field';
 import type { AreaGeometry } from '../../shared/schemas/geojson';
-import { Field, Membership, SoilPhoto } from '../models';
-import { selectFieldFeatureRows, type FieldFeatureFilter } from '../models/field.queries';
+import { Farm, Field, Membership, SoilPhoto } from '../models';
+import { fieldWithSameOutline, selectFieldFeatureRows, type FieldFeatureFilter } from '../models/field.queries';
 import { presentField } from '../presenters/field.presenter';
 import { conflict, invalid, notFound } from '../lib/http-error';
 import { checkGeometry } from './field-geometry';
@@ -53,9 +53,23 @@ async function measured(sequelize: Sequelize, geometry: AreaGeometry, transactio
   return check;
 }
 
-/** Inserts one field inside the caller's transaction; throws HttpError on bad geometry. */
-export async function insertField(sequelize: Sequelize, actor: Actor, farmId: number, input: FieldInput, transaction: Transaction): Promise<number> {
+/**
+ * Inserts one field inside the caller's transaction; throws HttpError on bad geometry, and 409 when
+ * the farm already has a field with this outline. A farm holds each outline once: that makes a
+ * double-clicked save, a retried request or the same file imported twice store one field. The
+ * farm's row is locked first so creations sent at the same moment are checked one after another.
+ */
+/**
+ * Stores one field. A farm holds each outline once (ten identical creations at once store one),
+ * unless the person asked for copies in an import (`allowSameOutline`).
+ */
+export async function insertField(
+  sequelize: Sequelize, actor: Actor, farmId: number, input: FieldInput, transaction: Transaction, allowSameOutline = false,
+): Promise<number> {
   const g = await measured(sequelize, input.geometry, transaction);
+  await Farm.findByPk(farmId, { attributes: ['id'], lock: transaction.LOCK.UPDATE, transaction });
+  const twin = allowSameOutline ? null : await fieldWithSameOutline(sequelize, farmId, g.geometry, transaction);
+  if (twin) throw conflict('duplicate_field', `geometry: the farm already has this outline as field "${twin.name}" (id ${twin.id}); each outline is stored once.`, { fieldId: twin.id });
   await checkOwner(farmId, input.ownerMembershipId, transaction);
   // Imported names come from files: one that is not a usable name gives way to the default.
   const given = FieldName.safeParse(input.name ?? '');

@@ -47,7 +47,7 @@ async function importOne(
   }
   const repaired = assessed.ok && assessed.original !== null && options.acceptRepaired === true;
   const geometry = repaired && assessed.ok ? assessed.geometry : (item.geometry as AreaGeometry);
-  return { created: await insertField(sequelize, actor, farmId, { geometry, name }, t) };
+  return { created: await insertField(sequelize, actor, farmId, { geometry, name }, t, options.allowDuplicates === true) };
 }
 
 /** Every usable feature; a bad one is rejected inside its own savepoint so the others stay. */
@@ -61,7 +61,8 @@ async function importTolerant(sequelize: Sequelize, actor: Actor, farmId: number
     const step = await sequelize
       .transaction({ transaction: t }, (inner) => importOne(sequelize, actor, farmId, item, {}, inner))
       .catch((e: unknown) => e);
-    if (step instanceof HttpError && step.status === 422) {
+    // 409: the same outline was stored a moment ago by another request.
+    if (step instanceof HttpError && (step.status === 422 || step.status === 409)) {
       steps.push({ rejected: { index: item.index, reason: `${label(item.index, item.name)}: ${step.message}` } });
     } else if (step instanceof Error) throw step;
     else steps.push(step as Step);

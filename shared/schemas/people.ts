@@ -2,10 +2,10 @@
 import { z } from 'zod';
 import { Email } from './auth';
 import { plainText } from './plain-text';
+import { NewPassword } from './password';
 import type { Role } from './auth';
 
 export const RoleChoice = z.enum(['farmer', 'advisor', 'landowner'], { error: 'role must be farmer, advisor or landowner' });
-export const NewPassword = z.string({ error: 'password must be text' }).min(10, 'password must be at least 10 characters').max(200, 'password must be at most 200 characters');
 const FieldIds = z.array(z.number().int().positive(), { error: 'fieldIds must be a list of field ids' }).max(500);
 
 const landownerHasFields = (v: { role: Role; fieldIds?: number[] }) => v.role !== 'landowner' || (v.fieldIds?.length ?? 0) > 0;
@@ -26,6 +26,8 @@ export type MembershipUpdate = z.infer<typeof MembershipUpdate>;
 /** POST /api/invitations/:token/accept: a name and new password, or the password of the account the address has. */
 export const InvitationAccept = z.object({ name: plainText('name', 120, 'name is required').optional(), password: z.string().min(1, 'password is required').max(200) });
 export type InvitationAccept = z.infer<typeof InvitationAccept>;
+
+export { NewPassword };
 
 export const ForgotPassword = z.object({ email: Email });
 export const ResetPassword = z.object({ token: z.string().min(20, 'token is not a reset link').max(100), password: NewPassword });

@@ -2,7 +2,7 @@
 // Money is in the plan's currency; dates are calendar dates written YYYY-MM-DD.
 import { z } from 'zod';
 import { TREATMENT_KEYS, type TreatmentKey } from '../erosion/treatments/types';
-import { plainText } from './plain-text';
+import { longText, plainText } from './plain-text';
 import { SeasonLabel } from './season';
 
 export const PLAN_STATES = ['draft', 'submitted', 'returned', 'approved'] as const;
@@ -21,14 +21,6 @@ const amount = (f: string, max: number) =>
     .refine(Number.isFinite, `${f} must be a finite number`)
     .pipe(z.number().min(0, `${f} must be at least 0`).max(max, `${f} must be at most ${max}`));
 /** Text that may run over several lines (notes, comments), trimmed. */
-const longText = (f: string, max: number) =>
-  z
-    .string({ error: `${f} must be text` })
-    .trim()
-    .min(1, `${f} must not be empty`)
-    .max(max, `${f} must be at most ${max} characters`)
-    // eslint-disable-next-line no-control-regex
-    .refine((s) => !/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(s), `${f} must not contain control characters`);
 const status = z.enum(ACTION_STATUSES, { error: "status must be 'planned', 'done' or 'checked'" });
 const version = z.number({ error: 'version must be the version you read' }).int('version must be a whole number').positive('version must be at least 1');
 

@@ -19,7 +19,7 @@ const pct = (f: string) => z.number({ error: `${f} must be a number` }).min(0, `
 const isoDate = (f: string) => z.string().regex(/^\d{4}-\d{2}-\d{2}$/, `${f} must be a date like 2027-09-15`);
 
 export const CoverCropInput = z.object({
-  species: z.string().trim().min(1, 'coverCrop.species is required').max(80),
+  species: plainText('coverCrop.species', 80, 'coverCrop.species is required'),
   seededOn: isoDate('coverCrop.seededOn').nullable().optional(),
   terminatedOn: isoDate('coverCrop.terminatedOn').nullable().optional(),
 });

@@ -2,6 +2,7 @@
 // attribute mapping, and the answers the server gives. Shared by the client forms and the
 // server's validate() middleware. Percentages are of the fine earth (< 2 mm).
 import { z } from 'zod';
+import { checkedText } from './plain-text';
 import { tryClassifyTexture } from '../erosion/texture';
 import type { Origin } from './provenance';
 import type { LastChange } from './season';
@@ -43,7 +44,7 @@ export type FieldPosition = z.infer<typeof FieldPosition>;
 export const ClientKey = z.uuid({ error: 'clientKey must be a UUID' });
 
 const common = {
-  label: opt(z.string().trim().max(120, 'label must be at most 120 characters')),
+  label: opt(z.string().trim().max(120, 'label must be at most 120 characters').superRefine(checkedText('label'))),
   sampledOn: opt(z.iso.date({ error: 'sampledOn must be a date written YYYY-MM-DD' })),
   depthTopCm: opt(num('depthTopCm', 0, 500, ' cm')),
   depthBottomCm: opt(num('depthBottomCm', 0, 500, ' cm')),
@@ -221,7 +222,14 @@ export const SOIL_MAP_MEANINGS = ['texture', 'k', 'hsg', 't', 'drainage'] as con
 export type SoilMapMeaning = (typeof SOIL_MAP_MEANINGS)[number];
 
 const attributeName = (meaning: string) =>
-  z.string({ error: `${meaning} must be an attribute name` }).trim().min(1, `${meaning} must not be empty`).max(200, `${meaning} is too long`).nullable().optional();
+  z
+    .string({ error: `${meaning} must be an attribute name` })
+    .trim()
+    .min(1, `${meaning} must not be empty`)
+    .max(200, `${meaning} is too long`)
+    .superRefine(checkedText(meaning))
+    .nullable()
+    .optional();
 
 /** PUT /api/farms/:farmId/soil-map/mapping: which attribute means what (null unsets one). */
 export const SoilMapMapping = z.object({

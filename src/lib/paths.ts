@@ -7,6 +7,7 @@ export const paths = {
       `/sign-in${redirectTo ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}`,
   },
   register: { path: '/register', getHref: () => '/register' },
+  confirmAccount: { path: '/confirm-account', getHref: (token: string) => `/confirm-account?token=${encodeURIComponent(token)}` },
   farms: { path: '/farms', getHref: () => '/farms' },
   farmMap: { path: '/farms/:farmId', getHref: (farmId: number | string) => `/farms/${farmId}` },
   estimate: { path: '/estimate', getHref: () => '/estimate' },

@@ -48,17 +48,6 @@ describe('sign-in', () => {
     expect(last).toBe(429);
   });
 
-  it('registers a person with a farm of their own on which they are the farmer', async () => {
-    const agent = request.agent(ctx.app);
-    const email = `new-${randomUUID()}@example.test`;
-    const res = await agent.post('/api/auth/register').send({ email, password: 'a long password', name: 'New Grower', farmName: 'Hilltop' });
-    expect(res.status).toBe(201);
-    const farms = await agent.get('/api/farms');
-    expect(farms.body).toEqual([{ id: expect.any(Number), name: 'Hilltop', role: 'farmer' }]);
-    const again = await request(ctx.app).post('/api/auth/register').send({ email, password: 'a long password', name: 'X', farmName: 'Y' });
-    expect(again.status).toBe(409);
-  });
-
   it('tells who is signed in, changes units, and forgets the session on logout', async () => {
     const agent = await signedIn(ctx.app, await makeUser());
     expect((await agent.get('/api/auth/me')).status).toBe(200);

@@ -42,6 +42,7 @@ export const RULES: Record<string, Rule> = {
   // Only while mail goes to the local fake (development, tests); no sign-in so a forgotten password can be reset there.
   'GET /api/dev/mailbox': { kind: 'public', allowed: 200 },
   'POST /api/auth/register': { kind: 'public', allowed: 400 },
+  'POST /api/auth/register/confirm': { kind: 'public', allowed: 400 },
   'POST /api/auth/login': { kind: 'public', allowed: 400 },
   'POST /api/auth/logout': { kind: 'public', allowed: 'not-called', coveredBy: 'auth.test.ts' },
   'POST /api/auth/forgot': { kind: 'public', allowed: 400 },

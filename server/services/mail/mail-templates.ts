@@ -55,6 +55,25 @@ export function passwordResetMail(input: { name: string; link: string; validMinu
   ], ASKED_FOR_FOOTER);
 }
 
+export function confirmAccountMail(input: { name: string; farmName: string; link: string; validHours: number }): ComposedMail {
+  return compose('Finish creating your Fieldshed account', [
+    `Hello ${input.name},`,
+    `Someone (we hope you) asked to create a Fieldshed account with this address, with a new farm called ${input.farmName}. Open the link to finish; it works once, for ${input.validHours} hours.`,
+    { link: input.link, label: 'Finish creating the account' },
+    'If you did not ask, ignore this mail: no account is made.',
+  ], ASKED_FOR_FOOTER);
+}
+
+export function accountExistsMail(input: { name: string; signInLink: string; resetLink: string }): ComposedMail {
+  return compose('Someone tried to create a Fieldshed account with your address', [
+    `Hello ${input.name},`,
+    'Someone (perhaps you) asked to create a new Fieldshed account with this address. This address already has an account, so nothing was changed.',
+    { link: input.signInLink, label: 'Sign in' },
+    { link: input.resetLink, label: 'Forgot your password? Choose a new one' },
+    'If it was not you, you need do nothing: your account and password stay as they are.',
+  ], ASKED_FOR_FOOTER);
+}
+
 export function planSubmittedMail(input: { farmName: string; season: string; by: string; link: string }): ComposedMail {
   return compose(`Season plan ${input.season} of ${input.farmName} is ready for your review`, [
     `${input.by} has submitted the ${input.season} season plan of ${input.farmName} for review.`,

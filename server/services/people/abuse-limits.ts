@@ -14,3 +14,11 @@ export const LINK_USES_PER_IP = 30;
 
 export const INVITATION_DAYS = 7;
 export const RESET_MINUTES = 60;
+
+/** Sign-in attempts per address (from any number of networks) and per network address, per IP_WINDOW_MS. */
+export const SIGNINS_PER_ADDRESS = 20;
+export const SIGNINS_PER_IP = 200;
+/** "Create an account" per address per hour (past it the answer is the same but nothing is sent) and per network address. */
+export const REGISTRATIONS_PER_ADDRESS_PER_HOUR = 3;
+export const REGISTRATIONS_PER_IP = 20;
+export const REGISTRATION_HOURS = 24;

@@ -7,6 +7,7 @@ import { readShapefileZip } from '../imports/read-shapefile-zip';
 import { openZip } from '../imports/read-zip';
 import { toParsedItem } from '../imports/to-parsed-item';
 import type { MapUnitOutline } from '../../models/soil-map-unit.queries';
+import { cleanText } from '../../../shared/schemas/plain-text';
 
 /** Most map units one file may hold. */
 export const MAX_MAP_UNITS = 20_000;
@@ -14,6 +15,14 @@ export const MAX_MAP_UNITS = 20_000;
 export type SoilMapRead = { ok: true; units: MapUnitOutline[]; rejected: { index: number; reason: string }[]; warnings: string[] } | ImportFailure;
 
 const ACCEPTED = 'A soil map must be GeoJSON (.geojson or .json) or a zipped shapefile (a .zip with the .shp, .shx, .dbf and .prj of the map units)';
+/** Attribute names and text values without the characters jsonb cannot hold (NUL, lone surrogates) or that hide in names. */
+function cleanAttributes(value: unknown): unknown {
+  if (typeof value === 'string') return cleanText(value);
+  if (Array.isArray(value)) return value.map(cleanAttributes);
+  if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [cleanText(k), cleanAttributes(v)]));
+  return value;
+}
+
 const isFailure = (v: unknown): v is ImportFailure => typeof v === 'object' && v !== null && (v as ImportFailure).ok === false;
 
 export async function readSoilMapFile(input: { buffer: Uint8Array; originalName: string }): Promise<SoilMapRead> {
@@ -40,7 +49,7 @@ export async function readSoilMapFile(input: { buffer: Uint8Array; originalName:
   read.features.forEach((raw, i) => {
     const item = toParsedItem(raw, i + 1);
     if ('rejected' in item) rejected.push({ index: item.index, reason: item.rejected.replace(/field boundary/g, 'soil map unit') });
-    else units.push({ index: item.index, geometry: item.geometry, properties: raw.properties ?? {} });
+    else units.push({ index: item.index, geometry: item.geometry, properties: cleanAttributes(raw.properties ?? {}) as Record<string, unknown> });
   });
   return { ok: true, units, rejected, warnings: read.warnings };
 }

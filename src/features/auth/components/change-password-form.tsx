@@ -7,6 +7,7 @@ import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { ChangePassword } from '../../../../shared/schemas/people';
 import { useChangePassword } from '../api/change-password';
+import { PASSWORD_HINT } from '../../../../shared/schemas/password';
 
 export function ChangePasswordForm() {
   const change = useChangePassword();
@@ -16,7 +17,7 @@ export function ChangePasswordForm() {
   return (
     <form noValidate aria-label="Change password" className="flex flex-col gap-3" onSubmit={form.handleSubmit((v) => change.mutate(v, { onSuccess: () => form.reset() }))}>
       <TextField label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message ?? serverIssue('currentPassword')} {...form.register('currentPassword')} />
-      <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." error={errors.newPassword?.message ?? serverIssue('newPassword')} {...form.register('newPassword')} />
+      <TextField label="New password" type="password" autoComplete="new-password" hint={PASSWORD_HINT} error={errors.newPassword?.message ?? serverIssue('newPassword')} {...form.register('newPassword')} />
       {change.isSuccess ? <Notice>Saved. Every other place you were signed in is signed out.</Notice> : null}
       {change.isError && !serverIssue('currentPassword') && !serverIssue('newPassword') ? <Notice tone="error">{change.error.message}</Notice> : null}
       <div>

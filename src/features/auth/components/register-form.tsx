@@ -1,4 +1,4 @@
-// Create an account and its first farm (shared Register schema). Server issues on a named
+// Ask for an account and its first farm (shared Register schema); the rest follows by mail. Server issues on a named
 // input are shown under that input.
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect } from 'react';
@@ -10,11 +10,12 @@ import { TextField } from '../../../components/ui/text-field';
 import { isApiError } from '../../../lib/api-client';
 import { Register } from '../../../../shared/schemas/auth';
 import { useRegister } from '../api/register';
+import { PASSWORD_HINT } from '../../../../shared/schemas/password';
 
 type Values = z.input<typeof Register>;
 const NAMES: (keyof Values)[] = ['name', 'email', 'password', 'farmName'];
 
-export function RegisterForm({ onSuccess }: { onSuccess: () => void }) {
+export function RegisterForm() {
   const registerAccount = useRegister();
   const form = useForm<Values, unknown, z.output<typeof Register>>({
     resolver: zodResolver(Register),
@@ -33,12 +34,13 @@ export function RegisterForm({ onSuccess }: { onSuccess: () => void }) {
   }, [error, form]);
   const placedOnInputs = isApiError(error) && error.issues.some((i) => NAMES.includes(i.path.split('.')[0] as keyof Values));
 
+  if (registerAccount.isSuccess) return <Notice testId="register-sent">{registerAccount.data.message}</Notice>;
   return (
     <form
       noValidate
       aria-label="Create an account"
       className="flex flex-col gap-4"
-      onSubmit={form.handleSubmit((values) => registerAccount.mutate(values, { onSuccess }))}
+      onSubmit={form.handleSubmit((values) => registerAccount.mutate(values))}
     >
       <TextField label="Your name" autoComplete="name" data-testid="register-name" error={errors.name?.message} {...form.register('name')} />
       <TextField
@@ -53,7 +55,7 @@ export function RegisterForm({ onSuccess }: { onSuccess: () => void }) {
         label="Password"
         type="password"
         autoComplete="new-password"
-        hint="At least 10 characters."
+        hint={PASSWORD_HINT}
         data-testid="register-password"
         error={errors.password?.message}
         {...form.register('password')}

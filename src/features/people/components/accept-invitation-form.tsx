@@ -7,6 +7,7 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { TextField } from '../../../components/ui/text-field';
 import { NewPassword } from '../../../../shared/schemas/people';
+import { PASSWORD_HINT } from '../../../../shared/schemas/password';
 import { plainText } from '../../../../shared/schemas/plain-text';
 import type { InvitationView } from '../../../../shared/schemas/people';
 import { useAcceptInvitation } from '../api/accept-invitation';
@@ -31,7 +32,7 @@ export function AcceptInvitationForm({ token, invitation, onJoined }: { token: s
         label={invitation.hasAccount ? 'Password' : 'Choose a password'}
         type="password"
         autoComplete={invitation.hasAccount ? 'current-password' : 'new-password'}
-        hint={invitation.hasAccount ? undefined : 'At least 10 characters.'}
+        hint={invitation.hasAccount ? undefined : PASSWORD_HINT}
         data-testid="accept-password"
         error={errors.password?.message}
         {...form.register('password')}
