@@ -49,6 +49,6 @@ describe('simultaneous writes', () => {
     const res = await agent.post(`/api/farms/${farmId}/fields/import`).attach('file', file, 'again.geojson');
     expect(res.status).toBe(201);
     expect(res.body.created.map((f: { properties: { name: string } }) => f.properties.name)).toEqual(['B']);
-    expect(res.body.rejected[0].reason).toMatch(/feature 1 \(A\): geometry: the farm already has this outline as field "A"/);
+    expect(res.body.rejected[0]).toMatchObject({ index: 1, kind: 'same_as_field', reason: expect.stringContaining('"A"') });
   });
 });
