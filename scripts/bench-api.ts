@@ -10,6 +10,7 @@ import { parseArgs } from 'node:util';
 import { createSequelize } from '../server/db/sequelize';
 import { initModels } from '../server/models';
 import { DEMO_ACCOUNTS, DEMO_FARM_NAME, DEMO_PASSWORD } from '../server/db/seeders/demo-farm';
+import { getJson, signIn, waitForTerrain } from './bench-api/session';
 import { startServer, type ServerProcess } from './bench-api/server-process';
 import { makeAdvisorScenario } from './bench-api/advisor-scenario';
 import { writeDocSection } from './doc-section';
@@ -25,30 +26,6 @@ const { values: args } = parseArgs({
 const durationS = Number(args.duration);
 const scenario = { farms: Number(args.farms), fieldsPerFarm: Number(args['fields-per-farm']), advisorEmail: 'bench-advisor@fieldshed.test', password: DEMO_PASSWORD };
 const log = (line: string) => process.stderr.write(`${line}\n`);
-
-async function signIn(baseUrl: string, email: string): Promise<string> {
-  const res = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: DEMO_PASSWORD }) });
-  if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${await res.text()}`);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-}
-
-async function getJson<T>(baseUrl: string, path: string, cookie: string): Promise<T> {
-  const res = await fetch(`${baseUrl}${path}`, { headers: { cookie } });
-  if (res.status !== 200) throw new Error(`GET ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-/** The demo farm's terrain run (queued by the seed) must be done so the board reads its figures. */
-async function waitForTerrain(baseUrl: string, farmId: number, cookie: string): Promise<void> {
-  const until = Date.now() + 300_000;
-  for (;;) {
-    const { latestJob } = await getJson<{ latestJob: { state: string; message: string } | null }>(baseUrl, `/api/farms/${farmId}/elevation`, cookie);
-    if (!latestJob || latestJob.state === 'done') return;
-    if (latestJob.state === 'failed') throw new Error(`the demo terrain run failed: ${latestJob.message}`);
-    if (Date.now() > until) throw new Error('the demo terrain run did not finish in 5 minutes');
-    await new Promise((r) => setTimeout(r, 500));
-  }
-}
 
 async function timeOne(baseUrl: string, path: string, cookie: string): Promise<number> {
   const started = performance.now();

@@ -1,8 +1,10 @@
 // `npm run bench:terrain` (after scripts/bench-terrain.ts): the whole terrain job's computation as
-// the app runs it, whole process against whole process beside `gdaldem slope` (Debian's gdal-bin),
-// in alternating pairs on the same generated DEMs at 1 M, 4 M and 16 M cells. SAGA's chain is run
-// too when Debian's `saga_cmd` is installed; otherwise the section says it was skipped.
-// Writes its own section of docs/benchmarks.md. `--no-write` prints only; `--pairs 3` per size.
+// the app runs it, whole process against whole process beside `gdaldem slope` (Debian's gdal-bin)
+// and SAGA's chain (Debian's saga: fill, D8 accumulation, slope, LS as four saga_cmd runs on one
+// core), in rounds whose order rotates, on the same generated DEMs at 1 M, 4 M and 16 M cells.
+// A tool that is not installed is skipped and the section says so.
+// Writes its own section of docs/benchmarks.md. `--no-write` prints only; `--pairs 3` rounds per size;
+// `--sizes 1000,2000` cells per side; `--saga-sizes 1000,2000` the sizes SAGA runs at (default all).
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
@@ -12,8 +14,12 @@ import { writeDocSection } from './doc-section';
 
 const args = process.argv.slice(2);
 const pairsArg = args.indexOf('--pairs');
-const SIZES = [1000, 2000, 4000];
-const pairsFor = (n: number) => (pairsArg >= 0 ? Number(args[pairsArg + 1]) : n >= 4000 ? 3 : 5);
+const sizesArg = args.indexOf('--sizes');
+const SIZES = sizesArg >= 0 ? args[sizesArg + 1].split(',').map(Number) : [1000, 2000, 4000];
+const sagaArg = args.indexOf('--saga-sizes');
+/** Sizes SAGA's chain runs at (all by default); on a busy machine its 16 M-cell run alone can take many minutes. */
+const sagaAt = (n: number) => sagaArg < 0 || args[sagaArg + 1].split(',').map(Number).includes(n);
+const pairsFor = (n: number) => (pairsArg >= 0 ? Number(args[pairsArg + 1]) : n >= 4000 ? 2 : 3);
 const ORIGIN_X = 600000, ORIGIN_Y = 4700000;
 
 function makeDem(n: number): Float32Array {
@@ -36,35 +42,48 @@ const wall = (cmd: string, argv: string[]): { ms: number; stdout: string } => {
   if (r.status !== 0) throw new Error(`${cmd} failed: ${r.stderr}`);
   return { ms: performance.now() - t, stdout: r.stdout };
 };
+const nLogNGrowth = (a: number, b: number) => (b * Math.log(b)) / (a * Math.log(a));
 const median = (x: number[]) => [...x].sort((a, b) => a - b)[x.length >> 1];
 const fmt = (x: number, d = 0) => x.toFixed(d);
 const spread = (x: number[], d = 2) => `${fmt(median(x), d)} (${fmt(Math.min(...x), d)}–${fmt(Math.max(...x), d)})`;
 
-type JobRun = { wholeMs: number; stages: Array<{ stage: string; ms: number }>; fields: number; fieldsWithFigures: number; layerBytes: number; maxRssBytes: number };
+type JobRun = { wholeMs: number; inThreadMs: number; cpuMs: number; stages: Array<{ stage: string; ms: number }>; fields: number; fieldsWithFigures: number; layerBytes: number; maxRssBytes: number };
 const dir = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-bench-job-'));
 const tsx = path.resolve('node_modules/.bin/tsx');
 const gdalVersion = has('gdalinfo') ? spawnSync('gdalinfo', ['--version'], { encoding: 'utf8' }).stdout.trim() : '';
 const saga = has('saga_cmd');
-const results: Array<{ n: number; ratios: number[]; ourMs: number[]; gdalMs: number[]; jobs: JobRun[] }> = [];
+const sagaVersion = saga ? (spawnSync('saga_cmd', ['--version'], { encoding: 'utf8' }).stdout.match(/SAGA Version: (\S+)/)?.[1] ?? '') : '';
+/** SAGA's chain on `file`, one core: Wang & Liu fill, D8 contributing area (m²), Horn slope, Desmet & Govers LS. */
+function runSaga(file: string, n: number): number {
+  const out = (name: string) => path.join(dir, `saga-${name}-${n}.sdat`);
+  const steps: string[][] = [
+    ['ta_preprocessor', '4', '-ELEV', file, '-FILLED', out('filled'), '-MINSLOPE', '0.01'],
+    ['ta_hydrology', '0', '-ELEVATION', out('filled'), '-FLOW', out('area'), '-METHOD', '0', '-FLOW_UNIT', '1'],
+    ['ta_morphometry', '0', '-ELEVATION', out('filled'), '-SLOPE', out('slope'), '-ASPECT', out('aspect'), '-METHOD', '2', '-UNIT_SLOPE', '0'],
+    ['ta_hydrology', '22', '-SLOPE', out('slope'), '-AREA', out('area'), '-LS', out('ls'), '-CONV', '1', '-METHOD', '1'],
+  ];
+  return steps.reduce((ms, argv) => ms + wall('saga_cmd', ['--cores=1', '-f=q', ...argv]).ms, 0);
+}
+const results: Array<{ n: number; ratios: number[]; sagaRatios: number[]; ourMs: number[]; gdalMs: number[]; sagaMs: number[]; jobs: JobRun[] }> = [];
 try {
   for (const n of SIZES) {
     const file = path.join(dir, `dem-${n}.tif`);
     writeFileSync(file, writeGeoTiff({ width: n, height: n, samples: makeDem(n), originX: ORIGIN_X, originY: ORIGIN_Y, cellSizeX: 5, cellSizeY: 5, epsg: 32615, nodata: -9999 }));
-    const r = { n, ratios: [] as number[], ourMs: [] as number[], gdalMs: [] as number[], jobs: [] as JobRun[] };
+    const r = { n, ratios: [] as number[], sagaRatios: [] as number[], ourMs: [] as number[], gdalMs: [] as number[], sagaMs: [] as number[], jobs: [] as JobRun[] };
     for (let k = 0; k < pairsFor(n); k++) {
-      // Alternate which side goes first, so drift in the machine's load falls on both.
       const runGdal = () => (has('gdaldem') ? wall('gdaldem', ['slope', '-p', '-q', file, path.join(dir, `slope-${n}.tif`)]).ms : NaN);
       const runOurs = () => {
         const w = wall(tsx, ['scripts/terrain-job-once.ts', file, String(ORIGIN_X), String(ORIGIN_Y), String(n)]);
         r.jobs.push(JSON.parse(w.stdout.trim().split('\n').pop()!) as JobRun);
         return w.ms;
       };
-      let g: number, o: number;
-      if (k % 2 === 0) { g = runGdal(); o = runOurs(); } else { o = runOurs(); g = runGdal(); }
-      r.gdalMs.push(g);
-      r.ourMs.push(o);
+      // Rotate the order each round, so drift in the machine's load falls on every side.
+      const sides = [() => (r.gdalMs[k] = runGdal()), () => (r.ourMs[k] = runOurs()), () => (r.sagaMs[k] = saga && sagaAt(n) ? runSaga(file, n) : NaN)];
+      for (let j = 0; j < 3; j++) sides[(j + k) % 3]();
+      const [g, o, sg] = [r.gdalMs[k], r.ourMs[k], r.sagaMs[k]];
       r.ratios.push(o / g);
-      console.log(`${n}×${n} pair ${k + 1}: Fieldshed process ${fmt(o)} ms, gdaldem ${fmt(g)} ms, ratio ${fmt(o / g, 2)}`);
+      r.sagaRatios.push(o / sg);
+      console.log(`${n}×${n} round ${k + 1}: Fieldshed process ${fmt(o)} ms, gdaldem ${fmt(g)} ms, SAGA chain ${fmt(sg)} ms; Fieldshed ÷ gdaldem ${fmt(o / g, 2)}, ÷ SAGA ${fmt(o / sg, 3)}`);
     }
     results.push(r);
   }
@@ -86,11 +105,18 @@ const lines = [
   '  (palette PNGs), each field\'s figures (1 km² fields, 200×200 cells, 10-cell lanes; every third with a typed 60 m',
   '  slope length). Not included: the database writes and file storage of the job.',
   '- **gdaldem**: `gdaldem slope -p` (Horn slope only) from start to exit, on the same GeoTIFF.',
-  `- **SAGA**: ${saga ? 'run (see table)' : 'skipped: Debian\'s `saga` (saga_cmd) is not installed on this machine'}.`,
+  saga
+    ? `- **SAGA ${sagaVersion}**: four \`saga_cmd --cores=1\` processes one after the other, each from start to exit, the times summed:
+  fill (ta_preprocessor 4, Wang & Liu, minimum slope 0.01°), D8 contributing area in m² (ta_hydrology 0), slope by
+  Horn's plane (ta_morphometry 0, method 2), Desmet & Govers LS (ta_hydrology 22); each reads its input from a file
+  and writes its grid to one (SAGA's own format), with no map pictures and no field figures.`
+    : "- **SAGA**: skipped: Debian's `saga` (saga_cmd) is not installed on this machine.",
   '',
-  '| cells | pairs | Fieldshed process, ms | gdaldem process, ms | ratio Fieldshed ÷ gdaldem, median (min–max) | in-process job, ms | peak RSS, B/cell | layer PNGs, MB |',
-  '|---|---:|---:|---:|---|---:|---:|---:|',
-  ...results.map((r) => `| ${r.n}×${r.n} (${fmt((r.n * r.n) / 1e6)} M) | ${r.ratios.length} | ${fmt(median(r.ourMs))} | ${fmt(median(r.gdalMs))} | ${spread(r.ratios)} | ${fmt(median(r.jobs.map((j) => j.wholeMs)))} | ${fmt(Math.max(...r.jobs.map((j) => j.maxRssBytes)) / (r.n * r.n), 1)} | ${fmt(r.jobs[0].layerBytes / 1e6, 1)} |`),
+  'Each round runs the three sides one after the other, the order rotating from round to round; a ratio is taken within a round.',
+  '',
+  '| cells | rounds | Fieldshed process, ms | gdaldem process, ms | SAGA chain, ms | Fieldshed ÷ gdaldem, median (min–max) | Fieldshed ÷ SAGA, median (min–max) | job in process, ms | job in a running thread, ms | job CPU, ms | peak RSS, B/cell | layer PNGs, MB |',
+  '|---|---:|---:|---:|---:|---|---|---:|---:|---:|---:|---:|',
+  ...results.map((r) => `| ${r.n}×${r.n} (${fmt((r.n * r.n) / 1e6)} M) | ${r.ratios.length} | ${fmt(median(r.ourMs))} | ${fmt(median(r.gdalMs))} | ${saga && sagaAt(r.n) ? fmt(median(r.sagaMs)) : '—'} | ${spread(r.ratios)} | ${!saga ? 'skipped' : sagaAt(r.n) ? spread(r.sagaRatios, 3) : 'not run at this size'} | ${fmt(median(r.jobs.map((j) => j.wholeMs)))} | ${fmt(median(r.jobs.map((j) => j.inThreadMs)))} | ${fmt(median(r.jobs.map((j) => j.cpuMs)))} | ${fmt(Math.max(...r.jobs.map((j) => j.maxRssBytes)) / (r.n * r.n), 1)} | ${fmt(r.jobs[0].layerBytes / 1e6, 1)} |`),
   '',
   'Stages inside the job (median ms of the runs):',
   '',
@@ -98,7 +124,14 @@ const lines = [
   `|---|${results.map(() => '---:').join('|')}|`,
   ...stageRows(results[0].jobs).map((s, i) => `| ${s.name} | ${results.map((r) => fmt(stageRows(r.jobs)[i].ms)).join(' | ')} |`),
   '',
-  `Growth of the in-process job from 1 M to 16 M cells: ×${fmt(median(results[2].jobs.map((j) => j.wholeMs)) / median(results[0].jobs.map((j) => j.wholeMs)), 1)} (n·log n would give ×${fmt((16 * Math.log(16e6)) / Math.log(1e6), 1)}).`,
+  ...(results.length > 1
+    ? [`Growth of the in-process job from ${results[0].n}² to ${results.at(-1)!.n}² cells: ×${fmt(median(results.at(-1)!.jobs.map((j) => j.wholeMs)) / median(results[0].jobs.map((j) => j.wholeMs)), 1)} (n·log n would give ×${fmt(nLogNGrowth(results[0].n ** 2, results.at(-1)!.n ** 2), 1)}).`]
+    : []),
+  '- **job in process**: from reading the file to the answer, inside the Fieldshed process: the thread\'s start (~0.5 s, loading',
+  '  its TypeScript), decode, every stage, the pictures and field figures. **job in a running thread**: the same less the',
+  '  thread\'s start, as every run after the first one in a running server (the thread is kept while runs keep coming).',
+  '  **job CPU**: CPU time of the whole process over the job (its main thread only waits meanwhile), which a busy machine',
+  '  stretches far less than the wall-clock figures.',
   'Peak RSS is the whole process (Node, tsx, the thread, the file bytes and every grid), from `process.resourceUsage().maxRSS`.',
 ];
 console.log(lines.join('\n'));

@@ -9,7 +9,7 @@ import { readDem } from './read-dem';
 import { runTerrain } from './pipeline';
 import { renderLayer, type BoundsWgs84, type LayerKind, type LegendEntry, type RenderValues } from './render-layer';
 import { reprojectBoundary, converterBetween } from './reproject';
-import { rasterisePolygon, type GridFrame } from './rasterise-polygon';
+import { polygonSpans, type GridFrame } from './rasterise-polygon';
 import { fieldTerrainStats, type FieldTerrainStats } from './field-stats';
 import type { SlopeClass } from './slope-classes';
 import { LAYER_LABELS } from './layer-labels';
@@ -46,6 +46,7 @@ export type FarmTerrainOutput = {
 export async function runFarmTerrain(input: FarmTerrainInput, onProgress: ProgressFn): Promise<FarmTerrainOutput> {
   const { fields, slopeClasses } = input;
   if (fields.length > MAX_TERRAIN_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_TERRAIN_FIELDS}.`);
+  onProgress(0, 'decoding');
   // Taken out of the input, so the file's bytes can be freed as soon as they are decoded.
   const bytes = input.demBytes;
   input.demBytes = new ArrayBuffer(0);
@@ -61,7 +62,8 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
     const rings = reprojectBoundary(f.geometry, dem.epsg);
     if (!rings.ok) return;
     ringsByField.set(f.id, rings.rings);
-    for (const cell of rasterisePolygon(rings.rings, frame)) labels[cell] = idx + 1;
+    const spans = polygonSpans(rings.rings, frame);
+    for (let k = 0; k < spans.length; k += 2) labels.fill(idx + 1, spans[k], spans[k + 1]);
   });
   // A slope length typed on the Ground tab (terraces, diversions, field roads) caps the flow length.
   const capByLabel = new Float64Array(fields.length + 1).fill(NaN);
@@ -71,6 +73,9 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
     maxSlopeLengthMByLabel: capByLabel,
     onProgress: (f, stage) => onProgress(0.05 + 0.65 * f, stage),
   });
+
+  // The elevations are not needed past runTerrain: free them before the pictures are drawn.
+  dem.elevationM = new Float32Array(0);
 
   onProgress(0.7, 'drawing map layers');
   const sources: { kind: LayerKind; values: RenderValues | null }[] = [

@@ -6,7 +6,7 @@
 // mean and 90th percentile are within 0.005 % of the Float32 figures and class shares are the
 // same (breaks on a 0.005 % grid). Concentrated flow may come as the area grid or as its mask.
 import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
-import { rasterisePolygon, type GridFrame, type Ring } from './rasterise-polygon';
+import { polygonSpans, spanCellCount, type GridFrame, type Ring } from './rasterise-polygon';
 import { DEFAULT_SLOPE_CLASSES, type SlopeClass } from './slope-classes';
 import { decodeSlopePct, SLOPE_CODE_NODATA, slopeCodeAtLeast, SlopePctGrid } from './slope-pct-grid';
 
@@ -45,6 +45,9 @@ export type FieldTerrainStats = {
   };
 };
 
+/** Cells per slope code of the field being counted, left all zero between calls. */
+const codeCounts = new Uint32Array(SLOPE_CODE_NODATA);
+
 export type FieldStatsResult = { ok: true; stats: FieldTerrainStats } | { ok: false; reason: string };
 
 /** Figures for one field; { ok: false } when the field covers no DEM cell with data. */
@@ -61,49 +64,63 @@ export function fieldTerrainStats(args: FieldStatsArgs): FieldStatsResult {
   }
   const minAreaM2 = mask ? mask.minAreaM2 : (args.concentratedFlowMinAreaM2 ?? DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2);
   const areaGrid = mask ? null : (area as Float32Array | undefined);
-  const cells = rasterisePolygon(args.rings, grid);
-  if (cells.length === 0) return { ok: false, reason: 'the field covers no cell of the elevation model' };
+  const spans = polygonSpans(args.rings, grid);
+  const cellsInside = spanCellCount(spans);
+  if (cellsInside === 0) return { ok: false, reason: 'the field covers no cell of the elevation model' };
   const coded = slopePct instanceof SlopePctGrid ? slopePct.codes : null;
   const floats = coded ? null : (slopePct as Float32Array);
-  // Codes sort in the order of their slopes, so the percentile is taken on them and read back.
-  const values = coded ? new Uint16Array(cells.length) : new Float32Array(cells.length);
+  // Codes sort in the order of their slopes, so the percentile is read from a count of each code;
+  // Float32 slopes are sorted.
+  const values = coded ? null : new Float32Array(cellsInside);
+  let minCode = SLOPE_CODE_NODATA, maxCode = 0;
   const counts = new Float64Array(classes.length);
   const pctBreaks = classes.map((c) => c.minPct);
   const codeBreaks = pctBreaks.map(slopeCodeAtLeast);
   let count = 0, sum = 0, lsSum = 0, lsCount = 0, aSum = 0, aCount = 0;
   const flowCells: number[] = [];
-  for (let k = 0; k < cells.length; k++) {
-    const i = cells[k];
-    if (coded) {
-      const code = coded[i];
-      if (code !== SLOPE_CODE_NODATA) {
-        values[count++] = code;
-        sum += decodeSlopePct(code);
-        counts[classIndex(codeBreaks, code)]++;
+  for (let k = 0; k < spans.length; k += 2) {
+    for (let i = spans[k], end = spans[k + 1]; i < end; i++) {
+      if (coded) {
+        const code = coded[i];
+        if (code !== SLOPE_CODE_NODATA) {
+          count++;
+          codeCounts[code]++;
+          if (code < minCode) minCode = code;
+          if (code > maxCode) maxCode = code;
+          sum += decodeSlopePct(code);
+          counts[classIndex(codeBreaks, code)]++;
+        }
+      } else {
+        const s = floats![i];
+        if (s === s) {
+          values![count++] = s;
+          sum += s;
+          counts[classIndex(pctBreaks, s)]++;
+        }
       }
-    } else {
-      const s = floats![i];
-      if (s === s) {
-        values[count++] = s;
-        sum += s;
-        counts[classIndex(pctBreaks, s)]++;
-      }
+      if (args.ls) { const v = args.ls[i]; if (v === v) { lsSum += v; lsCount++; } }
+      if (args.soilLossTPerHaYr) { const v = args.soilLossTPerHaYr[i]; if (v === v) { aSum += v; aCount++; } }
+      if (mask ? mask.has(i) : areaGrid && areaGrid[i] >= minAreaM2) flowCells.push(i);
     }
-    if (args.ls) { const v = args.ls[i]; if (v === v) { lsSum += v; lsCount++; } }
-    if (args.soilLossTPerHaYr) { const v = args.soilLossTPerHaYr[i]; if (v === v) { aSum += v; aCount++; } }
-    if (mask ? mask.has(i) : areaGrid && areaGrid[i] >= minAreaM2) flowCells.push(i);
   }
   if (count === 0) return { ok: false, reason: 'the field covers only nodata cells of the elevation model' };
-  const sorted = values.subarray(0, count).sort();
   // nearest rank: the ⌈0.9·n⌉-th smallest value
-  const rank = sorted[Math.max(0, Math.ceil(0.9 * count) - 1)];
-  const p90 = coded ? decodeSlopePct(rank) : rank;
+  const rankAt = Math.max(0, Math.ceil(0.9 * count) - 1);
+  let p90: number;
+  if (coded) {
+    let code = minCode;
+    for (let seen = codeCounts[code]; seen <= rankAt; ) seen += codeCounts[++code];
+    p90 = decodeSlopePct(code);
+    codeCounts.fill(0, minCode, maxCode + 1);
+  } else {
+    p90 = values!.subarray(0, count).sort()[rankAt];
+  }
   const flowIdx = Int32Array.from(flowCells);
   return {
     ok: true,
     stats: {
       cellCount: count,
-      cellsWithoutData: cells.length - count,
+      cellsWithoutData: cellsInside - count,
       meanSlopePct: sum / count,
       p90SlopePct: p90,
       slopeClasses: classes.map((c, j) => ({ name: c.name, minPct: c.minPct, maxPct: c.maxPct, share: counts[j] / count })),

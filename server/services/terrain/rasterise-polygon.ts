@@ -6,8 +6,11 @@
 export type Ring = ReadonlyArray<ReadonlyArray<number>>;
 export type GridFrame = { width: number; height: number; originX: number; originY: number; cellSizeX: number; cellSizeY: number };
 
-/** Indices (row-major) of the cells whose centre is inside, in increasing order. */
-export function rasterisePolygon(rings: ReadonlyArray<Ring>, grid: GridFrame): Int32Array {
+/**
+ * The cells whose centre is inside, as runs along rows: pairs [first, end) of row-major cell
+ * indices, in increasing order (a few numbers per row instead of one per cell).
+ */
+export function polygonSpans(rings: ReadonlyArray<Ring>, grid: GridFrame): Int32Array {
   const edges: number[] = []; // x1, y1, x2, y2 per edge
   let minY = Infinity, maxY = -Infinity;
   for (const ring of rings) {
@@ -43,8 +46,23 @@ export function rasterisePolygon(rings: ReadonlyArray<Ring>, grid: GridFrame): I
       // cell centre x = originX + (c + 0.5)·cellSizeX inside [xs[k], xs[k+1])
       const cStart = Math.max(0, Math.ceil((xs[k] - originX) / cellSizeX - 0.5));
       const cEnd = Math.min(width - 1, Math.ceil((xs[k + 1] - originX) / cellSizeX - 0.5) - 1);
-      for (let c = cStart; c <= cEnd; c++) out.push(r * width + c);
+      if (cStart <= cEnd) out.push(r * width + cStart, r * width + cEnd + 1);
     }
   }
   return Int32Array.from(out);
+}
+
+/** Number of cells in spans from polygonSpans. */
+export function spanCellCount(spans: Int32Array): number {
+  let n = 0;
+  for (let k = 0; k < spans.length; k += 2) n += spans[k + 1] - spans[k];
+  return n;
+}
+
+/** Indices (row-major) of the cells whose centre is inside, in increasing order. */
+export function rasterisePolygon(rings: ReadonlyArray<Ring>, grid: GridFrame): Int32Array {
+  const spans = polygonSpans(rings, grid);
+  const out = new Int32Array(spanCellCount(spans));
+  for (let k = 0, j = 0; k < spans.length; k += 2) for (let i = spans[k]; i < spans[k + 1]; i++) out[j++] = i;
+  return out;
 }

@@ -3,7 +3,8 @@
 // get per-row metric cell sizes on WGS84 so slope comes out in true percent.
 // Assumptions, documented: elevations are metres; projected CRSs in feet are converted to metres
 // (ProjLinearUnitsGeoKey 9002/9003); rotated/sheared grids are refused.
-import { fromArrayBuffer } from 'geotiff';
+import { endianness } from 'node:os';
+import { fromArrayBuffer, type GeoTIFFImage } from 'geotiff';
 import { geographicCellSizeM } from './geographic-cell-size';
 import type { DemGrid } from './types';
 
@@ -59,7 +60,7 @@ export async function readDem(bytes: ArrayBuffer | Uint8Array): Promise<ReadDemR
   }
   const width = image.getWidth();
   const height = image.getHeight();
-  const raw = (await image.readRasters({ samples: [0], interleave: true })) as unknown as ArrayLike<number>;
+  const raw = (await uncompressedFloat32(image, buffer)) ?? ((await image.readRasters({ samples: [0], interleave: true })) as unknown as ArrayLike<number>);
   const nodata = image.getGDALNoData();
   const elevationM = toFloat32(raw, nodata);
   const cellSizeX = Math.abs(resolution[0]);
@@ -95,6 +96,30 @@ export async function readDem(bytes: ArrayBuffer | Uint8Array): Promise<ReadDemR
       nodata: nodata ?? null,
     },
   };
+}
+
+/**
+ * The samples of an uncompressed single-band Float32 GeoTIFF stored in strips in the machine's
+ * byte order, copied straight from the file's bytes into one grid (geotiff.js would copy each
+ * strip out first, then into the grid). Null for any other layout: readRasters reads those.
+ */
+async function uncompressedFloat32(image: GeoTIFFImage, buffer: ArrayBuffer): Promise<Float32Array | null> {
+  const dir = image.getFileDirectory();
+  const plain = Number(dir.getValue('Compression') ?? 1) === 1 && image.getSamplesPerPixel() === 1 && image.getSampleFormat(0) === 3 && image.getBitsPerSample(0) === 32;
+  if (!plain || image.isTiled || image.littleEndian !== (endianness() === 'LE')) return null;
+  const offsets = (await dir.loadValue('StripOffsets')) as ArrayLike<number>;
+  const counts = (await dir.loadValue('StripByteCounts')) as ArrayLike<number>;
+  const bytes = image.getWidth() * image.getHeight() * 4;
+  const out = new Float32Array(bytes / 4);
+  const outBytes = new Uint8Array(out.buffer);
+  let at = 0;
+  for (let k = 0; k < offsets.length && at < bytes; k++) {
+    const len = Math.min(counts[k], bytes - at);
+    if (offsets[k] + len > buffer.byteLength) return null;
+    outBytes.set(new Uint8Array(buffer, offsets[k], len), at);
+    at += len;
+  }
+  return at === bytes ? out : null;
 }
 
 function toFloat32(raw: ArrayLike<number>, nodata: number | null): Float32Array {

@@ -104,9 +104,14 @@ export function layerLegend(args: Pick<RenderArgs, 'kind' | 'slopeClasses' | 'co
   return colourerFor(args as RenderArgs).legend;
 }
 
-/** The palette index of cell i, for the kind of values given. */
-function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: number) => number } {
+/**
+ * The palette index of every grid cell, for the kind of values given, each kind in a loop of its
+ * own (one call per cell through a closure of four shapes cost more than the loop itself). A
+ * hillshade is its own index grid (entry v is grey v), so it is used as it is.
+ */
+function cellIndices(args: RenderArgs): { colourer: Colourer; cells: Uint8Array } {
   const { values } = args;
+  const n = values.length;
   if (values instanceof ContributingAreaMask) {
     if (args.kind !== 'concentrated-flow') throw new Error(`a ContributingAreaMask can only draw 'concentrated-flow', not '${args.kind}'`);
     if (args.concentratedFlowMinAreaM2 !== undefined && args.concentratedFlowMinAreaM2 !== values.minAreaM2) {
@@ -114,7 +119,10 @@ function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: numbe
     }
     const colourer = colourerFor({ ...args, concentratedFlowMinAreaM2: values.minAreaM2 });
     const on = colourer.index(Infinity);
-    return { colourer, pixel: (i) => (values.has(i) ? on : 0) };
+    const cells = new Uint8Array(n);
+    const bits = values.bits;
+    for (let i = 0; i < n; i++) if ((bits[i >> 3] >> (i & 7)) & 1) cells[i] = on;
+    return { colourer, cells };
   }
   const colourer = colourerFor(args);
   if (values instanceof SlopePctGrid) {
@@ -124,18 +132,20 @@ function pixelColourer(args: RenderArgs): { colourer: Colourer; pixel: (i: numbe
     const codeBreaks = classes.slice(1).map((c) => slopeCodeAtLeast(c.minPct));
     const byClass = classes.map((c, j) => colourer.index(j === 0 ? -Infinity : c.minPct));
     const codes = values.codes;
-    return {
-      colourer,
-      pixel: (i) => {
-        const code = codes[i];
-        if (code === SLOPE_CODE_NODATA) return 0;
-        let j = 0;
-        while (j < codeBreaks.length && code >= codeBreaks[j]) j++;
-        return byClass[j];
-      },
-    };
+    const cells = new Uint8Array(n);
+    for (let i = 0; i < n; i++) {
+      const code = codes[i];
+      if (code === SLOPE_CODE_NODATA) continue;
+      let j = 0;
+      while (j < codeBreaks.length && code >= codeBreaks[j]) j++;
+      cells[i] = byClass[j];
+    }
+    return { colourer, cells };
   }
-  return { colourer, pixel: (i) => colourer.index(values[i]) };
+  if (values instanceof Uint8Array && args.kind === 'hillshade') return { colourer, cells: values };
+  const cells = new Uint8Array(n);
+  for (let i = 0; i < n; i++) cells[i] = colourer.index(values[i]);
+  return { colourer, cells };
 }
 
 /** Renders one layer. { ok: false } when the grid's CRS is unknown. */
@@ -147,7 +157,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
   if (!toWgs.ok) return toWgs;
   const toMerc = converterBetween(grid.epsg, 3857);
   if (!toMerc.ok) return toMerc;
-  const { colourer, pixel } = pixelColourer(args);
+  const { colourer, cells } = cellIndices(args);
   const x0 = grid.originX, y0 = grid.originY, x1 = x0 + w * grid.cellSizeX, y1 = y0 - h * grid.cellSizeY;
   // Envelope of the grid's edge in Web Mercator (sampled along the edges, not just corners).
   let mx0 = Infinity, my0 = Infinity, mx1 = -Infinity, my1 = -Infinity;
@@ -159,10 +169,9 @@ export function renderLayer(args: RenderArgs): RenderResult {
       mx0 = Math.min(mx0, mx); my0 = Math.min(my0, my); mx1 = Math.max(mx1, mx); my1 = Math.max(my1, my);
     }
   }
-  const indices = new Uint8Array(w * h); // 0: transparent
-  if (args.noWarp) {
-    for (let i = 0; i < w * h; i++) indices[i] = pixel(i);
-  } else {
+  // 0: transparent. Unwarped, the cells' indices are the picture.
+  const indices = args.noWarp ? cells : new Uint8Array(w * h);
+  if (!args.noWarp) {
     // Lattice of source (col, row) positions for output pixels, every `step` pixels.
     const step = 32;
     const lw = Math.ceil(w / step) + 1, lh = Math.ceil(h / step) + 1;
@@ -185,7 +194,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
         const r = (1 - tj) * ((1 - tk) * latticeR[a] + tk * latticeR[a + 1]) + tj * ((1 - tk) * latticeR[b] + tk * latticeR[b + 1]);
         const ci = Math.floor(c), ri = Math.floor(r);
         if (ci < 0 || ri < 0 || ci >= w || ri >= h) continue;
-        indices[py * w + px] = pixel(ri * w + ci);
+        indices[py * w + px] = cells[ri * w + ci];
       }
     }
   }

@@ -1,5 +1,7 @@
 // The Field screen: one field, its season, and the tabs Outline · Ground · Soil · Cropping ·
-// Risk, with a small map of the field beside them.
+// Risk, with a small map of the field beside them. The Outline tab comes with the screen; the
+// others load when first opened, so their forms, charts and the engine are not fetched before it.
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from '../../../components/ui/notice';
 import { Loading } from '../../../components/ui/spinner';
@@ -14,16 +16,17 @@ import { RoleBadge } from '../../farms/components/role-badge';
 import { useField } from '../../fields/api/get-field';
 import { useFields } from '../../fields/api/get-fields';
 import { useAssessment } from '../../seasons/api/get-assessment';
-import { CroppingPanel } from '../../seasons/components/cropping-form';
 import { SeasonPicker } from '../../seasons/components/season-picker';
 import { useSeasonChoice } from '../../seasons/components/use-season-choice';
-import { SoilTab } from '../../soils/components/soil-tab';
 import { FieldMiniMap } from './field-mini-map';
 import { FIELD_TABS, useFieldTab } from './field-tabs';
-import { GroundTab } from './ground-tab';
 import { OutlineTab } from './outline-tab';
-import { RiskTab } from './risk-tab';
 import { OptionExtraContext, type OptionExtra } from './option-extra';
+
+const GroundTab = lazy(() => import('./ground-tab').then((m) => ({ default: m.GroundTab })));
+const SoilTab = lazy(() => import('../../soils/components/soil-tab').then((m) => ({ default: m.SoilTab })));
+const CroppingPanel = lazy(() => import('../../seasons/components/cropping-form').then((m) => ({ default: m.CroppingPanel })));
+const RiskTab = lazy(() => import('./risk-tab').then((m) => ({ default: m.RiskTab })));
 
 type Props = { farm: Farm; fieldId: number; units: Units; optionExtra?: OptionExtra };
 
@@ -99,27 +102,29 @@ export function FieldScreen({ farm, fieldId, units, optionExtra }: Props) {
         </div>
 
         <div role="tabpanel" id="field-tab-panel" aria-labelledby={`field-tab-${tab}`} className="min-w-0">
-          {needsSeason && !season ? (
-            seasons.isPending ? (
-              <Loading label="Loading the seasons…" />
+          <Suspense fallback={<Loading label="Opening the tab…" />}>
+            {needsSeason && !season ? (
+              seasons.isPending ? (
+                <Loading label="Loading the seasons…" />
+              ) : (
+                <Notice tone="caution" testId="no-season">
+                  This farm has no season yet.{role === 'farmer' ? ' Add one above to record cropping and see the risk.' : ' The farmer adds seasons.'}
+                </Notice>
+              )
+            ) : tab === 'outline' ? (
+              <OutlineTab field={f} units={units} />
+            ) : tab === 'ground' ? (
+              <GroundTab field={f} canEdit={canEdit} units={units} />
+            ) : tab === 'soil' ? (
+              <SoilTab fieldId={f.id} farmId={farm.id} role={role} />
+            ) : tab === 'cropping' ? (
+              <CroppingPanel fieldId={f.id} season={season!} canEdit={canEdit} units={units} />
             ) : (
-              <Notice tone="caution" testId="no-season">
-                This farm has no season yet.{role === 'farmer' ? ' Add one above to record cropping and see the risk.' : ' The farmer adds seasons.'}
-              </Notice>
-            )
-          ) : tab === 'outline' ? (
-            <OutlineTab field={f} units={units} />
-          ) : tab === 'ground' ? (
-            <GroundTab field={f} canEdit={canEdit} units={units} />
-          ) : tab === 'soil' ? (
-            <SoilTab fieldId={f.id} farmId={farm.id} role={role} />
-          ) : tab === 'cropping' ? (
-            <CroppingPanel fieldId={f.id} season={season!} canEdit={canEdit} units={units} />
-          ) : (
-            <OptionExtraContext.Provider value={optionExtra ?? null}>
-              <RiskTab farmId={farm.id} fieldId={f.id} season={season!} units={units} canEdit={canEdit} onOpenTab={setTab} />
-            </OptionExtraContext.Provider>
-          )}
+              <OptionExtraContext.Provider value={optionExtra ?? null}>
+                <RiskTab farmId={farm.id} fieldId={f.id} season={season!} units={units} canEdit={canEdit} onOpenTab={setTab} />
+              </OptionExtraContext.Provider>
+            )}
+          </Suspense>
         </div>
       </main>
 

@@ -1,14 +1,17 @@
 // The selected field: name (renamed in place by a farmer), area, perimeter, centre, overlaps.
-import { useState, type ReactNode } from 'react';
+import { lazy, Suspense, useState, type ReactNode } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
+import { Loading } from '../../../components/ui/spinner';
 import { formatArea, formatLength } from '../../../lib/units';
 import type { Units } from '../../../../shared/schemas/auth';
 import type { FieldFeature } from '../../../../shared/schemas/field';
 import { useDeleteField } from '../api/delete-field';
 import { fieldEditErrorMessage } from './conflict-message';
-import { RenameFieldForm } from './rename-field-form';
 import { OpenFieldLink } from '../../field-screen/components/open-field-link';
+
+// The form's libraries (react-hook-form, zod) load when a person first renames a field, not with the map.
+const RenameFieldForm = lazy(() => import('./rename-field-form').then((m) => ({ default: m.RenameFieldForm })));
 
 type Props = {
   field: FieldFeature;
@@ -38,7 +41,9 @@ export function FieldDetails({ field, units, canEdit, onClose, onDeleted, childr
         </Button>
       </div>
       {renaming ? (
-        <RenameFieldForm key={field.id} field={field} onDone={() => setRenaming(false)} />
+        <Suspense fallback={<Loading label="Opening the form…" />}>
+          <RenameFieldForm key={field.id} field={field} onDone={() => setRenaming(false)} />
+        </Suspense>
       ) : (
         <div className="flex flex-wrap items-center gap-2">
           <h2 id="field-details-heading" className="text-xl font-semibold" data-testid="field-details-name">

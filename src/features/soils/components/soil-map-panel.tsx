@@ -2,16 +2,19 @@
 // what was read (units, warnings, refused features), the attributes with sample values, and the
 // form that says which attribute gives texture, K, soil group, T and drainage. Farmer and
 // advisor only: a landowner gets a short line instead (the server answers 403).
-import { useId, useState, type DragEvent } from 'react';
+import { lazy, Suspense, useId, useState, type DragEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
+import { Loading } from '../../../components/ui/spinner';
 import { isApiError } from '../../../lib/api-client';
 import { useDeleteSoilMap } from '../api/delete-soil-map';
 import { useSoilMap } from '../api/get-soil-map';
 import { SOIL_MAP_EXTENSIONS, useUploadSoilMap } from '../api/upload-soil-map';
 import { SOIL_MAP_MAX_BYTES } from '../../../../shared/limits';
 import { formatDay } from './format-soil';
-import { SoilMapMappingForm } from './soil-map-mapping-form';
+
+// The mapping form (and the soil schemas it reads) loads once a farm has a soil map, not with the farm map.
+const SoilMapMappingForm = lazy(() => import('./soil-map-mapping-form').then((m) => ({ default: m.SoilMapMappingForm })));
 
 const MB = 1024 * 1024;
 
@@ -184,7 +187,9 @@ export function SoilMapPanel({ farmId, role }: SoilMapPanelProps) {
               </table>
             </div>
           </details>
-          <SoilMapMappingForm key={map.id} farmId={farmId} info={info.data} />
+          <Suspense fallback={<Loading label="Opening the form…" />}>
+            <SoilMapMappingForm key={map.id} farmId={farmId} info={info.data} />
+          </Suspense>
           <div className="flex flex-wrap items-center gap-2 border-t border-paper-edge pt-2">
             {confirmDelete ? (
               <>
