@@ -1,6 +1,6 @@
 // The name an imported feature gets from one of its attributes; the import preview on the client
 // and the import on the server read names the same way.
-import { cleanText } from './schemas/plain-text';
+import { cleanText } from './text-rules';
 
 /** Longest name kept (the FieldName schema in shared/schemas/field.ts allows 120). */
 export const MAX_NAME_LENGTH = 120;

@@ -7,7 +7,7 @@ import { readShapefileZip } from '../imports/read-shapefile-zip';
 import { openZip } from '../imports/read-zip';
 import { toParsedItem } from '../imports/to-parsed-item';
 import type { MapUnitOutline } from '../../models/soil-map-unit.queries';
-import { cleanText } from '../../../shared/schemas/plain-text';
+import { cleanText } from '../../../shared/text-rules';
 
 /** Most map units one file may hold. */
 export const MAX_MAP_UNITS = 20_000;
