@@ -94,7 +94,7 @@ export function gypsumPlan(ctx: SiteContext): PlanResult {
     costLines: spreadCosts(ctx, 'gypsum-per-t', q),
     effects: [
       sodic ? 'Replaces exchangeable sodium with calcium so the clay holds together and takes in water.' : 'May improve clay structure and water entry; results vary by soil.',
-      'The engine predicts no change in K or the curve number for gypsum (no published factor): A and runoff stay as they are.',
+      'No published factor gives gypsum a change in K or the curve number, so A and runoff are shown as they are.',
     ],
     cautions: cautionsFor('gypsum'),
   });

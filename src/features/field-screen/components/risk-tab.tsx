@@ -85,10 +85,17 @@ function Gaps({ gaps, farmId, onOpenTab }: { gaps: Gap[]; farmId: number; onOpen
   );
 }
 
+/** Problem clay (the clay itself) and wet ground (a seasonal water table) are separate verdicts. */
+function groundTitle(a: FieldAssessment): string {
+  if (a.problemClay && a.groundAdvice) return 'Problem clay on wet ground: amending will not fix it';
+  if (a.groundAdvice) return 'Wet ground: amending will not fix it';
+  return a.problemClay ? 'Problem clay' : 'Drainage';
+}
+
 function ProblemClay({ a }: { a: FieldAssessment }) {
   if (!a.problemClay && !a.groundAdvice && !a.drainageClass) return null;
   return (
-    <Notice title={a.problemClay ? 'Problem clay: amending will not fix this ground' : 'Drainage'} testId="assessment-problem-clay">
+    <Notice title={groundTitle(a)} testId="assessment-problem-clay">
       {a.drainageClass ? (
         <p>
           Drainage from the soil checks: <span className="font-semibold">{a.drainageClass}</span>.
