@@ -35,6 +35,7 @@ function steepPloughedSite(over: Partial<TreatmentSite> = {}): TreatmentSite {
     water: { concentratedFlowLengthM: 220, downslopeEdgeLengthM: 380 },
     prices: { ...EXAMPLE_PRICES.prices },
     currency: 'USD',
+    units: 'ha',
     ...over,
   };
 }
