@@ -4,7 +4,7 @@ import { kUsToSi, mmToIn } from '../erosion/units';
 import type { BoardReason } from '../schemas/assessment';
 import type { Units } from '../schemas/auth';
 import { formatCount, formatDepth, formatFactor, formatInches, formatShare } from './quantities';
-import { formatLength } from './units';
+import { formatArea } from './units';
 
 /** Runoff "55 of 105 mm" (or "2.6 of 4.1 in"): both figures in one unit, whole mm or 0.1 in. */
 function runoffWords(runoffMm: number, stormMm: number, units: Units): string {
@@ -23,11 +23,11 @@ export function boardReasonWords(r: BoardReason, units: Units): string {
     case 'much-runoff':
       return `much runoff (${runoffWords(r.runoffMm, r.stormMm, units)} in the design storm)`;
     case 'concentrated-flow':
-      return r.flowLengthM !== null
-        ? `water gathers along about ${formatLength(r.flowLengthM, units)}: a grassed waterway candidate`
+      return r.flowAreaHa !== null
+        ? `water gathers on about ${formatArea(r.flowAreaHa, units)} of the field: a grassed waterway candidate`
         : `water gathers in ${formatCount(r.cells)} cells of the elevation model: a grassed waterway candidate`;
     case 'problem-clay':
-      return r.clayPct !== null ? `clay ${formatShare(r.clayPct)}${r.textureClass ? `, ${r.textureClass}` : ''}: problem clay` : `${r.textureClass ?? 'clay'}: problem clay`;
+      return `problem clay: ${[r.clayPct !== null ? `${formatShare(r.clayPct)} clay` : null, r.textureClass ? `texture class ${r.textureClass}` : null].filter(Boolean).join(', ')}`;
     case 'wet-ground':
       return r.depthToGrayCm !== null
         ? `gray (redoximorphic) colours at ${formatDepth(r.depthToGrayCm, units)}${r.drainageClass ? `: ${r.drainageClass}` : ''}, a seasonal water table that amendments will not fix`

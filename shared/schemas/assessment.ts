@@ -65,8 +65,8 @@ export type BoardReason =
   | { kind: 'little-cover'; c: number }
   | { kind: 'erodible-soil'; kUs: number }
   | { kind: 'much-runoff'; runoffMm: number; stormMm: number }
-  /** flowLengthM: the flow cells times the cell size, about the length of the flow lines. */
-  | { kind: 'concentrated-flow'; cells: number; flowLengthM: number | null }
+  /** flowAreaHa: the ground of the elevation model's concentrated-flow cells. */
+  | { kind: 'concentrated-flow'; cells: number; flowAreaHa: number | null }
   | { kind: 'problem-clay'; clayPct: number | null; textureClass: string | null }
   | { kind: 'wet-ground'; depthToGrayCm: number | null; drainageClass: string | null };
 

@@ -1,6 +1,6 @@
 // One field's assessment for one season from its gathered inputs: the engine's answer, the
 // figures and reasons the priority board shows, and what went in. Pure.
-import { estimate, riskClassOf, ENGINE_VERSION } from '../../../shared/erosion';
+import { estimate, riskClassOf, ENGINE_VERSION, M2_PER_HA } from '../../../shared/erosion';
 import type { BoardReason, FieldAssessment, StoredBoardFigures } from '../../../shared/schemas/assessment';
 import type { EstimateInput, EstimateSuccess, Provenance } from '../../../shared/schemas/estimate';
 import { OVERRIDE_FACTORS } from '../../../shared/schemas/overrides';
@@ -56,7 +56,7 @@ function reasonsFor(a: FieldAssessment, soil: FieldSoilSummary, cellSizeM: numbe
     const storm = e.runoff?.rainfallMm;
     if (a.runoffMm != null && storm && a.runoffMm >= 0.5 * storm) out.push({ kind: 'much-runoff', runoffMm: a.runoffMm, stormMm: storm });
   }
-  if (a.concentratedFlowCells) out.push({ kind: 'concentrated-flow', cells: a.concentratedFlowCells, flowLengthM: cellSizeM ? a.concentratedFlowCells * cellSizeM : null });
+  if (a.concentratedFlowCells) out.push({ kind: 'concentrated-flow', cells: a.concentratedFlowCells, flowAreaHa: cellSizeM ? (a.concentratedFlowCells * cellSizeM ** 2) / M2_PER_HA : null });
   if (soil.problemClay) out.push({ kind: 'problem-clay', clayPct: soil.clayPct, textureClass: soil.textureClass });
   if (soil.notWorthAmending) out.push({ kind: 'wet-ground', depthToGrayCm: soil.depthToGrayCm, drainageClass: soil.drainageClass });
   return out;
