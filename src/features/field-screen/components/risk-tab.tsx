@@ -13,6 +13,7 @@ import { RiskBadge } from '../../../components/risk/risk-badge';
 import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../../lib/loss-units';
 import { FactorTable } from '../../estimate/components/factor-table';
 import { formatFigure } from '../../../lib/format-figure';
+import { formatCount } from '../../../lib/quantities';
 import { useAssessment } from '../../seasons/api/get-assessment';
 import { useFactorOverrides } from '../../seasons/api/get-factor-overrides';
 import { OVERRIDE_FACTORS, type OverrideFactor } from '../../../../shared/schemas/overrides';
@@ -166,12 +167,12 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
           {ro ? (
             <div className="flex flex-col gap-2 border-t border-paper-edge pt-2" data-testid="assessment-runoff">
               <dl className="grid gap-3 sm:grid-cols-3">
-                <Big label={`Runoff from a ${formatFigure(ro.rainfallMm)} mm design storm`} figure={runoffFigure(ro.runoffMm, units)} testId="assessment-runoff-depth" />
+                <Big label={`Runoff from a ${runoffFigure(ro.rainfallMm, units).main} design storm`} figure={runoffFigure(ro.runoffMm, units)} testId="assessment-runoff-depth" />
                 <Big label="Runoff volume from the field" figure={a.runoffM3 !== null ? volumeFigure(a.runoffM3, units) : null} testId="assessment-runoff-volume" />
                 <div className="flex flex-col">
                   <dt className="text-sm text-ink-soft">Curve number</dt>
                   <dd className="num text-2xl font-semibold">
-                    {formatFigure(ro.cn.value)}
+                    {formatCount(ro.cn.value)}
                     {ro.hsg ? <span className="block text-sm font-normal text-ink-soft">hydrologic soil group {ro.hsg}</span> : null}
                   </dd>
                 </div>
@@ -179,7 +180,7 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
             </div>
           ) : null}
           <p className="text-xs text-ink-soft">
-            Slope from the {a.lsSource ?? 'typed slope'}; engine {a.engineVersion}, worked out{' '}
+            Slope from the {a.lsSource ?? 'typed slope'}; method version {a.engineVersion}, worked out{' '}
             {new Date(a.computedAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}.
           </p>
         </section>
