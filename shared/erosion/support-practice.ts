@@ -138,7 +138,7 @@ export function supportPractice(
     base.notes.push(`strip cropping with rotation ${rotation}: ${STRIP_ROTATION_WORDS[rotation]}`);
     base.maxStripWidthM = maxStripWidthM;
     if (input.stripWidthM !== undefined && input.stripWidthM > maxStripWidthM) {
-      base.stripWidthWarning = `strips ${metres(input.stripWidthM)} wide are wider than the ${metres(maxStripWidthM)} AH-537 table 14 allows at ${formatSlope(slopePct)}: its P assumes strips no wider, so narrow them`;
+      base.stripWidthWarning = `strips ${metres(input.stripWidthM)} wide are wider than the ${metres(ftToM(row.stripMaxWidthFt))} AH-537 table 14 allows at ${formatSlope(slopePct)}: its P assumes strips no wider, so narrow them`;
       base.notes.push(base.stripWidthWarning);
     }
   }

@@ -11,7 +11,7 @@ import { kSiToUs, tonPerAcToTPerHa } from '../units';
 import { cautionsFor } from './cautions';
 import { cannot, costLine, offer, round2, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
-import { formatContent, formatFactor, formatRate, formatRateRange } from '../../format/quantities';
+import { formatContent, formatFactor, formatRate, formatRateRange, formatShare } from '../../format/quantities';
 
 const WET_GROUND =
   'shallow gray or mottled subsoil means a high water table: amendments will not fix this ground; raised or no-dig beds, designed drainage or permanent cover are the answer here';
@@ -45,7 +45,7 @@ export function limePlan(ctx: SiteContext): PlanResult {
         amount: round2(v.tonnes),
         unit: 't',
         origin: { kind: v.flag === 'pub' ? 'published-table' : 'rule-of-thumb', source: { title: v.source }, detail: v.reason },
-        note: `${formatRate(v.tPerHa, ctx.site.units)} of product: ${formatRate(tonPerAcToTPerHa(v.pureTonPerAc), ctx.site.units)} pure lime ÷ effective CCE ${formatContent(v.effectiveCcePct)} (CCE ${formatContent(v.product.ccePct)} × fineness ${formatFactor(v.finenessEfficiency)}, ${v.finenessRule})${exampleProduct ? '; product figures are example values — replace with your lime\'s label' : ''}`,
+        note: `${formatRate(v.tPerHa, ctx.site.units)} of product: ${formatRate(tonPerAcToTPerHa(v.pureTonPerAc), ctx.site.units)} pure lime ÷ effective CCE ${formatContent(v.effectiveCcePct)} (CCE ${formatShare(v.product.ccePct)} × fineness ${formatFactor(v.finenessEfficiency)}, ${v.finenessRule})${exampleProduct ? '; product figures are example values — replace with your lime\'s label' : ''}`,
       },
     ],
     costLines: spreadCosts(ctx, 'lime-per-t', v),
@@ -77,7 +77,7 @@ export function gypsumPlan(ctx: SiteContext): PlanResult {
     const v: SodicGypsumResult = r.value;
     q = v;
     origin = { kind: 'derived', source: { title: 'USDA Handbook 60 (gypsum requirement)' }, detail: `ESP ${espPct} % → ${v.espTargetPct} %, CEC ${cecCmolPerKg} cmolc/kg, top ${v.depthCm} cm` };
-    note = `${formatRate(v.pureGypsumTPerHa, ctx.site.units)} pure gypsum × exchange efficiency ${formatFactor(v.exchangeEfficiency)} ÷ purity ${formatContent(v.purityPct)}${bulkDensityMgPerM3 === null ? '; bulk density 1.47 Mg/m³ taken (USDA Handbook 60\'s acre-foot)' : ''}`;
+    note = `${formatRate(v.pureGypsumTPerHa, ctx.site.units)} pure gypsum × exchange efficiency ${formatFactor(v.exchangeEfficiency)} ÷ purity ${formatShare(v.purityPct)}${bulkDensityMgPerM3 === null ? '; bulk density 1.47 Mg/m³ taken (USDA Handbook 60\'s acre-foot)' : ''}`;
   } else if (problemClay) {
     q = gypsumQuantity({ areaHa: ctx.site.areaHa });
     origin = { kind: 'rule-of-thumb' };
