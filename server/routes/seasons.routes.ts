@@ -53,7 +53,7 @@ export function seasonsRoutes(sequelize: Sequelize, jobs?: JobQueue): { farms: R
     res.json(await putClimateFromRecord(sequelize, actorOf(req), farmOf(req), req.file?.buffer, req.body));
   });
   farms.get('/:farmId/board', loadFarmMembership, async (req, res) => {
-    res.json(await farmBoard(sequelize, viewerOf(req), seasonParam(req)));
+    res.json(await farmBoard(sequelize, viewerOf(req), seasonParam(req), req.user!.units));
   });
 
   const fields = Router();
@@ -76,7 +76,7 @@ export function seasonsRoutes(sequelize: Sequelize, jobs?: JobQueue): { farms: R
   // An advisor's board across every client farm given to them.
   const board = Router();
   board.get('/', async (req, res) => {
-    res.json(await advisorBoard(sequelize, req.user!.id, seasonParam(req)));
+    res.json(await advisorBoard(sequelize, req.user!.id, seasonParam(req), req.user!.units));
   });
   return { farms, fields, board };
 }

@@ -30,15 +30,15 @@ export function treatmentsRoutes(sequelize: Sequelize): { farms: Router; fields:
   });
   farms.get('/:farmId/treatments', loadFarmMembership, planners, async (req, res) => {
     const season = seasonOf(req);
-    res.json(await farmTreatments(sequelize, { farmId: farmOf(req), ...(season ? { seasonLabel: season } : {}) }));
+    res.json(await farmTreatments(sequelize, { farmId: farmOf(req), units: req.user!.units, ...(season ? { seasonLabel: season } : {}) }));
   });
   farms.post('/:farmId/budget-plan', loadFarmMembership, planners, validate(BudgetPlanRequest), async (req, res) => {
-    res.json(await budgetPlan(sequelize, farmOf(req), req.body));
+    res.json(await budgetPlan(sequelize, farmOf(req), req.body, req.user!.units));
   });
 
   const fields = Router();
   fields.get('/:fieldId/treatments', loadFieldMembership, planners, async (req, res) => {
-    res.json(await fieldTreatmentsAnswer(sequelize, farmOf(req), res.locals.fieldId as number, seasonOf(req)));
+    res.json(await fieldTreatmentsAnswer(sequelize, farmOf(req), res.locals.fieldId as number, seasonOf(req), req.user!.units));
   });
   return { farms, fields };
 }

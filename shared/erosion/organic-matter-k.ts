@@ -3,6 +3,7 @@
 // texture. The ratio carries the nomograph's OM effect onto whatever K the field has now.
 import { fail, succeed, type Result } from './assert';
 import { NOMOGRAPH_OM_CAP_PCT, tryKFactorNomograph, type PermeabilityCode, type StructureCode } from './k-factor';
+import { formatContent } from '../format/quantities';
 
 /** Organic-matter rise assumed after several years of compost, % (rule of thumb). */
 export const ASSUMED_OM_RISE_PCT = 0.5;
@@ -31,7 +32,7 @@ export function kAfterOrganicMatterRise(input: OmKInput): Result<OmKResult> {
   }
   if (Math.abs(sandPct + siltPct + clayPct - 100) > 2) return fail(`sand, silt and clay add up to ${sandPct + siltPct + clayPct} %, not 100 %`);
   if (om >= NOMOGRAPH_OM_CAP_PCT) {
-    return fail(`organic matter is already ${om} %, at or above the nomograph's ${NOMOGRAPH_OM_CAP_PCT} % limit: more organic matter shows no lower K`);
+    return fail(`organic matter is already ${formatContent(om)}, at or above the nomograph's ${NOMOGRAPH_OM_CAP_PCT} % limit: more organic matter shows no lower K`);
   }
   const structure = input.structure ?? 2;
   const permeability = input.permeability ?? 3;
@@ -46,7 +47,7 @@ export function kAfterOrganicMatterRise(input: OmKInput): Result<OmKResult> {
   // AH-703 eq. 3-1 ratio: K_new = K_now × K_nomo(OM + rise) / K_nomo(OM)
   const ratio = after.value.us / before.value.us;
   const assumptions = [
-    `organic matter ${om} % → ${Math.min(om + rise, NOMOGRAPH_OM_CAP_PCT)} % (an assumed +${rise} % after years of compost; rule of thumb)`,
+    `organic matter ${formatContent(om)} → ${formatContent(Math.min(om + rise, NOMOGRAPH_OM_CAP_PCT))} (an assumed +${formatContent(rise)} after years of compost; rule of thumb)`,
     'silt stands for silt + very fine sand in the nomograph (very fine sand not measured)',
   ];
   if (input.structure === undefined || input.permeability === undefined) assumptions.push('structure and permeability taken as fine granular and moderate, where their terms add nothing');

@@ -5,6 +5,8 @@ import contourJson from '../../data/reference/contour-p.json';
 import { assertNonNegative, fail, succeed, type Result } from './assert';
 import type { Flag } from './cover';
 import { ftToM } from './units';
+import { formatSlope } from '../format/quantities';
+import { formatLength } from '../format/units';
 
 /** The rotation columns of AH-537 table 14. */
 export type StripRotation = 'A' | 'B' | 'C';
@@ -109,7 +111,7 @@ export function supportPractice(
     assertNonNegative('terraceIntervalM', interval);
     base.effectiveSlopeLengthM = Math.min(interval, slopeLengthM);
     lengthForLimitM = base.effectiveSlopeLengthM;
-    base.notes.push(`slope length taken as the terrace interval, ${round(base.effectiveSlopeLengthM)} m (AH-537)`);
+    base.notes.push(`slope length taken as the terrace interval, ${metres(base.effectiveSlopeLengthM)} (AH-537)`);
     base.cautions.push(TERRACE_CAUTION);
   }
 
@@ -136,7 +138,7 @@ export function supportPractice(
     base.notes.push(`strip cropping with rotation ${rotation}: ${STRIP_ROTATION_WORDS[rotation]}`);
     base.maxStripWidthM = maxStripWidthM;
     if (input.stripWidthM !== undefined && input.stripWidthM > maxStripWidthM) {
-      base.stripWidthWarning = `strips ${round(input.stripWidthM)} m wide are wider than the ${maxStripWidthM} m AH-537 table 14 allows at ${round(slopePct)} %: its P assumes strips no wider, so narrow them`;
+      base.stripWidthWarning = `strips ${metres(input.stripWidthM)} wide are wider than the ${metres(ftToM(row.stripMaxWidthFt))} AH-537 table 14 allows at ${formatSlope(slopePct)}: its P assumes strips no wider, so narrow them`;
       base.notes.push(base.stripWidthWarning);
     }
   }
@@ -152,7 +154,7 @@ export function supportPractice(
       maxLengthM,
       notes: [
         ...base.notes,
-        `slope length ${round(lengthForLimitM)} m is beyond the ${maxLengthM} m limit for ${practice} at ${round(slopePct)} %: the practice loses its effect, P = 1${practice === 'terraces' ? '; narrow the terrace interval' : '; shorten the slope (terraces, diversions) for it to work'}`,
+        `slope length ${metres(lengthForLimitM)} is beyond the ${metres(maxLengthM)} limit for ${practice} at ${formatSlope(slopePct)}: the practice loses its effect, P = 1${practice === 'terraces' ? '; narrow the terrace interval' : '; shorten the slope (terraces, diversions) for it to work'}`,
       ],
       source,
       flag,
@@ -162,3 +164,5 @@ export function supportPractice(
 }
 
 const round = (x: number) => Math.round(x * 10) / 10;
+/** The P table's notes are in SI; the treatment options word their own in the reader's units. */
+const metres = (m: number) => formatLength(m, 'ha');

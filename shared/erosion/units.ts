@@ -38,6 +38,7 @@ export const mToFt = (m: number): number => m / M_PER_FT;
 
 export const inToMm = (inches: number): number => inches * MM_PER_IN;
 export const mmToIn = (mm: number): number => mm / MM_PER_IN;
+export const cmToIn = (cm: number): number => (cm * 10) / MM_PER_IN;
 
 export const inPerHToUmPerS = (inPerH: number): number => inPerH * UM_PER_S_PER_IN_PER_H;
 export const umPerSToInPerH = (umPerS: number): number => umPerS / UM_PER_S_PER_IN_PER_H;

@@ -55,10 +55,24 @@ export type StoredBoardFigures = {
   riskClass: RiskClass | null;
   problemClay: boolean;
   gaps: Gap[];
-  /** Short reasons for the rank, e.g. "steep (LS 3.1)", "bare after soybean". */
-  reasons: string[];
+  /** What drives the rank, as values; the board writes them in the reader's units. */
+  reasons: BoardReason[];
 };
 
+/** One driver of a field's rank (rules of thumb, common practice); words by shared/format/board-reasons. */
+export type BoardReason =
+  | { kind: 'steep-slope'; ls: number }
+  | { kind: 'little-cover'; c: number }
+  | { kind: 'erodible-soil'; kUs: number }
+  | { kind: 'much-runoff'; runoffMm: number; stormMm: number }
+  /** flowAreaHa: the ground of the elevation model's concentrated-flow cells. */
+  | { kind: 'concentrated-flow'; cells: number; flowAreaHa: number | null }
+  | { kind: 'problem-clay'; clayPct: number | null; textureClass: string | null }
+  | { kind: 'wet-ground'; depthToGrayCm: number | null; drainageClass: string | null };
+
 /** A board row: the field as it is now, with its stored figures; the farm's name on the advisor's board. */
-export type BoardRow = { fieldId: number; farmId: number; farmName?: string; name: string; areaHa: number } & StoredBoardFigures;
+export type BoardRow = { fieldId: number; farmId: number; farmName?: string; name: string; areaHa: number } & Omit<StoredBoardFigures, 'reasons'> & {
+  /** The drivers of the rank in the reader's units, e.g. "steep or long slope (LS 3.1)". */
+  reasons: string[];
+};
 export type Board = { season: string; rows: BoardRow[] };

@@ -4,6 +4,9 @@
 import { z } from 'zod';
 
 /** A number field with a message that names it. */
+/** The T an estimate accepts, US t/ac/yr (NSSH part 618 assigns 1–5; a margin either side). */
+export const T_TON_PER_AC_YR_RANGE = { min: 0.5, max: 10 } as const;
+
 const num = (field: string, min: number, max: number, unit = '') =>
   z
     .number({ error: `${field} must be a number` })
@@ -171,7 +174,7 @@ export const EstimateInput = z.object({
   c: CInput,
   p: PInput.default({ from: 'practice', practice: 'none' }),
   /** Soil-loss tolerance T, t/ac/yr (1–5); 5 when omitted. */
-  tTonPerAcYr: num('tTonPerAcYr', 0.5, 10, ' t/ac/yr').optional(),
+  tTonPerAcYr: num('tTonPerAcYr', T_TON_PER_AC_YR_RANGE.min, T_TON_PER_AC_YR_RANGE.max, ' t/ac/yr').optional(),
   /** Field area, ha: gives tonnes per year and runoff volume. */
   areaHa: num('areaHa', 0, 100000, ' ha').optional(),
   runoff: RunoffInput.optional(),

@@ -12,6 +12,7 @@ const navClass = ({ isActive }: { isActive: boolean }) =>
 
 type Props = {
   farmName?: string;
+  /** The screen's name; on one thing's screen (a field), that thing's name instead. */
   screen: string;
   /** The caller's role on the farm in view: farmers and advisors also get Treatments and budget and the Season plan; a landowner the approved plan. */
   role?: Role;
@@ -27,17 +28,26 @@ export function AppHeader({ farmName, screen, role, menu }: Props) {
       <Link to={paths.farms.getHref()} className="font-serif text-xl font-semibold tracking-tight text-clay-dark">
         Fieldshed
       </Link>
+      {/* Where you are, widest first: the farm (a link to its map), then the screen or the field. */}
       <nav aria-label="Where you are" className="flex min-w-0 items-center gap-2 text-sm text-ink-soft">
-        <span aria-hidden="true">/</span>
-        <span>{screen}</span>
         {farmName ? (
           <>
             <span aria-hidden="true">/</span>
-            <span className="truncate font-semibold text-ink" data-testid="farm-name">
-              {farmName}
-            </span>
+            {farmId && /^\d+$/.test(farmId) ? (
+              <Link to={paths.farmMap.getHref(farmId)} className="truncate font-semibold text-ink hover:underline" data-testid="farm-name">
+                {farmName}
+              </Link>
+            ) : (
+              <span className="truncate font-semibold text-ink" data-testid="farm-name">
+                {farmName}
+              </span>
+            )}
           </>
         ) : null}
+        <span aria-hidden="true">/</span>
+        <span className="truncate" data-testid="screen-name">
+          {screen}
+        </span>
       </nav>
       <div className="ml-auto flex flex-wrap items-center gap-x-2 gap-y-2 max-sm:-mx-4 max-sm:w-[calc(100%+2rem)] max-sm:flex-nowrap max-sm:overflow-x-auto max-sm:whitespace-nowrap max-sm:px-4 max-sm:pb-1">
         {farmId && /^\d+$/.test(farmId) ? (

@@ -7,6 +7,7 @@ import { Loading } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/get-me';
 import { UserMenu } from '../features/auth/components/user-menu';
 import { useFarm } from '../features/farms/api/get-farm';
+import { useFields } from '../features/fields/api/get-fields';
 import { FieldScreen } from '../features/field-screen/components/field-screen';
 import type { OptionExtra } from '../features/field-screen/components/option-extra';
 import { AddOptionButton } from '../features/plans/components/add-option-button';
@@ -17,7 +18,9 @@ export function FieldPage() {
   const fieldId = Number(params.fieldId);
   const farm = useFarm(farmId);
   const me = useMe();
-  const header = <AppHeader screen="Field" farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
+  const fields = useFields(farmId);
+  const fieldName = fields.data?.features.find((f) => f.id === fieldId)?.properties.name;
+  const header = <AppHeader screen={fieldName ?? 'Field'} farmName={farm.data?.name} role={farm.data?.role} menu={<UserMenu />} />;
   // Beside each treatment option on the Risk tab: add it to the season's plan in one click.
   const optionExtra: OptionExtra = ({ fieldId: id, season, option }) => <AddOptionButton farmId={farmId} season={season} fieldId={id} optionId={option.id} />;
   const bad = !Number.isInteger(farmId) || farmId <= 0 || !Number.isInteger(fieldId) || fieldId <= 0;

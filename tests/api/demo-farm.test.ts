@@ -66,10 +66,79 @@ describe('the demo farm', () => {
       expect(r.aOverT).toBeGreaterThan(0);
     }
     const names = board.rows.map((r: { name: string }) => r.name);
-    // The scenario: steep, ploughed continuous corn loses most; permanent grass least (AH-537 ordering of C).
+    // The scenario: a long slope in chisel-tilled continuous corn loses most; permanent grass least (AH-537 ordering of C).
     expect(names[0]).toBe('Long Slope');
     expect(names.indexOf('East Pasture')).toBeGreaterThan(names.indexOf('Mill Hill'));
     expect(board.rows[0].reasons.length).toBeGreaterThan(0);
+  });
+
+  it('lands its fields where real farms do: the worst a few times T, the rest spread from well under T to about twice it', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const board = (await farmer.get(`/api/farms/${farm.id}/board?season=2027`)).body;
+    type Row = { name: string; aOverT: number; soilLossTPerHaYr: number; toleranceTPerHaYr: number };
+    const by = Object.fromEntries((board.rows as Row[]).map((r) => [r.name, r]));
+    // T 5 t/ac/yr = 11.2 t/ha/yr for these deep loess soils (NSSH part 618; AH-703 app. A: 1 t/ac = 2.2417 t/ha).
+    expect(by['Long Slope'].toleranceTPerHaYr).toBeCloseTo(11.2, 1);
+    // Long Slope by hand: R 2754 MJ·mm/(ha·h·yr) from 890 mm (Renard & Freimund 1994, from memory) × K 0.045
+    // (Williams eq., 9/69/22, OM 2.9 %: 0.34 US × 0.1317) × LS about 1.6 (DEM, 7.5 % mean slope) × C about 0.21
+    // (corn, chisel, 35 % residue; AH-703 ch. 5 table range 0.20–0.30) × P 1 ≈ 43 t/ha/yr (19 US t/ac/yr), A/T ≈ 3.9.
+    expect(by['Long Slope'].soilLossTPerHaYr).toBeGreaterThan(35);
+    expect(by['Long Slope'].soilLossTPerHaYr).toBeLessThan(50);
+    expect(by['Long Slope'].aOverT).toBeGreaterThan(3);
+    expect(by['Long Slope'].aOverT).toBeLessThan(5);
+    // Contoured soybean within the 60 m contouring limit at 6–8 % (AH-537, P 0.5): about twice T.
+    expect(by['Mill Hill'].aOverT).toBeGreaterThan(1.5);
+    expect(by['Mill Hill'].aOverT).toBeLessThan(3);
+    const ratios = (board.rows as Row[]).map((r) => r.aOverT);
+    expect(ratios.filter((x) => x > 1).length).toBeGreaterThanOrEqual(3);
+    expect(ratios.filter((x) => x < 0.5).length).toBeGreaterThanOrEqual(3);
+  });
+
+  it('prints no figure with more digits than it carries in what people read, in hectares and in acres', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const fields = (await farmer.get(`/api/farms/${farm.id}/fields`)).body.features as { id: number }[];
+    // Raw floating point ("12.498867301083864 %", "1466.3499") or a long figure without separators.
+    const raw = /\d\.\d{4,}|(?<![\d.,:#-])\d{5,}(?!\d)/;
+    const notRead = new Set(['id', 'colour', 'geometry', 'engineVersion', 'computedAt', 'url', 'createdAt', 'updatedAt']);
+    const texts = (v: unknown, out: string[] = []): string[] => {
+      if (typeof v === 'string') out.push(v);
+      else if (Array.isArray(v)) v.forEach((x) => texts(x, out));
+      else if (v && typeof v === 'object') for (const [k, x] of Object.entries(v)) if (!notRead.has(k)) texts(x, out);
+      return out;
+    };
+    for (const units of ['ha', 'ac']) {
+      expect((await farmer.patch('/api/auth/me').send({ units })).status).toBe(200);
+      const answers = [
+        (await farmer.get(`/api/farms/${farm.id}/board?season=2027`)).body,
+        (await farmer.get(`/api/farms/${farm.id}/plans?season=2027`)).body,
+        (await farmer.get(`/api/farms/${farm.id}/treatments?season=2027`)).body,
+        (await farmer.post(`/api/farms/${farm.id}/budget-plan`).send({ season: '2027', budget: 1500 })).body,
+      ];
+      for (const f of fields) {
+        for (const p of ['assessment?season=2027', 'treatments?season=2027', 'terrain', 'soil-summary']) answers.push((await farmer.get(`/api/fields/${f.id}/${p}`)).body);
+      }
+      const bad = answers.flatMap((a) => texts(a)).filter((t) => raw.test(t));
+      expect([units, bad]).toEqual([units, []]);
+    }
+    await farmer.patch('/api/auth/me').send({ units: 'ha' });
+  });
+
+  it('writes the board reasons in the reader\'s units', async () => {
+    const farmer = await farmerAgent();
+    const [farm] = (await farmer.get('/api/farms')).body;
+    const reasonsOf = async () => ((await farmer.get(`/api/farms/${farm.id}/board?season=2027`)).body.rows as { name: string; reasons: string[] }[]).find((r) => r.name === 'Creek Bottom')!.reasons.join(' | ');
+    const si = await reasonsOf();
+    expect(si).toMatch(/of 105 mm in the design storm/);
+    expect(si).toMatch(/colours at 15 cm/);
+    await farmer.patch('/api/auth/me').send({ units: 'ac' });
+    const us = await reasonsOf();
+    await farmer.patch('/api/auth/me').send({ units: 'ha' });
+    // 105 mm = 4.1 in, 15 cm = 5.9 in (25.4 mm to the inch).
+    expect(us).toMatch(/of 4\.1 in in the design storm/);
+    expect(us).toMatch(/colours at 5\.9 in/);
+    expect(us).not.toMatch(/\d (mm|cm|ha)\b/);
   });
 
   it('flags the clay bottom as problem clay and steers it away from amendments', async () => {

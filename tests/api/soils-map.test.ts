@@ -193,8 +193,9 @@ describe('soil map intersected with fields', () => {
     // No gray recorded in the samples: the map's dominant drainage class (somewhat poorly, 60 %) stands.
     expect(s.body.drainageClass).toBe('somewhat poorly drained');
     expect(s.body.notWorthAmending).toBe(true);
-    expect(s.body.problemClay).toBe(true);
-    expect(s.body.problemClayReasons).toEqual(['mapped as somewhat poorly drained: a seasonal water table that amendments will not fix']);
+    // A wet loam is wet ground, not problem clay (SSM ch. 3: loam has under 27 % clay).
+    expect(s.body.problemClay).toBe(false);
+    expect(s.body.problemClayReasons).toEqual([]);
   });
 
   it('weights K over the part of the field the map covers, and says how much that is', async () => {

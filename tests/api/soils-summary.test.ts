@@ -25,11 +25,9 @@ describe('field soil summary', () => {
     expect(s.textureClass).toBe('clay');
     // drainage key (drainage-key.json): gray < 25 cm → poorly drained, not worth amending [practice]
     expect(s).toMatchObject({ sampleCount: 1, depthToGrayCm: 20, drainageClass: 'poorly drained', notWorthAmending: true, problemClay: true });
-    expect(s.problemClayReasons).toEqual([
-      'clay 50 % (40 % or more)',
-      'texture class clay',
-      'gray (redoximorphic) colours at 20 cm: poorly drained, a seasonal water table that amendments will not fix',
-    ]);
+    // Problem clay names the clay only (SSM ch. 3: the clay classes start at 40 % clay); the gray
+    // colours give the separate not-worth-amending verdict above.
+    expect(s.problemClayReasons).toEqual(['clay 50 % (40 % or more)', 'texture class clay']);
     // NEH 630 ch. 7 Table 7-1: water table (gray) within 60 cm, not drained → D
     expect(s.hsg).toBe('D');
     expect(s.hsgShares).toEqual([{ group: 'D', share: 1 }]);
@@ -65,6 +63,24 @@ describe('field soil summary', () => {
     expect(s.hsg).toBe('B');
     expect(s.problemClay).toBe(false);
     expect(s.problemClayReasons).toEqual([]);
+  });
+
+  it('does not call a wet silty clay loam problem clay: the gray colours give the wet-ground verdict alone', async () => {
+    const { agent, fieldId } = await fieldWithAgent();
+    await agent.post(`/api/fields/${fieldId}/soil-samples`).send({ kind: 'lab', label: 'Toe slope', sandPct: 8, siltPct: 58, clayPct: 34, organicMatterPct: 3, depthToGrayCm: 22 });
+    const s = (await agent.get(`/api/fields/${fieldId}/soil-summary`)).body;
+    // SSM ch. 3: 8/58/34 → silty clay loam (27 ≤ clay < 40, sand ≤ 20), below the 40 % where the clay classes start.
+    expect(s.textureClass).toBe('silty clay loam');
+    // drainage key (drainage-key.json): gray < 25 cm → poorly drained, not worth amending [practice]
+    expect(s).toMatchObject({ drainageClass: 'poorly drained', notWorthAmending: true, problemClay: false, problemClayReasons: [] });
+  });
+
+  it('calls a silty clay problem clay at 40 % clay, where the SSM clay classes start', async () => {
+    const { agent, fieldId } = await fieldWithAgent();
+    await agent.post(`/api/fields/${fieldId}/soil-samples`).send({ kind: 'lab', label: 'Flat', sandPct: 10, siltPct: 50, clayPct: 40, organicMatterPct: 3 });
+    const s = (await agent.get(`/api/fields/${fieldId}/soil-summary`)).body;
+    // SSM ch. 3: 10/50/40 → silty clay (clay ≥ 40, silt ≥ 40)
+    expect(s).toMatchObject({ textureClass: 'silty clay', problemClay: true, problemClayReasons: ['clay 40 % (40 % or more)', 'texture class silty clay'] });
   });
 
   it('gives a feel-test-only field its class and K from the table by texture and OM', async () => {

@@ -20,9 +20,9 @@ const soils = JSON.parse(readFileSync('data/demo/soils-2027.json', 'utf8')) as {
 /** A demo field by its key in the demo files, with the slope typed for it. */
 export type DemoLikeField = { key: string; name: string; slopePct: number };
 
-/** The demo's worst field (steep, ploughed continuous corn) and two milder ones. */
+/** The demo's worst field (a long slope in chisel-tilled continuous corn) and two milder ones. */
 export const DEMO_LIKE_FIELDS: DemoLikeField[] = [
-  { key: 'long-slope', name: 'Long Slope', slopePct: 10 },
+  { key: 'long-slope', name: 'Long Slope', slopePct: 8 },
   { key: 'mill-hill', name: 'Mill Hill', slopePct: 7 },
   { key: 'hay-ground', name: 'Hay Ground', slopePct: 5 },
 ];

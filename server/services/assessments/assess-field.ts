@@ -1,7 +1,7 @@
 // One field's assessment for one season from its gathered inputs: the engine's answer, the
 // figures and reasons the priority board shows, and what went in. Pure.
-import { estimate, riskClassOf, ENGINE_VERSION } from '../../../shared/erosion';
-import type { FieldAssessment, StoredBoardFigures } from '../../../shared/schemas/assessment';
+import { estimate, riskClassOf, ENGINE_VERSION, M2_PER_HA } from '../../../shared/erosion';
+import type { BoardReason, FieldAssessment, StoredBoardFigures } from '../../../shared/schemas/assessment';
 import type { EstimateInput, EstimateSuccess, Provenance } from '../../../shared/schemas/estimate';
 import { OVERRIDE_FACTORS } from '../../../shared/schemas/overrides';
 import { originWords, type Origin } from '../../../shared/schemas/provenance';
@@ -44,20 +44,21 @@ function withOverrides(e: EstimateSuccess, overrides: GatheredInputs['overrides'
   return { ...e, factors };
 }
 
-/** Words beside a rank: rules of thumb for what drives the loss (common practice, no single source). */
-function reasonsFor(a: FieldAssessment): string[] {
-  const out: string[] = [];
+/** What drives a rank: rules of thumb (common practice, no single source), as values for the board to word. */
+function reasonsFor(a: FieldAssessment, soil: FieldSoilSummary, cellSizeM: number | null): BoardReason[] {
+  const out: BoardReason[] = [];
   const e = a.estimate;
   if (e) {
-    if (e.factors.ls.value >= 1.5) out.push(`steep or long slope (LS ${e.factors.ls.value.toFixed(1)})`);
-    if (e.factors.c.value >= 0.2) out.push(`little cover (C ${e.factors.c.value.toFixed(2)})`);
-    if (e.factors.k.us && e.factors.k.us.value >= 0.4) out.push(`erodible soil (K ${e.factors.k.us.value.toFixed(2)} US)`);
+    if (e.factors.ls.value >= 1.5) out.push({ kind: 'steep-slope', ls: e.factors.ls.value });
+    if (e.factors.c.value >= 0.2) out.push({ kind: 'little-cover', c: e.factors.c.value });
+    if (e.factors.k.us && e.factors.k.us.value >= 0.4) out.push({ kind: 'erodible-soil', kUs: e.factors.k.us.value });
     // Half or more of the design storm running off (common practice, no single source).
     const storm = e.runoff?.rainfallMm;
-    if (a.runoffMm != null && storm && a.runoffMm >= 0.5 * storm) out.push(`much runoff (${a.runoffMm.toFixed(0)} of ${storm.toFixed(0)} mm in the design storm)`);
+    if (a.runoffMm != null && storm && a.runoffMm >= 0.5 * storm) out.push({ kind: 'much-runoff', runoffMm: a.runoffMm, stormMm: storm });
   }
-  if (a.concentratedFlowCells) out.push(`water gathers in ${a.concentratedFlowCells} cells: a grassed waterway candidate`);
-  if (a.problemClay) out.push(...a.problemClayReasons);
+  if (a.concentratedFlowCells) out.push({ kind: 'concentrated-flow', cells: a.concentratedFlowCells, flowAreaHa: cellSizeM ? (a.concentratedFlowCells * cellSizeM ** 2) / M2_PER_HA : null });
+  if (soil.problemClay) out.push({ kind: 'problem-clay', clayPct: soil.clayPct, textureClass: soil.textureClass });
+  if (soil.notWorthAmending) out.push({ kind: 'wet-ground', depthToGrayCm: soil.depthToGrayCm, drainageClass: soil.drainageClass });
   return out;
 }
 
@@ -103,7 +104,7 @@ export function assessField(g: GatheredInputs, computedAt: Date): AssessedField 
     riskClass: results.riskClass,
     problemClay: results.problemClay,
     gaps,
-    reasons: reasonsFor(results),
+    reasons: reasonsFor(results, soil, g.terrain?.cellSizeM ?? null),
   };
   return { estimateInput: input, results, boardRow };
 }

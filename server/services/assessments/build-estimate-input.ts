@@ -6,6 +6,7 @@ import type { AssessmentInput, Gap } from '../../../shared/schemas/assessment';
 import { OVERRIDE_SPECS, type FactorOverride } from '../../../shared/schemas/overrides';
 import type { Origin } from '../../../shared/schemas/provenance';
 import type { GatheredInputs } from './gathered-inputs';
+import { formatCount } from '../../../shared/format/quantities';
 
 /** Slope length assumed for the support-practice limit when only a DEM gives the slope (common practice, no single source). */
 const ASSUMED_SLOPE_LENGTH_M = 50;
@@ -79,10 +80,10 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
       label: 'Mean slope',
       value: `${fmt(slopePct)} %`,
       origin: { kind: 'derived', source: { title: 'Horn 1981 slope of the elevation model' } },
-      note: `elevation model, ${g.terrain.cellCount} cells${g.terrain.upToDate ? '' : ' (boundary changed: being recomputed)'}`,
+      note: `elevation model, ${formatCount(g.terrain.cellCount)} cells${g.terrain.upToDate ? '' : ' (boundary changed: being recomputed)'}`,
     });
     if (g.terrain.meanLS != null) {
-      lsFromGrid = { value: g.terrain.meanLS, source: 'Desmet & Govers 1996 grid L × RUSLE S (McCool et al. 1987), D8 flow', method: `mean of ${g.terrain.cellCount} cells of the elevation model` };
+      lsFromGrid = { value: g.terrain.meanLS, source: 'Desmet & Govers 1996 grid L × RUSLE S (McCool et al. 1987), D8 flow', method: `mean of ${formatCount(g.terrain.cellCount)} cells of the elevation model` };
     }
   } else if (g.ground?.slopePct != null) {
     slopePct = g.ground.slopePct;

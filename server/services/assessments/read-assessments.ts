@@ -4,6 +4,7 @@
 // and season) is stored first.
 import type { Sequelize } from 'sequelize';
 import type { Board, FieldAssessment, StoredBoardFigures } from '../../../shared/schemas/assessment';
+import type { Units } from '../../../shared/schemas/auth';
 import type { EstimateSuccess } from '../../../shared/schemas/estimate';
 import { Assessment } from '../../models';
 import { advisorBoardRecords, farmBoardRecords, type BoardRecord } from '../../models/assessment.queries';
@@ -36,21 +37,21 @@ async function withMissingStored(sequelize: Sequelize, records: BoardRecord[], r
 }
 
 /** GET /api/farms/:farmId/board: every field of the farm (a landowner's own only), ranked; one query when all are stored. */
-export async function farmBoard(sequelize: Sequelize, viewer: Viewer, seasonLabel: string | undefined): Promise<Board> {
+export async function farmBoard(sequelize: Sequelize, viewer: Viewer, seasonLabel: string | undefined, units: Units): Promise<Board> {
   const owner = viewer.role === 'landowner' ? { ownerMembershipId: viewer.membershipId } : {};
   const read = () => farmBoardRecords(sequelize, { farmId: viewer.farmId, ...owner, ...(seasonLabel ? { seasonLabel } : {}) });
   const first = await read();
   if (!first.season) throw seasonNotFound(seasonLabel);
   const records = await withMissingStored(sequelize, first.records, async () => (await read()).records);
-  return presentBoard(first.season.label, records, false);
+  return presentBoard(first.season.label, records, false, units);
 }
 
 /** GET /api/board: every field of every farm the user advises, each farm's season by that label or its newest. */
-export async function advisorBoard(sequelize: Sequelize, userId: number, seasonLabel: string | undefined): Promise<Board> {
+export async function advisorBoard(sequelize: Sequelize, userId: number, seasonLabel: string | undefined, units: Units): Promise<Board> {
   const read = () => advisorBoardRecords(sequelize, { userId, seasonLabel });
   const first = await read();
   const records = await withMissingStored(sequelize, first.records, async () => (await read()).records);
-  return presentBoard(seasonLabel ?? [...first.seasons].sort().reverse().join(', '), records, true);
+  return presentBoard(seasonLabel ?? [...first.seasons].sort().reverse().join(', '), records, true, units);
 }
 
 /** Each field's stored estimate for a season (for the per-cell soil-loss layer), storing any missing first. */

@@ -36,7 +36,8 @@ async function plannedActions(viewer: PlanViewer, season: string): Promise<{ act
 }
 
 export async function farmExportRecords(sequelize: Sequelize, viewer: PlanViewer, seasonLabel: string | undefined): Promise<ExportRecords> {
-  const board = await farmBoard(sequelize, viewer, seasonLabel);
+  // The exports carry figures, not the board's reasons, so the reasons' units do not matter here.
+  const board = await farmBoard(sequelize, viewer, seasonLabel, 'ha');
   const farm = await Farm.findByPk(viewer.farmId, { attributes: ['name'], rejectOnEmpty: true });
   const fields = await visibleFields(sequelize, viewer);
   const { actions, currency } = await plannedActions(viewer, board.season);

@@ -148,7 +148,8 @@ export async function addOption(sequelize: Sequelize, actor: Actor, planId: numb
   if (!field || field.farmId !== found.farmId) {
     throw badRequest('invalid_input', 'fieldId: there is no field with that id on this farm', { issues: [{ path: 'fieldId', message: 'there is no field with that id on this farm' }] });
   }
-  const treatments = await fieldTreatmentsAnswer(sequelize, found.farmId, input.fieldId, found.season!.label);
+  // Only the option's typed quantities and costs go into the plan, so the notes' units do not matter here.
+  const treatments = await fieldTreatmentsAnswer(sequelize, found.farmId, input.fieldId, found.season!.label, 'ha');
   const option = treatments.ok ? treatments.options.find((o) => o.id === input.optionId) : undefined;
   if (!option) {
     const message = `optionId: the field has no treatment option "${input.optionId}" for season ${found.season!.label}`;

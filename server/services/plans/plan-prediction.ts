@@ -63,6 +63,7 @@ export function predictFromOptions(actions: PlanAction[], options: FarmTreatment
 export async function predictPlan(plan: { farmId: number; season: string; actions: PlanAction[] }): Promise<PlanPrediction> {
   const fieldIds = [...new Set(plan.actions.map((a) => a.fieldId))];
   if (fieldIds.length === 0) return { fields: [], tonnesSavedPerYr: 0 };
-  const options = await farmTreatments(Plan.sequelize!, { farmId: plan.farmId, seasonLabel: plan.season, fieldIds });
+  // The prediction carries figures and the options' effects; the plan is read in hectare words for now.
+  const options = await farmTreatments(Plan.sequelize!, { farmId: plan.farmId, seasonLabel: plan.season, fieldIds, units: 'ha' });
   return predictFromOptions(plan.actions, options);
 }

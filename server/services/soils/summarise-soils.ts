@@ -18,6 +18,7 @@ import type { FieldSoilSummary } from '../../../shared/schemas/soils';
 import type { Origin } from '../../../shared/schemas/provenance';
 import type { SoilSample } from '../../models';
 import type { MapAggregate } from './field-soil-map';
+import { formatShare } from '../../../shared/format/quantities';
 
 /** What the summary reads of each sample. */
 export type SampleFigures = Pick<
@@ -27,8 +28,9 @@ export type SampleFigures = Pick<
 
 /** Organic matter taken when no sample gives it, for the K table only (common practice). */
 export const ASSUMED_OM_PCT = 2;
-/** Clay at or above this is problem clay (the clay classes of the SSM triangle start at 40 %). */
+/** Clay at or above this is problem clay: the clay and silty clay classes of the SSM ch. 3 triangle start at 40 %. */
 export const PROBLEM_CLAY_PCT = 40;
+/** The SSM ch. 3 classes named for clay (sandy clay from 35 % clay with over 45 % sand); the clay loams are not among them. */
 export const PROBLEM_CLAY_CLASSES: readonly string[] = ['clay', 'silty clay', 'sandy clay'];
 
 const mean = (xs: (number | null)[]): number | null => {
@@ -83,14 +85,13 @@ export function summariseSoils(samples: SampleFigures[], map: MapAggregate): Fie
   // Drainage: the shallowest gray of any sample (or no gray down to the deepest look), else the map.
   let drainageClass: string | null = null;
   let notWorthAmending = false;
-  let drainageFrom: 'samples' | 'map' | null = null;
   const describedTo = samples.map((s) => s.describedToCm).filter((d): d is number => d !== null);
   const verdict = depthToGrayCm !== null
     ? drainageVerdict({ depthToGrayCm })
     : describedTo.length ? drainageVerdict({ depthToGrayCm: null, describedToCm: Math.max(...describedTo) }) : null;
-  if (verdict?.ok) [drainageClass, notWorthAmending, drainageFrom] = [verdict.value.drainageClass, verdict.value.notWorthAmending, 'samples'];
+  if (verdict?.ok) [drainageClass, notWorthAmending] = [verdict.value.drainageClass, verdict.value.notWorthAmending];
   else if (map.drainageClass) {
-    [drainageClass, drainageFrom] = [map.drainageClass, 'map'];
+    drainageClass = map.drainageClass;
     notWorthAmending = DEFAULT_DRAINAGE_KEY.notWorthAmendingClasses.includes(map.drainageClass);
   }
 
@@ -136,16 +137,11 @@ export function summariseSoils(samples: SampleFigures[], map: MapAggregate): Fie
     hsgShares = hsg ? [{ group: hsg, share: 1 }] : [];
   }
 
+  // Problem clay is about the clay alone (SSM ch. 3 texture classes); a wet subsoil is its own
+  // verdict (notWorthAmending), whatever the texture: a wet silty clay loam is not problem clay.
   const problemClayReasons: string[] = [];
-  if (clayPct !== null && clayPct >= PROBLEM_CLAY_PCT) problemClayReasons.push(`clay ${round1(clayPct)} % (${PROBLEM_CLAY_PCT} % or more)`);
+  if (clayPct !== null && clayPct >= PROBLEM_CLAY_PCT) problemClayReasons.push(`clay ${formatShare(clayPct)} (${PROBLEM_CLAY_PCT} % or more)`);
   if (textureClass && PROBLEM_CLAY_CLASSES.includes(textureClass)) problemClayReasons.push(`texture class ${textureClass}${textureFrom === 'map' ? ' (soil map)' : ''}`);
-  if (notWorthAmending) {
-    problemClayReasons.push(
-      drainageFrom === 'samples' && depthToGrayCm !== null
-        ? `gray (redoximorphic) colours at ${round1(depthToGrayCm)} cm: ${drainageClass}, a seasonal water table that amendments will not fix`
-        : `mapped as ${drainageClass}: a seasonal water table that amendments will not fix`,
-    );
-  }
 
   return {
     sampleCount: samples.length,

@@ -5,6 +5,9 @@ import type { Sequelize } from 'sequelize';
 import { planBudget } from '../../../shared/erosion';
 import type { BudgetField } from '../../../shared/erosion/treatments/types';
 import type { BudgetPlan, BudgetPlanRequest, FarmTreatmentsAnswer } from '../../../shared/schemas/treatments';
+import type { Units } from '../../../shared/schemas/auth';
+import { tonnesFigure } from '../../../shared/format/loss-units';
+import { formatMoney } from '../../../shared/format/money';
 import { farmTreatments } from './farm-treatments.service';
 
 type Goal = BudgetPlan['goal'];
@@ -12,8 +15,6 @@ type Goal = BudgetPlan['goal'];
 /** Points on the soil-saved-against-money curve. */
 const CURVE_POINTS = 16;
 
-const money = (x: number, currency: string) => `${Math.round(x).toLocaleString('en-US')} ${currency}`;
-const tonnes = (x: number) => `${x >= 100 ? Math.round(x).toLocaleString('en-US') : x.toFixed(1)} t`;
 
 /** Every field still above T with options that save soil, as planBudget takes them. */
 function budgetFields(farm: FarmTreatmentsAnswer): BudgetField[] {
@@ -26,7 +27,8 @@ function budgetFields(farm: FarmTreatmentsAnswer): BudgetField[] {
   return out;
 }
 
-function explain(farm: FarmTreatmentsAnswer, plan: BudgetPlan, candidates: BudgetField[]): string[] {
+function explain(farm: FarmTreatmentsAnswer, plan: BudgetPlan, candidates: BudgetField[], units: Units): string[] {
+  const money = (x: number) => formatMoney(x, plan.currency);
   const lines: string[] = [];
   lines.push(
     plan.goal === 'most-soil'
@@ -39,16 +41,16 @@ function explain(farm: FarmTreatmentsAnswer, plan: BudgetPlan, candidates: Budge
   if (unassessed.length) lines.push(`${unassessed.map((f) => f.name).join(', ')} cannot be planned yet: ${unassessed.length === 1 ? 'its' : 'their'} assessment is missing inputs.`);
   const chosen = plan.choices.filter((c) => c.optionId);
   if (chosen.length) {
-    lines.push(`It spends ${money(plan.spent, plan.currency)} of ${money(plan.budget, plan.currency)} and saves ${tonnes(plan.tonnesSavedPerYr)} of soil a year; ${plan.fieldsUnderT} ${plan.fieldsUnderT === 1 ? 'field ends' : 'fields end'} under T.`);
+    lines.push(`It spends ${money(plan.spent)} of ${money(plan.budget)} and saves ${tonnesFigure(plan.tonnesSavedPerYr, units).main} of soil; ${plan.fieldsUnderT} ${plan.fieldsUnderT === 1 ? 'field ends' : 'fields end'} under T.`);
   } else if (candidates.length) {
     const cheapest = Math.min(...candidates.flatMap((f) => f.options.map((o) => o.cost)));
-    lines.push(`No option fits the budget: the cheapest that saves soil costs ${money(cheapest, plan.currency)}.`);
+    lines.push(`No option fits the budget: the cheapest that saves soil costs ${money(cheapest)}.`);
   } else lines.push('No field above T has an option that saves soil.');
   const left = candidates.filter((c) => !plan.choices.find((p) => p.fieldId === c.fieldId && p.optionId));
   for (const c of left) {
     const name = farm.fields.find((f) => f.fieldId === c.fieldId)?.name ?? `field ${c.fieldId}`;
     const cheapest = Math.min(...c.options.map((o) => o.cost));
-    if (chosen.length) lines.push(`${name} gets nothing this time: its cheapest option costs ${money(cheapest, plan.currency)}, and the money did more on other fields.`);
+    if (chosen.length) lines.push(`${name} gets nothing this time: its cheapest option costs ${money(cheapest)}, and the money did more on other fields.`);
   }
   return lines;
 }
@@ -70,9 +72,9 @@ function curveOf(candidates: BudgetField[], goal: Goal, asked: number): BudgetPl
   return [...budgets].sort((a, b) => a - b).map((budget) => ({ budget, tonnesSavedPerYr: planBudget({ budget, fields: candidates, goal }).tonnesSaved }));
 }
 
-export async function budgetPlan(sequelize: Sequelize, farmId: number, request: BudgetPlanRequest): Promise<BudgetPlan> {
+export async function budgetPlan(sequelize: Sequelize, farmId: number, request: BudgetPlanRequest, units: Units): Promise<BudgetPlan> {
   const goal: Goal = request.goal ?? 'most-soil';
-  const farm = await farmTreatments(sequelize, { farmId, seasonLabel: request.season });
+  const farm = await farmTreatments(sequelize, { farmId, seasonLabel: request.season, units });
   const candidates = budgetFields(farm);
   const answer = planBudget({ budget: request.budget, fields: candidates, goal });
   const optionOf = (fieldId: number, optionId: string | null) => {
@@ -102,6 +104,6 @@ export async function budgetPlan(sequelize: Sequelize, farmId: number, request: 
     explanation: [],
     curve: curveOf(candidates, goal, request.budget),
   };
-  plan.explanation = explain(farm, plan, candidates);
+  plan.explanation = explain(farm, plan, candidates, units);
   return plan;
 }

@@ -4,6 +4,7 @@
 import type { Sequelize } from 'sequelize';
 import { fieldTreatments } from '../../../shared/erosion';
 import type { TreatmentOption } from '../../../shared/erosion/treatments/types';
+import type { Units } from '../../../shared/schemas/auth';
 import type { FarmTreatmentsAnswer, FieldTreatmentsAnswer } from '../../../shared/schemas/treatments';
 import { Assessment, Field, FieldTerrain } from '../../models';
 import { refreshAssessments } from '../assessments/refresh-assessments';
@@ -12,7 +13,8 @@ import { fieldSoilSummaries } from '../soils/field-soil-summary';
 import { readPrices } from './prices.service';
 import { treatmentSiteOf } from './treatment-site';
 
-type Scope = { farmId: number; seasonLabel?: string; fieldIds?: number[] };
+/** units: the reader's, for the options' notes. */
+type Scope = { farmId: number; seasonLabel?: string; fieldIds?: number[]; units: Units };
 
 async function storedAssessments(sequelize: Sequelize, farmId: number, seasonId: number, fieldIds: number[]) {
   const read = () => Assessment.findAll({ where: { seasonId, fieldId: fieldIds }, attributes: ['fieldId', 'inputs', 'results'] });
@@ -67,7 +69,7 @@ export async function farmTreatments(sequelize: Sequelize, scope: Scope): Promis
           gaps: stored?.results.gaps ?? [],
         };
       } else {
-        const site = treatmentSiteOf({ estimateInput: input, areaHa, perimeterM: f.perimeterM, soil: soils.get(f.id)!, terrain: terrain.get(f.id) ?? null, prices });
+        const site = treatmentSiteOf({ estimateInput: input, areaHa, perimeterM: f.perimeterM, soil: soils.get(f.id)!, terrain: terrain.get(f.id) ?? null, prices, units: scope.units });
         const res = fieldTreatments(site);
         answer = res.ok ? { ...base, ok: true, site, ...res.value } : { ...base, ok: false, reason: res.reason, gaps: [] };
       }
@@ -77,7 +79,7 @@ export async function farmTreatments(sequelize: Sequelize, scope: Scope): Promis
 }
 
 /** GET /api/fields/:fieldId/treatments */
-export async function fieldTreatmentsAnswer(sequelize: Sequelize, farmId: number, fieldId: number, seasonLabel: string | undefined): Promise<FieldTreatmentsAnswer> {
-  const farm = await farmTreatments(sequelize, { farmId, fieldIds: [fieldId], ...(seasonLabel ? { seasonLabel } : {}) });
+export async function fieldTreatmentsAnswer(sequelize: Sequelize, farmId: number, fieldId: number, seasonLabel: string | undefined, units: Units): Promise<FieldTreatmentsAnswer> {
+  const farm = await farmTreatments(sequelize, { farmId, fieldIds: [fieldId], units, ...(seasonLabel ? { seasonLabel } : {}) });
   return farm.fields[0].answer;
 }

@@ -1,6 +1,7 @@
 // One field as the treatment engine sees it, from what the server stores: the assessment's
 // engine input, the soil summary, the terrain figures and the farm's prices. Pure.
 import type { TreatmentSite } from '../../../shared/erosion/treatments/types';
+import type { Units } from '../../../shared/schemas/auth';
 import type { EstimateInput } from '../../../shared/schemas/estimate';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
 import type { AmendmentChoices, PriceList } from '../../../shared/schemas/treatments';
@@ -40,6 +41,7 @@ export type SiteParts = {
   soil: FieldSoilSummary;
   terrain: StoredTerrainStats | null;
   prices: PriceList;
+  units: Units;
 };
 
 export function treatmentSiteOf(p: SiteParts): TreatmentSite {
@@ -67,6 +69,7 @@ export function treatmentSiteOf(p: SiteParts): TreatmentSite {
     },
     prices: p.prices.prices,
     currency: p.prices.currency,
+    units: p.units,
     amendments: amendmentsOf(p.prices.amendments),
   };
 }

@@ -39,7 +39,6 @@ export function costLine(site: TreatmentSite, priceKey: PriceKey, quantity: numb
 }
 
 export const round2 = (x: number): number => Math.round(x * 100) / 100;
-export const round1 = (x: number): number => Math.round(x * 10) / 10;
 
 /** The C input as a table lookup, or why a C-changing treatment cannot be predicted. */
 export function tableC(ctx: SiteContext, key: TreatmentKey): Extract<EstimateInputParsed['c'], { from: 'table' }> | PlanResult {

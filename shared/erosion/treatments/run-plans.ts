@@ -55,7 +55,7 @@ export function runPlans(ctx: SiteContext, plans: Plan[]): Result<PlansRun> {
   const follows = runoffRowFollowsCropping(ctx.input);
   if (follows) input = followRunoffRow(input);
   const result = estimate(input);
-  if (!result.ok) return fail(`the engine could not run with ${plans.map((p) => p.key).join(' + ')}: ${result.reason}`);
+  if (!result.ok) return fail(`the figures for ${plans.map((p) => p.key).join(' + ')} could not be worked out: ${result.reason}`);
   const base = ctx.base;
   const pairs: [FactorKey, number | undefined, number | undefined][] = [
     ['C', base.factors.c.value, result.factors.c.value],

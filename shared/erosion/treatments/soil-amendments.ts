@@ -7,10 +7,11 @@ import { limeRequirement } from '../lime';
 import { ASSUMED_OM_RISE_PCT, kAfterOrganicMatterRise } from '../organic-matter-k';
 import type { Quantity } from '../amendments';
 import type { PermeabilityCode, StructureCode } from '../k-factor';
-import { kSiToUs } from '../units';
+import { kSiToUs, tonPerAcToTPerHa } from '../units';
 import { cautionsFor } from './cautions';
 import { cannot, costLine, offer, round2, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
+import { formatContent, formatFactor, formatRate, formatRateRange, formatShare } from '../../format/quantities';
 
 const WET_GROUND =
   'shallow gray or mottled subsoil means a high water table: amendments will not fix this ground; raised or no-dig beds, designed drainage or permanent cover are the answer here';
@@ -44,7 +45,7 @@ export function limePlan(ctx: SiteContext): PlanResult {
         amount: round2(v.tonnes),
         unit: 't',
         origin: { kind: v.flag === 'pub' ? 'published-table' : 'rule-of-thumb', source: { title: v.source }, detail: v.reason },
-        note: `${round2(v.tPerHa)} t/ha (${round2(v.productTonPerAc)} t/ac) of product: ${round2(v.pureTonPerAc)} t/ac pure lime ÷ effective CCE ${round2(v.effectiveCcePct)} % (CCE ${v.product.ccePct} % × fineness ${round2(v.finenessEfficiency)}, ${v.finenessRule})${exampleProduct ? '; product figures are example values — replace with your lime\'s label' : ''}`,
+        note: `${formatRate(v.tPerHa, ctx.site.units)} of product: ${formatRate(tonPerAcToTPerHa(v.pureTonPerAc), ctx.site.units)} pure lime ÷ effective CCE ${formatContent(v.effectiveCcePct)} (CCE ${formatShare(v.product.ccePct)} × fineness ${formatFactor(v.finenessEfficiency)}, ${v.finenessRule})${exampleProduct ? '; product figures are example values — replace with your lime\'s label' : ''}`,
       },
     ],
     costLines: spreadCosts(ctx, 'lime-per-t', v),
@@ -76,11 +77,11 @@ export function gypsumPlan(ctx: SiteContext): PlanResult {
     const v: SodicGypsumResult = r.value;
     q = v;
     origin = { kind: 'derived', source: { title: 'USDA Handbook 60 (gypsum requirement)' }, detail: `ESP ${espPct} % → ${v.espTargetPct} %, CEC ${cecCmolPerKg} cmolc/kg, top ${v.depthCm} cm` };
-    note = `${round2(v.pureGypsumTPerHa)} t/ha pure gypsum × exchange efficiency ${v.exchangeEfficiency} ÷ purity ${v.purityPct} %${bulkDensityMgPerM3 === null ? '; bulk density 1.47 Mg/m³ taken (USDA Handbook 60\'s acre-foot)' : ''}`;
+    note = `${formatRate(v.pureGypsumTPerHa, ctx.site.units)} pure gypsum × exchange efficiency ${formatFactor(v.exchangeEfficiency)} ÷ purity ${formatShare(v.purityPct)}${bulkDensityMgPerM3 === null ? '; bulk density 1.47 Mg/m³ taken (USDA Handbook 60\'s acre-foot)' : ''}`;
   } else if (problemClay) {
     q = gypsumQuantity({ areaHa: ctx.site.areaHa });
     origin = { kind: 'rule-of-thumb' };
-    note = '1 t/ac for clay structure and infiltration: the 1–2 t/ac rule of thumb met with NRCS practice standard 333';
+    note = `for clay structure and infiltration: the ${ctx.site.units === 'ac' ? '1–2 US t/ac' : '2.2–4.5 t/ha (1–2 US t/ac)'} rule of thumb met with NRCS practice standard 333`;
   } else if (espPct === null) {
     return cannot('gypsum', 'gypsum is for sodic soils or problem clay: a soil check with ESP and CEC shows whether the field is sodic', 'soil-check');
   } else {
@@ -90,11 +91,11 @@ export function gypsumPlan(ctx: SiteContext): PlanResult {
     key: 'gypsum',
     family: 'gypsum',
     whys: {},
-    quantities: [{ item: 'gypsum', amount: round2(q.tonnes), unit: 't', origin, note: `${round2(q.tPerHa)} t/ha (${round2(q.tonPerAc)} t/ac); ${note}` }],
+    quantities: [{ item: 'gypsum', amount: round2(q.tonnes), unit: 't', origin, note: `${formatRate(q.tPerHa, ctx.site.units)}; ${note}` }],
     costLines: spreadCosts(ctx, 'gypsum-per-t', q),
     effects: [
       sodic ? 'Replaces exchangeable sodium with calcium so the clay holds together and takes in water.' : 'May improve clay structure and water entry; results vary by soil.',
-      'The engine predicts no change in K or the curve number for gypsum (no published factor): A and runoff stay as they are.',
+      'No published factor gives gypsum a change in K or the curve number, so A and runoff are shown as they are.',
     ],
     cautions: cautionsFor('gypsum'),
   });
@@ -124,14 +125,14 @@ export function organicMatterPlan(ctx: SiteContext): PlanResult {
       // K typed as a value carries no texture, so keep the soil group the estimate took from it.
       ...(inp.runoff && !inp.runoff.hsg && inp.runoff.cn === undefined && hsg ? { runoff: { ...inp.runoff, hsg: hsg as NonNullable<typeof inp.runoff>['hsg'] } } : {}),
     }),
-    whys: { K: `K × ${v.ratio.toFixed(3)} through the nomograph's organic-matter term (AH-703 eq. 3-1); ${v.assumptions.join('; ')}` },
+    whys: { K: `K × ${formatFactor(v.ratio)} through the nomograph's organic-matter term (AH-703 eq. 3-1); ${v.assumptions.join('; ')}` },
     quantities: [
       {
         item: 'compost',
         amount: round2(q.tonnes),
         unit: 't',
         origin: { kind: 'rule-of-thumb' },
-        note: `${q.tPerHa} t/ha once to build organic matter (${q.rangeTPerHa[0]}–${q.rangeTPerHa[1]} t/ha; rule of thumb); the assumed +${ASSUMED_OM_RISE_PCT} % organic matter comes after years, not at once`,
+        note: `${formatRate(q.tPerHa, ctx.site.units)} once to build organic matter (${formatRateRange(q.rangeTPerHa[0], q.rangeTPerHa[1], ctx.site.units)}; rule of thumb); the assumed +${formatContent(ASSUMED_OM_RISE_PCT)} organic matter comes after years, not at once`,
       },
     ],
     costLines: spreadCosts(ctx, 'compost-per-t', q),

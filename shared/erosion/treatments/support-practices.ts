@@ -3,10 +3,12 @@
 // also cut the slope length to the terrace interval. The curve number follows the TR-55 row
 // (contoured; contoured and terraced).
 import { STRIP_ROTATION_WORDS, supportPractice, type Practice, type StripRotation } from '../support-practice';
-import { ftToM, mToFt } from '../units';
+import { ftToM } from '../units';
 import { cautionsFor } from './cautions';
-import { cannot, costLine, isPlanResult, offer, practiceP, round1, type PlanResult, type SiteContext } from './plan';
+import { cannot, costLine, isPlanResult, offer, practiceP, type PlanResult, type SiteContext } from './plan';
 import type { TreatmentKey } from './types';
+import { formatFactor, formatSlope } from '../../format/quantities';
+import { formatLength } from '../../format/units';
 
 const PRACTICE_OF: Record<'contour-farming' | 'strip-cropping' | 'terraces', Practice> = {
   'contour-farming': 'contouring',
@@ -57,7 +59,7 @@ function layoutPlan(ctx: SiteContext, key: 'contour-farming' | 'strip-cropping')
     family: 'support-practice',
     modify: (inp) => ({ ...inp, p: { from: 'practice', practice: sp.practice, ...(strips ? { stripRotation: OFFERED_STRIP_ROTATION } : {}) } }),
     whys: {
-      P: `${sp.practice} at ${round1(ctx.input.slopePct)} % slope: P ${sp.p} (${sp.source}), within its ${sp.maxLengthM} m slope-length limit`,
+      P: `${sp.practice} at ${formatSlope(ctx.input.slopePct)} slope: P ${formatFactor(sp.p)} (${sp.source})${sp.maxLengthM !== undefined ? `, within its ${formatLength(sp.maxLengthM, ctx.site.units)} slope-length limit` : ''}`,
       'curve number': 'TR-55 row for contoured row crops',
     },
     quantities: [{ item: strips ? 'contour strips laid out' : 'contour lines laid out', amount: ctx.site.areaHa, unit: 'ha' }],
@@ -89,9 +91,9 @@ export function terraceIntervalM(slopePct: number): number {
 export function terracesPlan(ctx: SiteContext): PlanResult {
   const key: TreatmentKey = 'terraces';
   const slopePct = ctx.input.slopePct;
-  if (slopePct < 2) return cannot(key, `the slope (${round1(slopePct)} %) is too gentle for terraces to be worth building`);
+  if (slopePct < 2) return cannot(key, `the slope (${formatSlope(slopePct)}) is too gentle for terraces to be worth building`);
   const interval = terraceIntervalM(slopePct);
-  if (interval >= ctx.input.slopeLengthM) return cannot(key, `the slope (${round1(ctx.input.slopeLengthM)} m) is shorter than one terrace interval (${round1(interval)} m)`);
+  if (interval >= ctx.input.slopeLengthM) return cannot(key, `the slope (${formatLength(ctx.input.slopeLengthM, ctx.site.units)}) is shorter than one terrace interval (${formatLength(interval, ctx.site.units)})`);
   const sp = checkPractice(ctx, 'terraces', interval);
   if (isPlanResult(sp)) return sp;
   const lengthM = (ctx.site.areaHa * 10_000) / interval;
@@ -102,12 +104,12 @@ export function terracesPlan(ctx: SiteContext): PlanResult {
     // estimate() takes LS on the terrace interval at the mean slope in place of the elevation model's.
     modify: (inp) => ({ ...inp, p: { from: 'practice' as const, practice: 'terraces' as const, terraceIntervalM: interval } }),
     whys: {
-      P: `terraces farmed on the contour at ${round1(slopePct)} %: P ${sp.p} (${sp.source})`,
-      'slope length': `slope length becomes the terrace interval, ${round1(interval)} m (${round1(mToFt(interval))} ft), by ${TERRACE_SPACING_RULE.words}${grid ? "; LS on that length at the mean slope replaces the elevation model's LS" : ''}`,
+      P: `terraces farmed on the contour at ${formatSlope(slopePct)}: P ${formatFactor(sp.p)} (${sp.source})`,
+      'slope length': `slope length becomes the terrace interval, ${formatLength(interval, ctx.site.units)}, by ${TERRACE_SPACING_RULE.words}${grid ? "; LS on that length at the mean slope replaces the elevation model's LS" : ''}`,
       'curve number': 'TR-55 row for contoured and terraced row crops',
     },
     quantities: [
-      { item: 'terrace', amount: Math.round(lengthM), unit: 'm', origin: { kind: 'rule-of-thumb' }, note: `field area ÷ terrace interval ${round1(interval)} m` },
+      { item: 'terrace', amount: Math.round(lengthM), unit: 'm', origin: { kind: 'rule-of-thumb' }, note: `field area ÷ terrace interval ${formatLength(interval, ctx.site.units)}` },
     ],
     costLines: [costLine(ctx.site, 'terrace-per-m', Math.round(lengthM), 'm')],
     effects: [...sp.notes, 'Terrace channels and outlets carry the water off; their design sets the real spacing.', 'It does not change C or K.'],

@@ -1,5 +1,6 @@
 // The treatment engine's types: what a field is (its current estimate inputs and what the soil
 // checks and terrain say), what a treatment changes, and the options a field gets. Pure data.
+import type { Units } from '../../schemas/auth';
 import type { EstimateInput } from '../../schemas/estimate';
 import type { Origin } from '../../schemas/provenance';
 import type { PriceKey, Prices } from '../../schemas/treatments';
@@ -53,6 +54,8 @@ export type TreatmentSite = {
   };
   prices: Prices;
   currency: string;
+  /** The reader's units: the options' notes are written in them (hectares and metres, or acres and feet). */
+  units: Units;
   /** The farm's own choices for amendments; the engine's stated example values when left out. */
   amendments?: {
     /** Target soil pH for lime, within the buffer method's calibration. */

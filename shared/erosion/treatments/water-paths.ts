@@ -3,6 +3,7 @@
 // path, a filter strip traps sediment leaving the field. Said so; A stays as it is.
 import { cautionsFor } from './cautions';
 import { cannot, costLine, offer, type PlanResult, type SiteContext } from './plan';
+import { formatLength } from '../../format/units';
 
 /** Sizing estimate of a waterway's top width, m (rule of thumb; the design's peak flow sets it). */
 export const WATERWAY_WIDTH_M = 10;
@@ -22,7 +23,7 @@ export function grassedWaterwayPlan(ctx: SiteContext): PlanResult {
     whys: {},
     quantities: [
       { item: 'grassed waterway', amount: Math.round(lengthM), unit: 'm', origin: { kind: 'derived', detail: 'length of the flow path where water gathers, from the elevation model' } },
-      { item: 'waterway area (taken out of crop)', amount: Math.round(areaHa * 100) / 100, unit: 'ha', origin: { kind: 'rule-of-thumb' }, note: `about ${WATERWAY_WIDTH_M} m wide: a sizing estimate` },
+      { item: 'waterway area (taken out of crop)', amount: Math.round(areaHa * 100) / 100, unit: 'ha', origin: { kind: 'rule-of-thumb' }, note: `about ${formatLength(WATERWAY_WIDTH_M, ctx.site.units)} wide: a sizing estimate` },
     ],
     costLines: [costLine(ctx.site, 'waterway-per-m', Math.round(lengthM), 'm')],
     effects: ['Gully control: carries the water that gathers in the flow path over grass, so no gully cuts there.', NOT_A],
@@ -41,7 +42,7 @@ export function filterStripPlan(ctx: SiteContext): PlanResult {
     whys: {},
     quantities: [
       { item: 'filter strip', amount: Math.round(edgeM), unit: 'm', origin: { kind: 'derived', detail: "the field's downslope edge" } },
-      { item: 'filter strip area (taken out of crop)', amount: Math.round(stripHa * 100) / 100, unit: 'ha', origin: { kind: 'rule-of-thumb' }, note: `${FILTER_STRIP_WIDTH_M} m wide: a rule of thumb` },
+      { item: 'filter strip area (taken out of crop)', amount: Math.round(stripHa * 100) / 100, unit: 'ha', origin: { kind: 'rule-of-thumb' }, note: `${formatLength(FILTER_STRIP_WIDTH_M, ctx.site.units)} wide: a rule of thumb` },
     ],
     costLines: [costLine(ctx.site, 'filter-strip-per-ha', Math.round(stripHa * 100) / 100, 'ha')],
     effects: ['Sediment trapping: grass on the downslope edge catches part of the soil washing off before it reaches water.', NOT_A],

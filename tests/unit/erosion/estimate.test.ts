@@ -51,7 +51,7 @@ describe('estimate(): a whole estimate from the shared schema', () => {
   });
   it('warns when strips are wider than table 14 allows (AH-537: 100 ft at 6–8 %)', () => {
     const r = estimate({ ...base, p: { from: 'practice', practice: 'strip cropping', stripRotation: 'A', stripWidthM: 40 } });
-    expect(r.ok && r.warnings.join(' ')).toMatch(/wider than the 30\.5 m/);
+    expect(r.ok && r.warnings.join(' ')).toMatch(/wider than the 30 m/); // 100 ft = 30.48 m, to the whole metre
   });
   it('takes D for a drained dual-group soil without its water-table depth, and says why (NEH 630 ch. 7)', () => {
     const runoff = { rainfallMm: 75, hsg: 'B/D', cover: 'row crops', treatment: 'straight row', condition: 'good', drained: true } as const;

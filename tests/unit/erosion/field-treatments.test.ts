@@ -1,5 +1,5 @@
 // Treatment options for one field: what each changes and what it does not, quantities, costs,
-// cautions, and a demo-like field brought under T.
+// cautions, and a steep ploughed field brought under T.
 import { describe, expect, it } from 'vitest';
 import {
   applyTreatments,
@@ -15,8 +15,8 @@ import {
 } from '../../../shared/erosion';
 import { PRICE_KEYS } from '../../../shared/schemas/treatments';
 
-/** Alder Run Farm's Long Slope as the demo gives it (data/demo: continuous corn, fall moldboard plough, 5 % residue, 90 m slope, 890 mm rain, 105 mm design storm; DEM slope 10–15 %; lab means of LS-1 and LS-2). */
-function demoLikeSite(over: Partial<TreatmentSite> = {}): TreatmentSite {
+/** A steep silt-loam slope in ploughed continuous corn, on the demo farm's climate (data/demo: 890 mm rain, 105 mm design storm): continuous corn, fall moldboard plough, 5 % residue, 12 % slope 90 m long; a silt loam with little organic matter. Every treatment kind applies to it. */
+function steepPloughedSite(over: Partial<TreatmentSite> = {}): TreatmentSite {
   const soil = { sandPct: 9, siltPct: 69, clayPct: 22, organicMatterPct: 1.75 };
   const kUs = kFactorWilliams({ sandPct: soil.sandPct, siltPct: soil.siltPct, clayPct: soil.clayPct, organicCarbonPct: organicCarbonFromOm(soil.organicMatterPct) }).us;
   return {
@@ -35,6 +35,7 @@ function demoLikeSite(over: Partial<TreatmentSite> = {}): TreatmentSite {
     water: { concentratedFlowLengthM: 220, downslopeEdgeLengthM: 380 },
     prices: { ...EXAMPLE_PRICES.prices },
     currency: 'USD',
+    units: 'ha',
     ...over,
   };
 }
@@ -45,8 +46,8 @@ const options = (site: TreatmentSite) => {
   return r.value;
 };
 
-describe('fieldTreatments on a demo-like field (the demo’s worst field)', () => {
-  const ft = options(demoLikeSite());
+describe('fieldTreatments on a steep ploughed field', () => {
+  const ft = options(steepPloughedSite());
   it('finds options that bring A under T, with quantities and costs', () => {
     expect(ft.current.aOverT).toBeGreaterThan(1);
     const under = ft.options.filter((o) => o.reachesT);
@@ -90,7 +91,7 @@ describe('fieldTreatments on a demo-like field (the demo’s worst field)', () =
 
 describe('each treatment changes what it changes, and no more', () => {
   it('cover crop: C × 0.75 (rule of thumb) and the curve number to good condition (TR-55 table 2-2b); cost = price × area', () => {
-    const a = applyTreatments(demoLikeSite(), ['cover-crop']);
+    const a = applyTreatments(steepPloughedSite(), ['cover-crop']);
     if (!a.ok) throw new Error(a.reason);
     const c = a.value.changes.find((x) => x.factor === 'C')!;
     expect(c.to / c.from).toBeCloseTo(0.75, 10);
@@ -102,7 +103,7 @@ describe('each treatment changes what it changes, and no more', () => {
   });
   it('reduced tillage and no-till: C from the table row with its typical residue, curve number to residue in good condition (TR-55 table 2-2b, group B: 75)', () => {
     for (const [key, c] of [['reduced-till', 0.25], ['no-till', 0.1]] as const) {
-      const a = applyTreatments(demoLikeSite(), [key]);
+      const a = applyTreatments(steepPloughedSite(), [key]);
       if (!a.ok) throw new Error(a.reason);
       expect(a.value.estimate.factors.c.value).toBeCloseTo(c, 10);
       expect(a.value.estimate.runoff!.cn.value).toBe(75);
@@ -110,7 +111,7 @@ describe('each treatment changes what it changes, and no more', () => {
     }
   });
   it('contour farming on 5 % and 60 m: P 0.5 within its 90 m limit (AH-537 contouring table, recalled), combined with no-till and a cover crop', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.input = { ...site.input, slopePct: 5, slopeLengthM: 60 };
     const ft = options(site);
     const contour = ft.options.find((o) => o.id === 'contour-farming')!;
@@ -120,7 +121,7 @@ describe('each treatment changes what it changes, and no more', () => {
     expect(ft.options.map((o) => o.id)).toEqual(expect.arrayContaining(['contour-farming+no-till+cover-crop', 'strip-cropping+cover-crop']));
   });
   it('terraces: slope length = interval by the spacing rule of thumb, P from the contour row, terrace metres = area / interval', () => {
-    const a = applyTreatments(demoLikeSite(), ['terraces']);
+    const a = applyTreatments(steepPloughedSite(), ['terraces']);
     if (!a.ok) throw new Error(a.reason);
     // VI = 0.6·12 + 2.5 = 9.7 ft; horizontal interval = 9.7 / 0.12 ft
     const interval = ftToM(9.7 / 0.12);
@@ -134,7 +135,7 @@ describe('each treatment changes what it changes, and no more', () => {
     expect(a.value.cautions.join(' ')).toMatch(/buried utilities/);
   });
   it('terraces on a field with an elevation-model LS take LS on the terrace interval instead', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.input = { ...site.input, lsFromGrid: { value: 2.1, source: 'test grid', method: 'test' } };
     const a = applyTreatments(site, ['terraces']);
     if (!a.ok) throw new Error(a.reason);
@@ -143,7 +144,7 @@ describe('each treatment changes what it changes, and no more', () => {
     expect(a.ok && a.value.changes.find((x) => x.factor === 'slope length')!.why).toMatch(/replaces the elevation model's LS/);
   });
   it('grassed waterway: gully control, A unchanged, length from the flow path', () => {
-    const a = applyTreatments(demoLikeSite(), ['grassed-waterway']);
+    const a = applyTreatments(steepPloughedSite(), ['grassed-waterway']);
     if (!a.ok) throw new Error(a.reason);
     expect(a.value.changes).toEqual([]);
     expect(a.value.effects.join(' ')).toMatch(/Gully control/);
@@ -152,14 +153,14 @@ describe('each treatment changes what it changes, and no more', () => {
     expect(a.value.cost.total).toBeCloseTo(220 * EXAMPLE_PRICES.prices['waterway-per-m'], 8);
   });
   it('filter strip: sediment trapping, A unchanged, strip area = edge × width', () => {
-    const a = applyTreatments(demoLikeSite(), ['filter-strip']);
+    const a = applyTreatments(steepPloughedSite(), ['filter-strip']);
     if (!a.ok) throw new Error(a.reason);
     expect(a.value.changes).toEqual([]);
     expect(a.value.effects.join(' ')).toMatch(/Sediment trapping/);
     expect(a.value.quantities[1].amount).toBeCloseTo((380 * FILTER_STRIP_WIDTH_M) / 10_000, 2);
   });
   it('organic matter: only K moves, by the nomograph’s organic-matter term (AH-703 eq. 3-1)', () => {
-    const a = applyTreatments(demoLikeSite(), ['organic-matter']);
+    const a = applyTreatments(steepPloughedSite(), ['organic-matter']);
     if (!a.ok) throw new Error(a.reason);
     expect(a.value.changes.map((x) => x.factor)).toEqual(['K']);
     const k = a.value.changes[0];
@@ -167,14 +168,14 @@ describe('each treatment changes what it changes, and no more', () => {
     expect(k.why).toMatch(/\+0\.5 %/);
   });
   it('refuses two tillage systems, and a treatment the field cannot take, in words', () => {
-    expect(applyTreatments(demoLikeSite(), ['no-till', 'reduced-till'])).toMatchObject({ ok: false, reason: expect.stringMatching(/two tillage systems/) });
-    expect(applyTreatments(demoLikeSite(), ['raised-beds'])).toMatchObject({ ok: false, reason: expect.stringMatching(/gray or mottled/) });
+    expect(applyTreatments(steepPloughedSite(), ['no-till', 'reduced-till'])).toMatchObject({ ok: false, reason: expect.stringMatching(/two tillage systems/) });
+    expect(applyTreatments(steepPloughedSite(), ['raised-beds'])).toMatchObject({ ok: false, reason: expect.stringMatching(/gray or mottled/) });
   });
 });
 
 describe('what the engine will not guess', () => {
   it('a typed C: cover crop and tillage cannot be predicted', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.input = { ...site.input, c: { from: 'value', value: 0.3 } };
     const ft = options(site);
     for (const key of ['cover-crop', 'no-till', 'reduced-till']) {
@@ -182,7 +183,7 @@ describe('what the engine will not guess', () => {
     }
   });
   it('a typed curve number: runoff stays as typed, and the option says so', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.input = { ...site.input, runoff: { rainfallMm: 105, cn: 82 } };
     const a = applyTreatments(site, ['cover-crop']);
     if (!a.ok) throw new Error(a.reason);
@@ -190,24 +191,24 @@ describe('what the engine will not guess', () => {
     expect(a.value.effects.join(' ')).toMatch(/curve number was typed in/);
   });
   it('a typed P: support practices cannot be predicted', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.input = { ...site.input, p: { from: 'value', value: 0.5 } };
     expect(options(site).unavailable.find((u) => u.key === 'terraces')?.reason).toMatch(/P was typed in/);
   });
   it('lime without the buffer method, and without a soil check, says which is needed', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.soil = { ...site.soil, bufferMethod: null };
     expect(options(site).unavailable.find((u) => u.key === 'lime')).toMatchObject({ needs: 'buffer-method' });
     site.soil = { ...site.soil, ph: null };
     expect(options(site).unavailable.find((u) => u.key === 'lime')).toMatchObject({ needs: 'soil-check' });
   });
   it('lime at a pH already at the target is not offered, with the reason', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.soil = { ...site.soil, ph: 6.7 };
     expect(options(site).unavailable.find((u) => u.key === 'lime')?.reason).toMatch(/already at or above the target/);
   });
   it('ground with shallow gray subsoil: no amendments, raised beds, drainage or permanent cover instead', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.soil = { ...site.soil, notWorthAmending: true, problemClay: true };
     site.input = { ...site.input, runoff: { ...site.input.runoff!, hsg: 'C/D' } };
     const ft = options(site);
@@ -220,7 +221,7 @@ describe('what the engine will not guess', () => {
     expect(drain.cautions.join(' ')).toMatch(/Drainage needs a design/);
   });
   it('gypsum on sodic soil orders pure × efficiency ÷ purity, from the farm’s own figures', () => {
-    const site = demoLikeSite();
+    const site = steepPloughedSite();
     site.soil = { ...site.soil, espPct: 20, cecCmolPerKg: 20, bulkDensityMgPerM3: 1.3 };
     site.amendments = { gypsumPurityPct: 80, gypsumExchangeEfficiency: 1.1 };
     const g = options(site).options.find((o) => o.id === 'gypsum')!;
@@ -242,15 +243,15 @@ describe('example prices', () => {
 describe('strips and contouring as treatments', () => {
   it('offers strips in the rotation of row crop and winter grain: AH-537 table 14, rotation C (recalled values)', () => {
     // 7 % slope, 60 m (within the 400 ft strip limit): table 14 rotation C at 6–8 % gives P 0.50.
-    const ft = options(demoLikeSite({ input: { ...demoLikeSite().input, slopePct: 7, slopeLengthM: 60 } }));
+    const ft = options(steepPloughedSite({ input: { ...steepPloughedSite().input, slopePct: 7, slopeLengthM: 60 } }));
     const strips = ft.options.find((o) => o.id === 'strip-cropping')!;
     expect(strips.changes).toContainEqual(expect.objectContaining({ factor: 'P', from: 1, to: 0.5 }));
     expect(strips.effects.join(' ')).toMatch(/rotation C/);
   });
 
   it('offers no contouring or strips on pasture or hay, which are not tilled', () => {
-    const base = demoLikeSite().input;
-    const ft = options(demoLikeSite({ input: { ...base, slopePct: 7, slopeLengthM: 60, c: { from: 'table', crop: 'pasture', groundCoverPct: 60 } } }));
+    const base = steepPloughedSite().input;
+    const ft = options(steepPloughedSite({ input: { ...base, slopePct: 7, slopeLengthM: 60, c: { from: 'table', crop: 'pasture', groundCoverPct: 60 } } }));
     expect(ft.options.some((o) => o.treatments.includes('contour-farming') || o.treatments.includes('strip-cropping'))).toBe(false);
     expect(ft.unavailable.find((u) => u.key === 'strip-cropping')!.reason).toMatch(/pasture already covers the ground/);
   });

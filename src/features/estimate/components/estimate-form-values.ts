@@ -7,13 +7,15 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { Resolver } from 'react-hook-form';
 import {
   EstimateInput,
+  T_TON_PER_AC_YR_RANGE,
   type Crop,
   type FeelClass,
   type HydrologicSoilGroup,
   type Practice,
   type Tillage,
 } from '../../../../shared/schemas/estimate';
-import { curveNumberChoices, DEFAULT_COVER_TABLE, type StripRotation } from '../../../../shared/erosion';
+import { curveNumberChoices, DEFAULT_COVER_TABLE, tonPerAcToTPerHa, tPerHaToTonPerAc, type StripRotation } from '../../../../shared/erosion';
+import { formatFigure } from '../../../lib/format-figure';
 import type { z } from 'zod';
 
 type UnitsChoice = 'si' | 'us';
@@ -46,7 +48,8 @@ export type EstimateFormValues = {
     groundCoverPct?: number;
   };
   p: { from: 'value' | 'practice'; value?: number; practice: z.infer<typeof Practice>; terraceIntervalM?: number; stripRotation: StripRotation; stripWidthM?: number };
-  tTonPerAcYr?: number;
+  /** T in t/ha/yr, as every input of the page is SI; the engine takes US t/ac/yr. */
+  tTPerHaYr?: number;
   areaHa?: number;
   runoffOn: boolean;
   runoff: {
@@ -101,7 +104,7 @@ export const DEFAULT_VALUES: EstimateFormValues = {
   rillRatio: 'moderate',
   c: { from: 'table', value: 0.2, crop: 'corn', tillage: 'chisel or mulch-till', residuePct: undefined, coverCrop: false, groundCoverPct: 80 },
   p: { from: 'practice', value: 1, practice: 'none', terraceIntervalM: 40, stripRotation: 'B', stripWidthM: undefined },
-  tTonPerAcYr: undefined,
+  tTPerHaYr: undefined,
   areaHa: 12,
   runoffOn: true,
   runoff: { rainfallMm: 75, cnFrom: 'table', cn: 78, hsg: '', cnRow: defaultCnRow, drained: false, antecedent: 'II' },
@@ -188,7 +191,7 @@ export function toEstimateInput(v: EstimateFormValues): EstimateInput {
     rillRatio: v.rillRatio,
     c,
     p,
-    ...(v.tTonPerAcYr !== undefined ? { tTonPerAcYr: v.tTonPerAcYr } : {}),
+    ...(v.tTPerHaYr !== undefined ? { tTonPerAcYr: tPerHaToTonPerAc(v.tTPerHaYr) } : {}),
     ...(v.areaHa !== undefined ? { areaHa: v.areaHa } : {}),
     ...(runoff ? { runoff } : {}),
   };
@@ -196,9 +199,19 @@ export function toEstimateInput(v: EstimateFormValues): EstimateInput {
 
 const zodEstimate = zodResolver(EstimateInput);
 
-/** zodResolver(EstimateInput), run on the input the form's choices make. */
-export const estimateResolver: Resolver<EstimateFormValues> = (values, context, options) =>
-  zodEstimate(toEstimateInput(values), context, options as never) as unknown as ReturnType<Resolver<EstimateFormValues>>;
+/** T's limits in the page's units, for the message beside the T input. */
+const T_RANGE_WORDS = `between ${formatFigure(tonPerAcToTPerHa(T_TON_PER_AC_YR_RANGE.min))} and ${formatFigure(tonPerAcToTPerHa(T_TON_PER_AC_YR_RANGE.max))} t/ha/yr`;
+
+/** zodResolver(EstimateInput), run on the input the form's choices make; T's error moves to the t/ha input. */
+export const estimateResolver: Resolver<EstimateFormValues> = async (values, context, options) => {
+  const result = (await zodEstimate(toEstimateInput(values), context, options as never)) as unknown as Awaited<ReturnType<Resolver<EstimateFormValues>>>;
+  const errors = result.errors as Record<string, { type: string; message?: string } | undefined>;
+  if (errors.tTonPerAcYr) {
+    const { tTonPerAcYr, ...rest } = errors;
+    return { values: {}, errors: { ...rest, tTPerHaYr: { type: tTonPerAcYr.type, message: `Soil-loss tolerance T must be ${T_RANGE_WORDS}` } } } as typeof result;
+  }
+  return result;
+};
 
 /** A text box's number: empty is "not given", a comma may be the decimal mark. */
 export const toNumber = (raw: unknown): number | undefined => {
@@ -235,7 +248,7 @@ const FIELD_LABELS: Record<string, string> = {
   'p.stripRotation': 'Rotation in the strips',
   'p.stripWidthM': 'Strip width',
   'runoff.drainedWaterTableDepthCm': 'Water-table depth kept by the drains',
-  tTonPerAcYr: 'Soil-loss tolerance T',
+  tTPerHaYr: 'Soil-loss tolerance T',
   areaHa: 'Field area',
   'runoff.rainfallMm': 'Storm rainfall',
   'runoff.cn': 'Curve number',

@@ -1,9 +1,10 @@
 // Quick estimate: the form on the left, the answer beside it. The answer follows every
 // keystroke through the shared engine (estimate() in shared/erosion), and the same inputs go
-// to POST /api/estimate once typing pauses, so the server confirms the figures.
+// to POST /api/estimate once typing pauses; a page older than the server's method says so.
 import { useMemo, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { Notice } from '../../../components/ui/notice';
+import { lossFigure } from '../../../lib/loss-units';
 import { useDebouncedValue } from '../../../lib/use-debounced-value';
 import { estimate } from '../../../../shared/erosion';
 import type { EstimateInput, EstimateSuccess } from '../../../../shared/schemas/estimate';
@@ -24,25 +25,16 @@ const sameFigures = (a: EstimateSuccess, b: EstimateSuccess) =>
   Math.abs(a.soilLoss.tPerHaYr - b.soilLoss.tPerHaYr) <= 1e-9 * Math.max(1, a.soilLoss.tPerHaYr) &&
   (a.runoff?.runoffMm ?? 0) === (b.runoff?.runoffMm ?? 0);
 
-function ServerCheck({ input, local }: { input: EstimateInput | null; local: EstimateSuccess | null }) {
+/** Says so only when the page's figures and the current method disagree (the page was loaded before an update). */
+function ServerCheck({ input, local, units }: { input: EstimateInput | null; local: EstimateSuccess | null; units: DisplayUnits }) {
   const settled = useDebouncedValue(input, SERVER_CHECK_DELAY_MS);
   const server = useServerEstimate(settled);
   const current = settled === input && !server.isPlaceholderData;
-  let text: string;
-  let tone: 'info' | 'error' = 'info';
-  if (!input || !local) text = 'The server is asked once the inputs are complete.';
-  else if (!current || server.isFetching) text = 'Checking these figures with the server…';
-  else if (server.isError) {
-    text = `The server did not confirm these figures: ${server.error.message}`;
-    tone = 'error';
-  } else if (server.data && sameFigures(server.data, local)) text = 'The server worked out the same figures.';
-  else if (server.data) {
-    text = `The server worked out ${server.data.soilLoss.tPerHaYr.toFixed(2)} t/ha/yr; reload the page to get the current version of the figures.`;
-    tone = 'error';
-  } else text = 'Checking these figures with the server…';
+  if (!input || !local || !current || server.isFetching || !server.data || sameFigures(server.data, local)) return null;
+  const loss = lossFigure(server.data.soilLoss.tPerHaYr, units === 'us' ? 'ac' : 'ha').main;
   return (
-    <p role="status" data-testid="server-check" className={`text-sm ${tone === 'error' ? 'text-alert' : 'text-ink-soft'}`}>
-      {text}
+    <p role="status" data-testid="server-check" className="text-sm text-alert">
+      The current method gives {loss} for these inputs: reload the page to bring its figures up to date.
     </p>
   );
 }
@@ -96,7 +88,7 @@ export function EstimateWorkspace({ defaultUnits }: { defaultUnits: DisplayUnits
               ))}
             </div>
           </div>
-          <ServerCheck input={result.ok ? input : null} local={result.ok ? result : null} />
+          <ServerCheck input={result.ok ? input : null} local={result.ok ? result : null} units={units} />
           {result.ok ? (
             <EstimateResults result={result} units={units} />
           ) : (

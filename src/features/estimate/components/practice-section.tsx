@@ -2,7 +2,8 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import { ChoiceGroup } from '../../../components/ui/choice-group';
 import { SelectField } from '../../../components/ui/select-field';
-import { STRIP_ROTATION_WORDS, STRIP_ROTATIONS, tonPerAcToTPerHa } from '../../../../shared/erosion';
+import { DEFAULT_T_TON_PER_AC_YR, STRIP_ROTATION_WORDS, STRIP_ROTATIONS, tonPerAcToTPerHa, tPerHaToTonPerAc } from '../../../../shared/erosion';
+import { formatFigure } from '../../../lib/format-figure';
 import type { EstimateFormValues } from './estimate-form-values';
 import { FormGroup, NumField } from './form-bits';
 
@@ -53,15 +54,15 @@ export function PracticeSection() {
 
 export function TargetSection() {
   const { control } = useFormContext<EstimateFormValues>();
-  const t = useWatch({ control, name: 'tTonPerAcYr' });
+  const t = useWatch({ control, name: 'tTPerHaYr' });
   const tHint =
     typeof t === 'number' && Number.isFinite(t)
-      ? `= ${tonPerAcToTPerHa(t).toLocaleString('en-US', { maximumFractionDigits: 1 })} t/ha/yr`
-      : 'From the soil survey; 5 t/ac/yr (11.2 t/ha/yr) for a deep soil when left empty.';
+      ? `= ${formatFigure(tPerHaToTonPerAc(t))} US t/ac/yr`
+      : `From the soil survey; ${formatFigure(tonPerAcToTPerHa(DEFAULT_T_TON_PER_AC_YR))} t/ha/yr (${DEFAULT_T_TON_PER_AC_YR} US t/ac/yr) for a deep soil when left empty.`;
   return (
     <FormGroup title="Tolerance and area" testId="estimate-t">
       <div className="grid gap-3 sm:grid-cols-2">
-        <NumField name="tTonPerAcYr" label="Soil-loss tolerance T" unit="t/ac/yr" optional hint={tHint} testId="input-t" />
+        <NumField name="tTPerHaYr" label="Soil-loss tolerance T" unit="t/ha/yr" optional hint={tHint} testId="input-t" />
         <NumField name="areaHa" label="Field area" unit="ha" optional hint="Gives tonnes per year and runoff volume." testId="input-area" />
       </div>
     </FormGroup>

@@ -13,6 +13,7 @@ import { RiskBadge } from '../../../components/risk/risk-badge';
 import { lossFigure, runoffFigure, tonnesFigure, volumeFigure, type Figure } from '../../../lib/loss-units';
 import { FactorTable } from '../../estimate/components/factor-table';
 import { formatFigure } from '../../../lib/format-figure';
+import { formatCount } from '../../../lib/quantities';
 import { useAssessment } from '../../seasons/api/get-assessment';
 import { useFactorOverrides } from '../../seasons/api/get-factor-overrides';
 import { OVERRIDE_FACTORS, type OverrideFactor } from '../../../../shared/schemas/overrides';
@@ -85,10 +86,17 @@ function Gaps({ gaps, farmId, onOpenTab }: { gaps: Gap[]; farmId: number; onOpen
   );
 }
 
+/** Problem clay (the clay itself) and wet ground (a seasonal water table) are separate verdicts. */
+function groundTitle(a: FieldAssessment): string {
+  if (a.problemClay && a.groundAdvice) return 'Problem clay on wet ground: amending will not fix it';
+  if (a.groundAdvice) return 'Wet ground: amending will not fix it';
+  return a.problemClay ? 'Problem clay' : 'Drainage';
+}
+
 function ProblemClay({ a }: { a: FieldAssessment }) {
   if (!a.problemClay && !a.groundAdvice && !a.drainageClass) return null;
   return (
-    <Notice title={a.problemClay ? 'Problem clay: amending will not fix this ground' : 'Drainage'} testId="assessment-problem-clay">
+    <Notice title={groundTitle(a)} testId="assessment-problem-clay">
       {a.drainageClass ? (
         <p>
           Drainage from the soil checks: <span className="font-semibold">{a.drainageClass}</span>.
@@ -159,12 +167,12 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
           {ro ? (
             <div className="flex flex-col gap-2 border-t border-paper-edge pt-2" data-testid="assessment-runoff">
               <dl className="grid gap-3 sm:grid-cols-3">
-                <Big label={`Runoff from a ${formatFigure(ro.rainfallMm)} mm design storm`} figure={runoffFigure(ro.runoffMm, units)} testId="assessment-runoff-depth" />
+                <Big label={`Runoff from a ${runoffFigure(ro.rainfallMm, units).main} design storm`} figure={runoffFigure(ro.runoffMm, units)} testId="assessment-runoff-depth" />
                 <Big label="Runoff volume from the field" figure={a.runoffM3 !== null ? volumeFigure(a.runoffM3, units) : null} testId="assessment-runoff-volume" />
                 <div className="flex flex-col">
                   <dt className="text-sm text-ink-soft">Curve number</dt>
                   <dd className="num text-2xl font-semibold">
-                    {formatFigure(ro.cn.value)}
+                    {formatCount(ro.cn.value)}
                     {ro.hsg ? <span className="block text-sm font-normal text-ink-soft">hydrologic soil group {ro.hsg}</span> : null}
                   </dd>
                 </div>
@@ -172,7 +180,7 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
             </div>
           ) : null}
           <p className="text-xs text-ink-soft">
-            Slope from the {a.lsSource ?? 'typed slope'}; engine {a.engineVersion}, worked out{' '}
+            Slope from the {a.lsSource ?? 'typed slope'}; method version {a.engineVersion}, worked out{' '}
             {new Date(a.computedAt).toLocaleString('en-US', { dateStyle: 'medium', timeStyle: 'short' })}.
           </p>
         </section>

@@ -16,6 +16,7 @@ import { useGround, type GroundRecord } from '../api/get-ground';
 import { useUpdateGround } from '../api/update-ground';
 import { plainMessage, toNumberOrNull } from '../../../lib/form-values';
 import { saveErrorMessage } from './save-error-message';
+import { formatSlope } from '../../../lib/quantities';
 
 type Values = z.input<typeof GroundUpdate>;
 const num = { setValueAs: toNumberOrNull };
@@ -110,7 +111,7 @@ export function GroundPanel({ fieldId, hasTerrain, canEdit, units }: Props) {
           {!hasTerrain ? (
             <>
               <dt className="text-ink-soft">Slope</dt>
-              <dd className="num">{g.slopePct === null ? 'not given' : `${g.slopePct} %`}</dd>
+              <dd className="num">{g.slopePct === null ? 'not given' : formatSlope(g.slopePct)}</dd>
             </>
           ) : null}
           <dt className="text-ink-soft">Slope length</dt>

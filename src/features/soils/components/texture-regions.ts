@@ -69,8 +69,11 @@ export type TextureRegion = { name: TextureClass; pieces: Separates[][]; label: 
 /** Where a class name sits when the centre of its biggest piece is too tight for the words. */
 const LABEL_AT: Partial<Record<TextureClass, RegionLabel>> = {
   sand: { at: { sand: 91, silt: 6, clay: 3 }, small: true },
-  // Along the thin loamy-sand band, which runs at 30° to the sand axis.
-  'loamy sand': { at: { sand: 79.5, silt: 17.5, clay: 3 }, rotateDeg: 30, small: true },
+  // Along the thin loamy-sand band, which runs at 30° to the sand axis, high enough that the
+  // turned words stay clear of the bottom edge.
+  'loamy sand': { at: { sand: 82, silt: 12, clay: 6 }, rotateDeg: 30, small: true },
+  // A small region: the words sit in its widest part, clear of the 40 % clay line.
+  'sandy clay': { at: { sand: 50, silt: 8, clay: 42 }, small: true },
   silt: { at: { sand: 7, silt: 88, clay: 5 } },
   'sandy loam': { at: { sand: 64, silt: 25, clay: 11 } },
 };

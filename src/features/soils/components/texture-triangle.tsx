@@ -1,7 +1,8 @@
 // The texture triangle (SVG, Fieldshed's own drawing): clay at the top, sand bottom left, silt
 // bottom right, 10 % gridlines, the 12 USDA class regions outlined and named, and every lab
 // sample of the field as a dot with its label. The class of the field's mean is shaded.
-// One colour for the samples, shapes and words for everything else.
+// One colour for the samples, shapes and words for everything else. Words are sized in CSS so a
+// phone, where the drawing is scaled down, gets larger ones (in the drawing's own units).
 import type { Separates, TextureClass } from '../../../../shared/erosion/texture';
 import { fmt } from './format-soil';
 import { TEXTURE_REGIONS } from './texture-regions';
@@ -61,7 +62,7 @@ function Grid() {
 
 function Ticks() {
   return (
-    <g fill={INK_SOFT} style={{ fontSize: 11 }}>
+    <g fill={INK_SOFT} className="text-[11px] max-sm:text-[16px]">
       {TICKS.map((v) => {
         const [lx, ly] = xy({ sand: 100 - v, silt: 0, clay: v });
         const [rx, ry] = xy({ sand: 0, silt: v, clay: 100 - v });
@@ -70,7 +71,7 @@ function Ticks() {
           <g key={v}>
             <text x={lx - 6} y={ly} textAnchor="end" dominantBaseline="central">{v}</text>
             <text x={rx + 6} y={ry} textAnchor="start" dominantBaseline="central">{v}</text>
-            <text x={bx} y={by + 14} textAnchor="middle">{v}</text>
+            <text x={bx} y={by + 6} textAnchor="middle" dominantBaseline="hanging">{v}</text>
           </g>
         );
       })}
@@ -83,12 +84,12 @@ function AxisTitles() {
   const [rx, ry] = xy({ sand: 0, silt: 50, clay: 50 });
   const [bx, by] = xy({ sand: 50, silt: 50, clay: 0 });
   // Outward from each edge, past the tick labels; the arrows point the way the percentage grows.
-  const out = 40;
+  const out = 44;
   return (
-    <g fill={INK} fontWeight={600} style={{ fontSize: 12 }}>
+    <g fill={INK} fontWeight={600} className="text-[12px] max-sm:text-[17px]">
       <text transform={`translate(${lx - out * 0.866} ${ly - out * 0.5}) rotate(-60)`} textAnchor="middle">Clay, % →</text>
       <text transform={`translate(${rx + out * 0.866} ${ry - out * 0.5}) rotate(60)`} textAnchor="middle">Silt, % →</text>
-      <text x={bx} y={by + 36} textAnchor="middle">← Sand, %</text>
+      <text x={bx} y={by + 40} textAnchor="middle">← Sand, %</text>
     </g>
   );
 }
@@ -121,18 +122,20 @@ function RegionNames({ shaded }: { shaded: TextureClass | null }) {
       {TEXTURE_REGIONS.map((r) => {
         const [x, y] = xy(r.label.at);
         const lines = nameLines(r.name);
-        const size = r.label.small ? 9.5 : 11;
         const strong = r.name === shaded;
         return (
           <text
             key={r.name}
-            transform={`translate(${x.toFixed(1)} ${(y - ((lines.length - 1) * 12) / 2).toFixed(1)})${r.label.rotateDeg ? ` rotate(${r.label.rotateDeg})` : ''}`}
+            transform={`translate(${x.toFixed(1)} ${y.toFixed(1)})${r.label.rotateDeg ? ` rotate(${r.label.rotateDeg})` : ''}`}
             fontWeight={strong ? 700 : 400}
             fill={strong ? INK : '#857a6c'}
-            style={{ fontSize: size }}
+            className={r.label.small ? 'text-[9.5px] max-sm:text-[12px]' : 'text-[11px] max-sm:text-[14px]'}
           >
+            {/* Two lines sit either side of the point; one line on it. */}
             {lines.map((l, i) => (
-              <tspan key={l} x={0} dy={i === 0 ? 0 : 12} dominantBaseline="central">{l}</tspan>
+              <tspan key={l} x={0} dy={lines.length === 1 ? '0.35em' : i === 0 ? '-0.2em' : '1.1em'}>
+                {l}
+              </tspan>
             ))}
           </text>
         );
@@ -164,7 +167,7 @@ function Points({ points }: { points: TrianglePoint[] }) {
               stroke={PAPER}
               strokeWidth={3}
               paintOrder="stroke"
-              style={{ fontSize: 11.5 }}
+              className="text-[11.5px] max-sm:text-[16px]"
             >
               {p.label}
             </text>

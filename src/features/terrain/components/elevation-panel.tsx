@@ -177,7 +177,7 @@ export function ElevationPanel({ farmId, canEdit }: { farmId: number; canEdit: b
       ) : null}
       {failed ? (
         <Notice tone="error" title="Working out the terrain failed" testId="terrain-job-failed">
-          {failed.message || 'The server gave no reason.'}
+          {failed.message || 'No reason was given: try the upload again.'}
         </Notice>
       ) : null}
       {job.isError ? <Notice tone="error">Progress is not available: {job.error.message}</Notice> : null}
