@@ -20,3 +20,8 @@ export const SOIL_MAP_MAX_BYTES = 8 * BYTES_PER_MIB;
 export const RAINFALL_RECORD_MAX_BYTES = 8 * BYTES_PER_MIB;
 /** Any JSON request body. */
 export const JSON_BODY_MAX_BYTES = 2 * BYTES_PER_MIB;
+
+/** Cells of an elevation model (width × height, from its header): a bigger grid is refused before it is decoded. */
+export const DEM_MAX_CELLS = 25_000_000;
+/** Background jobs one person may have waiting or running at once. */
+export const JOBS_PER_USER_MAX = 3;

@@ -15,6 +15,8 @@ export class ProcessingJob extends Model<InferAttributes<ProcessingJob>, InferCr
   declare message: CreationOptional<string>;
   declare payload: CreationOptional<Record<string, unknown>>;
   declare createdBy: number | null;
+  /** Inputs changed while this run was running: another run follows it. */
+  declare rerunRequested: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +31,7 @@ export class ProcessingJob extends Model<InferAttributes<ProcessingJob>, InferCr
         message: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'Waiting to start' },
         payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         createdBy: DataTypes.INTEGER,
+        rerunRequested: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

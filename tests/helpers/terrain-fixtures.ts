@@ -35,7 +35,7 @@ export function utmSquare(e0: number, n0: number, side: number, name = 'Plane fi
  * the queue too. Each file gets its own queue prefix unless one is given, because its files
  * live in its own storage folder and other files' workers must not take its jobs.
  */
-export async function startTerrainApp(options: { worker: boolean; queuePrefix?: string; dataDir?: string }) {
+export async function startTerrainApp(options: { worker: boolean; queuePrefix?: string; dataDir?: string; env?: Record<string, string> }) {
   const url = inject('databaseUrl');
   const sequelize = createSequelize(url);
   initModels(sequelize);
@@ -45,7 +45,7 @@ export async function startTerrainApp(options: { worker: boolean; queuePrefix?: 
   const storage = new LocalFileStorage(uploads);
   const handlers = options.worker ? { terrain: terrainJobHandler({ sequelize, storage }) } : undefined;
   const jobs = await JobQueue.start(url, handlers, options.queuePrefix ?? `t${randomUUID().slice(0, 8)}-`);
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `terrain-${randomUUID()}` });
+  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `terrain-${randomUUID()}`, ...options.env });
   const app = createApp({ sequelize, config, storage, jobs, clientDir: '/nonexistent' });
   const close = async () => {
     await jobs.stop();
