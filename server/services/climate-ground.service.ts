@@ -80,7 +80,7 @@ export async function putGround(
   input: GroundUpdate,
   jobs?: JobQueue,
 ): Promise<Ground> {
-  const { ground, slopeLengthChanged } = await sequelize.transaction(async (t) => {
+  return sequelize.transaction(async (t) => {
     const cur = await FieldGround.findByPk(field.id, { transaction: t, lock: t.LOCK.UPDATE });
     staleCheck("field's ground", cur ? presentGround(cur) : null, input.version);
     const lengthBefore = cur?.slopeLengthM ?? null;
@@ -95,10 +95,10 @@ export async function putGround(
     const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("field's slope", () => FieldGround.create({ fieldId: field.id, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'ground', entityId: field.id, action: cur ? 'updated' : 'created' }, t);
     await row.reload({ include: [withEditor], transaction: t });
-    return { ground: presentGround(row), slopeLengthChanged: lengthBefore !== row.slopeLengthM };
+    // The typed slope length caps the elevation model's flow length for LS, so a change of it
+    // queues a terrain run, in this transaction: the run starts only once the length is committed.
+    const slopeLengthChanged = lengthBefore !== row.slopeLengthM;
+    await afterInputsChange({ sequelize, jobs }, { kind: 'ground', farmId: field.farmId, fieldIds: [field.id], slopeLengthChanged }, actor, t);
+    return presentGround(row);
   });
-  // After the commit: the typed slope length caps the elevation model's flow length for LS, so a
-  // change of it queues a terrain run, and that run must read the committed length.
-  await afterInputsChange({ sequelize, jobs }, { kind: 'ground', farmId: field.farmId, fieldIds: [field.id], slopeLengthChanged }, actor);
-  return ground;
 }

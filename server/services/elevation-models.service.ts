@@ -61,16 +61,16 @@ export async function acceptDem(
   const fileKey = newKey('dems', '.tif');
   await deps.storage.put(fileKey, file.buffer);
   try {
-    const id = await deps.sequelize.transaction(async (transaction) => {
+    return await deps.sequelize.transaction(async (transaction) => {
       const model = await ElevationModel.create(
         { farmId, fileKey, originalName: file.originalName.slice(0, 200), epsg: dem.epsg, width: dem.width, height: dem.height, cellSizeM: dem.rowCellSizeXM[0], bounds, createdBy: actor.userId },
         { transaction },
       );
       await recordEvent({ userId: actor.userId, farmId, entity: 'elevation_model', entityId: model.id, action: 'uploaded', detail: { epsg: dem.epsg, width: dem.width, height: dem.height } }, transaction);
-      return model.id;
+      // In the same transaction: no model without its run, no run (409/429) without its model.
+      const jobId = await jobs.enqueue('terrain', farmId, actor.userId, { elevationModelId: model.id }, transaction);
+      return { jobId, elevationModelId: model.id };
     });
-    const jobId = await jobs.enqueue('terrain', farmId, actor.userId, { elevationModelId: id });
-    return { jobId, elevationModelId: id };
   } catch (e) {
     await deps.storage.remove(fileKey); // no orphan file when the row could not be written
     throw e;

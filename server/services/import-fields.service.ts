@@ -38,8 +38,8 @@ export async function importFields(
         rejected,
       });
     }
+    await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: ids }, actor, t);
     return listFieldFeatures(sequelize, { fieldIds: ids }, t);
   });
-  await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: created.map((f) => f.id) }, actor);
   return { created, rejected };
 }
