@@ -23,9 +23,10 @@ export async function settleJob(id: string, end: JobEnd, followUp: FollowUp): Pr
       await job.update({ state: 'queued', progress: 0, message: end.message }, { transaction: t });
       return true;
     }
+    const rerun = job.rerunRequested;
     await job.update({ state: end.state, message: end.message, ...(end.state === 'done' ? { progress: 1 } : {}), rerunRequested: false }, { transaction: t });
     if (end.state === 'failed' && job.kind === 'terrain') await FieldTerrain.markFarmStale(job.farmId, t);
-    if (job.rerunRequested) await followUp(job.kind, job.farmId, job.createdBy, t);
+    if (rerun) await followUp(job.kind, job.farmId, job.createdBy, t);
     return true;
   });
 }
