@@ -10,7 +10,7 @@ import { withEditor } from '../models/with-editor';
 import { recordEvent } from './audit';
 import { afterInputsChange } from './input-changes.service';
 import type { JobQueue } from './jobs/job-queue';
-import { rFromRainfallCsv } from './rainfall-record';
+import { rFromRainfallCsvInThread } from './rainfall-record-in-thread';
 
 export async function getClimate(farmId: number): Promise<Climate> {
   const c = await FarmClimate.findByPk(farmId, { include: [withEditor] });
@@ -57,7 +57,8 @@ export async function putClimate(sequelize: Sequelize, actor: { userId: number }
 /** R from an uploaded rainfall record (breakpoint CSV); the design storm stays unless given. */
 export async function putClimateFromRecord(sequelize: Sequelize, actor: { userId: number }, farmId: number, file: Buffer | undefined, fields: RainfallRecordFields): Promise<Climate> {
   if (!file) throw badRequest('no_file', 'Attach the rainfall record as the multipart part named "file".');
-  const r = rFromRainfallCsv(file, fields.years);
+  // On a thread of its own: a large record must not hold up other requests while it is read.
+  const r = await rFromRainfallCsvInThread(file, fields.years);
   if (!r.ok) throw new HttpError(r.status, r.error, r.message);
   const summary: RainfallRecordSummary = r.summary;
   const values = (cur: FarmClimate | null): ClimateValues => {

@@ -31,7 +31,11 @@ export function craftedGeoTiff(o: { width: number; height: number; compression: 
   const ifdBytes = 2 + entries.length * 12 + 4;
   let extra = 8 + ifdBytes;
   const extraAt = new Map<Entry, number>();
-  for (const e of entries) if (size(e) > 4) (extraAt.set(e, extra), (extra += size(e)));
+  for (const e of entries) {
+    if (size(e) <= 4) continue;
+    extraAt.set(e, extra);
+    extra += size(e);
+  }
   entries[5].values = [extra];
   const out = Buffer.alloc(extra + o.strip.length);
   out.write('II', 0, 'latin1');
@@ -47,9 +51,9 @@ export function craftedGeoTiff(o: { width: number; height: number; compression: 
     if (where !== undefined) out.writeUInt32LE(where, at + 8);
     let p = where ?? at + 8;
     for (const v of e.values) {
-      if (e.type === DOUBLE) (out.writeDoubleLE(v, p), (p += 8));
-      else if (e.type === LONG) (out.writeUInt32LE(v, p), (p += 4));
-      else (out.writeUInt16LE(v, p), (p += 2));
+      if (e.type === DOUBLE) p = out.writeDoubleLE(v, p);
+      else if (e.type === LONG) p = out.writeUInt32LE(v, p);
+      else p = out.writeUInt16LE(v, p);
     }
   });
   o.strip.copy(out, extra);
