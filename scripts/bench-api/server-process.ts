@@ -7,7 +7,13 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { connectionUrl } from '../../server/db/local-cluster';
 
-export type ServerProcess = { baseUrl: string; databaseUrl: string; stop: () => Promise<void> };
+export type ServerProcess = {
+  baseUrl: string;
+  databaseUrl: string;
+  /** The server's local PostgreSQL cluster: its folder and port (a fault benchmark stops and starts it). */
+  cluster: { dir: string; port: number };
+  stop: () => Promise<void>;
+};
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
@@ -67,5 +73,5 @@ export async function startServer(log: (line: string) => void): Promise<ServerPr
   child.stderr!.on('data', (d: Buffer) => {
     if (!stopping) process.stderr.write(`  server: ${d.toString()}`);
   });
-  return { baseUrl: `http://127.0.0.1:${port}`, databaseUrl: connectionUrl(pgPort, 'fieldshed'), stop };
+  return { baseUrl: `http://127.0.0.1:${port}`, databaseUrl: connectionUrl(pgPort, 'fieldshed'), cluster: { dir: join(dataDir, 'postgres'), port: pgPort }, stop };
 }

@@ -18,11 +18,11 @@ const hash = bcrypt.hashSync(TEST_PASSWORD, 4);
 
 export type TestContext = { app: Express; sequelize: Sequelize; close: () => Promise<void> };
 
-export function makeTestApp(): TestContext {
+export function makeTestApp(options: { devMailbox?: boolean } = {}): TestContext {
   const sequelize = createSequelize(inject('databaseUrl'));
   initModels(sequelize);
   const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: 'test-secret-test-secret', DATA_DIR: '/tmp/fieldshed-test-unused' });
-  const app = createApp({ sequelize, config, clientDir: '/nonexistent' });
+  const app = createApp({ sequelize, config, clientDir: '/nonexistent', devMailbox: options.devMailbox });
   return { app, sequelize, close: () => sequelize.close() };
 }
 

@@ -76,7 +76,7 @@ type Props = {
 
 export function RiskMap({ fields, classes, selectedId = null, onSelect, tileUrl, tileAttribution, testId, label }: Props) {
   return (
-    <div className="h-full min-h-[320px] w-full" data-testid={testId} aria-label={label} role={label ? 'img' : undefined}>
+    <div className="h-full min-h-[320px] w-full" data-testid={testId} aria-label={label} role={label ? 'region' : undefined}>
       <MapContainer className="fs-map h-full w-full" center={[20, 0]} zoom={2} minZoom={2} maxZoom={19} zoomSnap={0.25}>
         {tileUrl ? <TileLayer url={tileUrl} attribution={tileAttribution ?? ''} maxZoom={19} /> : null}
         {fields.map((f) => (

@@ -19,6 +19,13 @@ type Props = {
   onDrawError: (message: string) => void;
 };
 
+const toolTitles = {
+  drawRectButton: 'Draw a rectangular field',
+  drawPolyButton: 'Draw a field outline point by point',
+  editButton: 'Move the corners of field outlines',
+  deleteButton: 'Delete a field by clicking it',
+};
+
 export function DrawControls({ onCreate, onDrawError }: Props) {
   const map = useMap();
   const latest = useLatest({ onCreate, onDrawError });
@@ -51,6 +58,12 @@ export function DrawControls({ onCreate, onDrawError }: Props) {
       removalMode: true,
       rotateMode: false,
     });
+    // The toolbar's buttons are links with an icon only: name each in words, for screen readers
+    // and for the tooltip alike.
+    map.pm.setLang('en', { buttonTitles: toolTitles }, 'en');
+    for (const button of map.getContainer().querySelectorAll<HTMLElement>('.leaflet-pm-toolbar .button-container[title]')) {
+      button.querySelector('a')?.setAttribute('aria-label', button.title);
+    }
 
     const handleCreate = (e: { layer: Layer }) => {
       const geometry = layerToGeometry(e.layer);
