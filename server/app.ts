@@ -53,7 +53,7 @@ export function createApp({ sequelize, config, clientDir, jobs, storage: givenSt
   // Mail written to the outbox goes to the job queue once its transaction commits.
   setMailContext({ dispatch: jobs ? (id) => jobs.sendMail(id) : null, publicUrl: config.publicUrl });
   const storage = givenStorage ?? new LocalFileStorage(path.join(config.dataDir, 'uploads'));
-  const terrain = terrainRoutes({ sequelize, storage, jobs });
+  const terrain = terrainRoutes({ sequelize, storage, jobs, demMaxCells: config.limits.demMaxCells });
   initModels(sequelize);
   const app = express();
   app.set('trust proxy', 'loopback');

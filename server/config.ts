@@ -4,6 +4,7 @@ import path from 'node:path';
 import type { Basemap } from '../shared/schemas/config';
 import { randomBytes } from 'node:crypto';
 import { chmodSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { DEM_MAX_CELLS, JOBS_PER_USER_MAX } from '../shared/limits';
 
 const boolish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
@@ -43,6 +44,8 @@ const Env = z.object({
   SESSION_SECRET: z.string().min(16).optional(),
   SESSION_HOURS: z.coerce.number().positive().default(12),
   NODE_ENV: z.string().default('development'),
+  DEM_MAX_CELLS: z.coerce.number().int().min(1).default(DEM_MAX_CELLS),
+  JOBS_PER_USER_MAX: z.coerce.number().int().min(1).max(1000).default(JOBS_PER_USER_MAX),
 });
 
 export type Config = {
@@ -69,6 +72,8 @@ export type Config = {
   sessionSecret: string;
   sessionHours: number;
   isProduction: boolean;
+  /** Work limits: cells of an elevation model, background jobs per person at once. */
+  limits: { demMaxCells: number; jobsPerUserMax: number };
 };
 
 /**
@@ -139,5 +144,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     sessionSecret: e.SESSION_SECRET ?? keptSessionSecret(path.resolve(e.DATA_DIR)),
     sessionHours: e.SESSION_HOURS,
     isProduction,
+    limits: { demMaxCells: e.DEM_MAX_CELLS, jobsPerUserMax: e.JOBS_PER_USER_MAX },
   };
 }

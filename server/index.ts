@@ -46,7 +46,7 @@ async function main(): Promise<void> {
   // GEOCODER_URL unset: a local fake geocoding service answers place searches from the demo gazetteer.
   const geocoder = await openGeocoderService(config);
   // One worker in this process; `npm run worker` adds more, here or on other machines.
-  const jobs = await JobQueue.start(db.url, jobHandlers(backend), '', taskHandlers(backend, mail));
+  const jobs = await JobQueue.start(db.url, jobHandlers(backend), '', taskHandlers(backend, mail), config.limits);
   // Before the demo seed, so the seeded plan's notice to the advisor goes out at once.
   setMailContext({ dispatch: (id) => jobs.sendMail(id), publicUrl: config.publicUrl });
   if (config.seedDemo && (await seedDemoFarm(db.sequelize))) {

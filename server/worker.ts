@@ -12,7 +12,7 @@ async function main(): Promise<void> {
   // Mail only with a real mail server: the local fake belongs to `npm start`, whose worker sends to it.
   const mail = backend.config.smtpUrl ? await openMailTransport(backend.config) : null;
   const tasks = taskHandlers(backend, mail);
-  const jobs = await JobQueue.start(backend.db.url, handlers, '', tasks);
+  const jobs = await JobQueue.start(backend.db.url, handlers, '', tasks, backend.config.limits);
   setMailContext({ dispatch: (id) => jobs.sendMail(id), publicUrl: backend.config.publicUrl });
   console.log(`Fieldshed worker is working the job queue (${[...Object.keys(handlers), ...Object.keys(tasks)].join(', ')}).`);
   stopOnSignals(async () => {

@@ -30,3 +30,7 @@ export const OUTLINE_MAX_VERTICES = 10_000;
 export const FIELD_MAX_ABS_LATITUDE_DEG = 85;
 /** A farm's own slope classes (Handbook 18 lists six; a survey area seldom uses more than ten). */
 export const SLOPE_CLASSES_MAX = 20;
+/** Cells of an elevation model (width × height, from its header): a bigger grid is refused before it is decoded. */
+export const DEM_MAX_CELLS = 25_000_000;
+/** Background jobs one person may have waiting or running at once. */
+export const JOBS_PER_USER_MAX = 3;

@@ -24,6 +24,8 @@ export class FieldTerrain extends Model<InferAttributes<FieldTerrain>, InferCrea
   /** The field's version when computed: older than the field's own means a new outline is being worked out. */
   declare fieldVersion: number;
   declare stats: StoredTerrainStats;
+  /** The run that should have replaced these figures stopped before it finished. */
+  declare stale: CreationOptional<boolean>;
   declare computedAt: CreationOptional<Date>;
   declare field?: NonAttribute<Field>;
 
@@ -34,6 +36,7 @@ export class FieldTerrain extends Model<InferAttributes<FieldTerrain>, InferCrea
         elevationModelId: { type: DataTypes.INTEGER, allowNull: false },
         fieldVersion: { type: DataTypes.INTEGER, allowNull: false },
         stats: { type: DataTypes.JSONB, allowNull: false },
+        stale: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         computedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
       },
       { sequelize, tableName: 'field_terrain', timestamps: false },
@@ -48,6 +51,12 @@ export class FieldTerrain extends Model<InferAttributes<FieldTerrain>, InferCrea
   /** The field's figures with the field's current version, to tell whether they are up to date. */
   static withFieldVersion(fieldId: number): Promise<FieldTerrain | null> {
     return FieldTerrain.findByPk(fieldId, { include: [{ model: Field, as: 'field', attributes: ['id', 'version'] }] });
+  }
+
+  /** Marks the figures of every field of the farm stale: the run meant to replace them did not finish. */
+  static async markFarmStale(farmId: number, transaction?: Transaction): Promise<void> {
+    const fields = await Field.findAll({ where: { farmId }, attributes: ['id'], transaction });
+    await FieldTerrain.update({ stale: true }, { where: { fieldId: fields.map((f) => f.id) }, transaction });
   }
 
   /** Drops the figures of every field of the farm and stores a run's new ones. */

@@ -1,5 +1,5 @@
 import { Farm } from './farm.model';
-import { Op, DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize } from 'sequelize';
+import { Op, DataTypes, Model, type InferAttributes, type InferCreationAttributes, type CreationOptional, type Sequelize, type Transaction } from 'sequelize';
 
 export type JobKind = 'terrain';
 export type JobState = 'queued' | 'running' | 'done' | 'failed';
@@ -15,6 +15,8 @@ export class ProcessingJob extends Model<InferAttributes<ProcessingJob>, InferCr
   declare message: CreationOptional<string>;
   declare payload: CreationOptional<Record<string, unknown>>;
   declare createdBy: number | null;
+  /** Inputs changed while this run was running: another run follows it. */
+  declare rerunRequested: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +31,7 @@ export class ProcessingJob extends Model<InferAttributes<ProcessingJob>, InferCr
         message: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'Waiting to start' },
         payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         createdBy: DataTypes.INTEGER,
+        rerunRequested: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },
@@ -42,6 +45,16 @@ export class ProcessingJob extends Model<InferAttributes<ProcessingJob>, InferCr
 
   static latestOfFarm(farmId: number, kind: JobKind): Promise<ProcessingJob | null> {
     return ProcessingJob.findOne({ where: { farmId, kind }, order: [['createdAt', 'DESC']] });
+  }
+
+  /** The farm's job of this kind waiting or running, locked for the transaction when one is given. */
+  static pendingOfFarm(farmId: number, kind: JobKind, transaction?: Transaction): Promise<ProcessingJob | null> {
+    return ProcessingJob.findOne({ where: { farmId, kind, state: { [Op.in]: ['queued', 'running'] } }, transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
+  }
+
+  /** How many jobs a person has waiting or running. */
+  static pendingCountOfUser(userId: number, transaction?: Transaction): Promise<number> {
+    return ProcessingJob.count({ where: { createdBy: userId, state: { [Op.in]: ['queued', 'running'] } }, transaction });
   }
 
   /** Whether a job of this kind is waiting or running for the farm. */

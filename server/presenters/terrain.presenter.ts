@@ -39,5 +39,5 @@ export function presentFarmLayers(farmId: number, { layers, soilLoss }: FarmLaye
 }
 
 export function presentFieldTerrain(figures: FieldTerrain) {
-  return { ...figures.stats, computedAt: figures.computedAt, upToDate: figures.fieldVersion === figures.field?.version };
+  return { ...figures.stats, computedAt: figures.computedAt, upToDate: figures.fieldVersion === figures.field?.version && !figures.stale, stale: figures.stale };
 }

@@ -19,7 +19,7 @@ import { DEM_MAX_BYTES } from '../../shared/limits';
 
 const upload = singleUpload(DEM_MAX_BYTES, 'elevation model');
 
-type Deps = { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue };
+type Deps = { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue; demMaxCells: number };
 
 export function terrainRoutes(deps: Deps): { farms: Router; fields: Router; jobs: Router } {
   const farms = Router();

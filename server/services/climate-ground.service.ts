@@ -10,7 +10,7 @@ import { withEditor } from '../models/with-editor';
 import { recordEvent } from './audit';
 import { afterInputsChange } from './input-changes.service';
 import type { JobQueue } from './jobs/job-queue';
-import { rFromRainfallCsv } from './rainfall-record';
+import { rFromRainfallCsvInThread } from './rainfall-record-in-thread';
 
 export async function getClimate(farmId: number): Promise<Climate> {
   const c = await FarmClimate.findByPk(farmId, { include: [withEditor] });
@@ -57,7 +57,8 @@ export async function putClimate(sequelize: Sequelize, actor: { userId: number }
 /** R from an uploaded rainfall record (breakpoint CSV); the design storm stays unless given. */
 export async function putClimateFromRecord(sequelize: Sequelize, actor: { userId: number }, farmId: number, file: Buffer | undefined, fields: RainfallRecordFields): Promise<Climate> {
   if (!file) throw badRequest('no_file', 'Attach the rainfall record as the multipart part named "file".');
-  const r = rFromRainfallCsv(file, fields.years);
+  // On a thread of its own: a large record must not hold up other requests while it is read.
+  const r = await rFromRainfallCsvInThread(file, fields.years);
   if (!r.ok) throw new HttpError(r.status, r.error, r.message);
   const summary: RainfallRecordSummary = r.summary;
   const values = (cur: FarmClimate | null): ClimateValues => {
@@ -80,7 +81,7 @@ export async function putGround(
   input: GroundUpdate,
   jobs?: JobQueue,
 ): Promise<Ground> {
-  const { ground, slopeLengthChanged } = await sequelize.transaction(async (t) => {
+  return sequelize.transaction(async (t) => {
     const cur = await FieldGround.findByPk(field.id, { transaction: t, lock: t.LOCK.UPDATE });
     staleCheck("field's ground", cur ? presentGround(cur) : null, input.version);
     const lengthBefore = cur?.slopeLengthM ?? null;
@@ -95,10 +96,10 @@ export async function putGround(
     const row = cur ? await cur.update({ ...next, version: cur.version + 1 }, { transaction: t }) : await firstSave("field's slope", () => FieldGround.create({ fieldId: field.id, ...next }, { transaction: t }));
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'ground', entityId: field.id, action: cur ? 'updated' : 'created' }, t);
     await row.reload({ include: [withEditor], transaction: t });
-    return { ground: presentGround(row), slopeLengthChanged: lengthBefore !== row.slopeLengthM };
+    // The typed slope length caps the elevation model's flow length for LS, so a change of it
+    // queues a terrain run, in this transaction: the run starts only once the length is committed.
+    const slopeLengthChanged = lengthBefore !== row.slopeLengthM;
+    await afterInputsChange({ sequelize, jobs }, { kind: 'ground', farmId: field.farmId, fieldIds: [field.id], slopeLengthChanged }, actor, t);
+    return presentGround(row);
   });
-  // After the commit: the typed slope length caps the elevation model's flow length for LS, so a
-  // change of it queues a terrain run, and that run must read the committed length.
-  await afterInputsChange({ sequelize, jobs }, { kind: 'ground', farmId: field.farmId, fieldIds: [field.id], slopeLengthChanged }, actor);
-  return ground;
 }

@@ -4,15 +4,16 @@ import type { Sequelize } from 'sequelize';
 import type { Polygon } from 'geojson';
 import { ElevationModel, ProcessingJob } from '../models';
 import { countFieldsOverlapping } from '../models/elevation-model.queries';
-import { readDem, converterBetween } from './terrain';
-import type { DemGrid } from './terrain';
+import { converterBetween } from './terrain';
+import { readDemHeader, type DemHeader } from './terrain/read-dem-header';
 import { HttpError, invalid, unsupportedType } from '../lib/http-error';
 import { newKey, type FileStorage } from './storage/file-storage';
 import type { JobQueue } from './jobs/job-queue';
 import { recordEvent } from './audit';
+import { DEM_MAX_CELLS } from '../../shared/limits';
 
 /** The grid's outline in WGS84, sampled along its edges (a projected square is curved in lon/lat). */
-export function demBoundsWgs84(dem: DemGrid): { ok: true; ring: [number, number][] } | { ok: false; reason: string } {
+export function demBoundsWgs84(dem: DemHeader): { ok: true; ring: [number, number][] } | { ok: false; reason: string } {
   const conv = converterBetween(dem.epsg, 4326);
   if (!conv.ok) return conv;
   const x0 = dem.originX, y0 = dem.originY;
@@ -28,9 +29,13 @@ export function demBoundsWgs84(dem: DemGrid): { ok: true; ring: [number, number]
   return { ok: true, ring };
 }
 
-/** 503 without a job queue: the upload would wait for a run that never comes. */
+/**
+ * 503 without a job queue: the upload would wait for a run that never comes. Only the file's
+ * header is read here (no cell is decoded on the API's event loop): a grid over `maxCells` is
+ * refused with 413 before the run would decode it.
+ */
 export async function acceptDem(
-  deps: { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue },
+  deps: { sequelize: Sequelize; storage: FileStorage; jobs?: JobQueue; demMaxCells?: number },
   actor: { userId: number },
   farmId: number,
   file: { buffer: Buffer; originalName: string },
@@ -38,12 +43,15 @@ export async function acceptDem(
   const { jobs } = deps;
   if (!jobs) throw new HttpError(503, 'jobs_unavailable', 'Background processing is not running on this server; try again later.');
   if (file.buffer.length === 0) throw new HttpError(400, 'empty_file', 'The file is empty.');
-  const read = await readDem(file.buffer);
+  const read = await readDemHeader(file.buffer, deps.demMaxCells ?? DEM_MAX_CELLS);
   if (!read.ok) {
-    if (/not a GeoTIFF|not a TIFF/i.test(read.reason)) throw unsupportedType(`An elevation model must be a GeoTIFF (.tif): ${read.reason}.`);
+    if (read.problem === 'not_tiff') throw unsupportedType(`An elevation model must be a GeoTIFF (.tif): ${read.reason}.`);
+    if (read.problem === 'too_many_cells') {
+      throw new HttpError(413, 'dem_too_large', `The elevation model is too large: ${read.reason}. Resample it to larger cells or clip it to the farm.`);
+    }
     throw invalid('invalid_dem', `The elevation model cannot be used: ${read.reason}.`);
   }
-  const dem = read.dem;
+  const dem = read.header;
   const outline = demBoundsWgs84(dem);
   if (!outline.ok) throw invalid('invalid_dem', `The elevation model's coordinate system cannot be used: ${outline.reason}.`);
   const bounds: Polygon = { type: 'Polygon', coordinates: [outline.ring] };
@@ -53,16 +61,16 @@ export async function acceptDem(
   const fileKey = newKey('dems', '.tif');
   await deps.storage.put(fileKey, file.buffer);
   try {
-    const id = await deps.sequelize.transaction(async (transaction) => {
+    return await deps.sequelize.transaction(async (transaction) => {
       const model = await ElevationModel.create(
         { farmId, fileKey, originalName: file.originalName.slice(0, 200), epsg: dem.epsg, width: dem.width, height: dem.height, cellSizeM: dem.rowCellSizeXM[0], bounds, createdBy: actor.userId },
         { transaction },
       );
       await recordEvent({ userId: actor.userId, farmId, entity: 'elevation_model', entityId: model.id, action: 'uploaded', detail: { epsg: dem.epsg, width: dem.width, height: dem.height } }, transaction);
-      return model.id;
+      // In the same transaction: no model without its run, no run (409/429) without its model.
+      const jobId = await jobs.enqueue('terrain', farmId, actor.userId, { elevationModelId: model.id }, transaction);
+      return { jobId, elevationModelId: model.id };
     });
-    const jobId = await jobs.enqueue('terrain', farmId, actor.userId, { elevationModelId: id });
-    return { jobId, elevationModelId: id };
   } catch (e) {
     await deps.storage.remove(fileKey); // no orphan file when the row could not be written
     throw e;

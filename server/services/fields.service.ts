@@ -88,9 +88,9 @@ export async function createField(deps: InputChangeDeps, actor: Actor, farmId: n
   const feature = await sequelize.transaction(async (t) => {
     const id = await insertField(sequelize, actor, farmId, input, t);
     const [f] = await listFieldFeatures(sequelize, { fieldIds: [id] }, t);
+    await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: [f.id] }, actor, t);
     return f;
   });
-  await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: [feature.id] }, actor);
   return feature;
 }
 
@@ -127,11 +127,11 @@ export async function updateField(deps: InputChangeDeps, actor: Actor, fieldId: 
     await field.update({ ...changes, version: field.version + 1 }, { transaction: t });
     await recordEvent({ userId: actor.userId, farmId: field.farmId, entity: 'field', entityId: fieldId, action: 'updated', detail: { changed } }, t);
     const [f] = await listFieldFeatures(sequelize, { fieldIds: [fieldId] }, t);
+    // A new boundary changes flow paths and per-field figures; a name or owner changes neither.
+    const kind = patch.geometry !== undefined ? 'boundary' : 'field-details';
+    await afterInputsChange(deps, { kind, farmId: field.farmId, fieldIds: [fieldId] }, actor, t);
     return f;
   });
-  // A new boundary changes flow paths and per-field figures; a name or owner changes neither.
-  const kind = patch.geometry !== undefined ? 'boundary' : 'field-details';
-  await afterInputsChange(deps, { kind, farmId: updated.properties.farmId, fieldIds: [updated.id] }, actor);
   return updated;
 }
 

@@ -115,8 +115,8 @@ export async function importFields(
         rejected,
       });
     }
+    if (ids.length > 0) await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: ids }, actor, t);
     return listFieldFeatures(sequelize, { fieldIds: ids }, t);
   });
-  if (created.length > 0) await afterInputsChange(deps, { kind: 'boundary', farmId, fieldIds: created.map((f) => f.id) }, actor);
   return { created, rejected };
 }

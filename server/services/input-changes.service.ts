@@ -35,7 +35,10 @@ function fieldsTouched(change: InputChange): number[] | undefined {
   return 'fieldIds' in change ? change.fieldIds : undefined;
 }
 
-/** Runs what follows an input change; returns the terrain job's id when one was queued. */
+/**
+ * Runs what follows an input change; returns the terrain job's id when one was queued or is on
+ * its way. A change that re-runs terrain needs the write's `transaction`: the run is queued in it.
+ */
 export async function afterInputsChange(
   deps: InputChangeDeps,
   change: InputChange,
@@ -45,6 +48,9 @@ export async function afterInputsChange(
   if (change.kind !== 'slope-classes') {
     await refreshAssessments(deps.sequelize, { farmId: change.farmId, fieldIds: fieldsTouched(change) }, transaction);
   }
-  const terrainJobId = rerunsTerrain(change) ? await refreshTerrainIfAny(deps, change.farmId, actor.userId) : null;
+  if (!rerunsTerrain(change)) return { terrainJobId: null };
+  const terrainJobId = transaction
+    ? await refreshTerrainIfAny(deps, change.farmId, actor.userId, transaction)
+    : await deps.sequelize.transaction((t) => refreshTerrainIfAny(deps, change.farmId, actor.userId, t));
   return { terrainJobId };
 }

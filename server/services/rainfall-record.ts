@@ -6,7 +6,7 @@ import { parse } from 'csv-parse/sync';
 import { rFromBreakpointRecord, type Breakpoint } from '../../shared/erosion';
 
 export type RecordSummary = { r: number; years: number; from: string; to: string; breakpoints: number; storms: number; erosiveStorms: number };
-export type RecordResult = { ok: true; summary: RecordSummary } | { ok: false; status: 400 | 415 | 422; error: string; message: string };
+export type RecordResult = { ok: true; summary: RecordSummary } | { ok: false; status: 400 | 415 | 422 | 503; error: string; message: string };
 
 const bad = (status: 400 | 415 | 422, error: string, message: string): RecordResult => ({ ok: false, status, error, message });
 

@@ -34,7 +34,9 @@ export async function setSlopeClasses(
   farmId: number,
   classes: SlopeClass[] | null,
 ): Promise<FarmSlopeClasses & { jobId: string | null }> {
-  await Farm.update({ slopeBreaks: classes }, { where: { id: farmId } });
-  const { terrainJobId } = await afterInputsChange(deps, { kind: 'slope-classes', farmId }, actor);
+  const { terrainJobId } = await deps.sequelize.transaction(async (t) => {
+    await Farm.update({ slopeBreaks: classes }, { where: { id: farmId }, transaction: t });
+    return afterInputsChange(deps, { kind: 'slope-classes', farmId }, actor, t);
+  });
   return { classes: classes ?? DEFAULT_SLOPE_CLASSES, custom: classes !== null, jobId: terrainJobId };
 }

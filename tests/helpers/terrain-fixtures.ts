@@ -10,7 +10,8 @@ import { createSequelize } from '../../server/db/sequelize';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { initModels } from '../../server/models';
-import { JobQueue } from '../../server/services/jobs/job-queue';
+import { JobQueue, type JobHandlers } from '../../server/services/jobs/job-queue';
+import { JOBS_PER_USER_MAX } from '../../shared/limits';
 import { LocalFileStorage } from '../../server/services/storage/file-storage';
 import { terrainJobHandler } from '../../server/services/farm-terrain.service';
 import { writeGeoTiff } from '../../server/services/terrain';
@@ -32,10 +33,16 @@ export function utmSquare(e0: number, n0: number, side: number, name = 'Plane fi
 
 /**
  * An app with file storage in its own folder and a job queue; with `worker`, this process works
- * the queue too. Each file gets its own queue prefix unless one is given, because its files
+ * the queue too (the real terrain handler, or the handlers given). Each file gets its own queue prefix unless one is given, because its files
  * live in its own storage folder and other files' workers must not take its jobs.
  */
-export async function startTerrainApp(options: { worker: boolean; queuePrefix?: string; dataDir?: string }) {
+export async function startTerrainApp(options: {
+  worker: boolean | JobHandlers;
+  queuePrefix?: string;
+  dataDir?: string;
+  env?: Record<string, string>;
+  jobsPerUserMax?: number;
+}) {
   const url = inject('databaseUrl');
   const sequelize = createSequelize(url);
   initModels(sequelize);
@@ -43,14 +50,15 @@ export async function startTerrainApp(options: { worker: boolean; queuePrefix?: 
   const uploads = path.join(dataDir, 'uploads');
   mkdirSync(uploads, { recursive: true });
   const storage = new LocalFileStorage(uploads);
-  const handlers = options.worker ? { terrain: terrainJobHandler({ sequelize, storage }) } : undefined;
-  const jobs = await JobQueue.start(url, handlers, options.queuePrefix ?? `t${randomUUID().slice(0, 8)}-`);
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `terrain-${randomUUID()}` });
+  const handlers = options.worker === true ? { terrain: terrainJobHandler({ sequelize, storage }) } : options.worker || undefined;
+  const queuePrefix = options.queuePrefix ?? `t${randomUUID().slice(0, 8)}-`;
+  const jobs = await JobQueue.start(url, handlers, queuePrefix, {}, { jobsPerUserMax: options.jobsPerUserMax ?? JOBS_PER_USER_MAX });
+  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `terrain-${randomUUID()}`, ...options.env });
   const app = createApp({ sequelize, config, storage, jobs, clientDir: '/nonexistent' });
   const close = async () => {
     await jobs.stop();
     await sequelize.close();
     rmSync(dataDir, { recursive: true, force: true });
   };
-  return { app, sequelize, uploads, dataDir, close };
+  return { app, sequelize, jobs, queuePrefix, uploads, dataDir, close };
 }

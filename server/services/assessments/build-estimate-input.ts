@@ -80,7 +80,7 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
       label: 'Mean slope',
       value: `${fmt(slopePct)} %`,
       origin: { kind: 'derived', source: { title: 'Horn 1981 slope of the elevation model' } },
-      note: `elevation model, ${formatCount(g.terrain.cellCount)} cells${g.terrain.upToDate ? '' : ' (boundary changed: being recomputed)'}`,
+      note: `elevation model, ${formatCount(g.terrain.cellCount)} cells${outdatedNote(g.terrain)}`,
     });
     if (g.terrain.meanLS != null) {
       lsFromGrid = { value: g.terrain.meanLS, source: 'Desmet & Govers 1996 grid L × RUSLE S (McCool et al. 1987), D8 flow', method: `mean of ${formatCount(g.terrain.cellCount)} cells of the elevation model` };
@@ -195,4 +195,10 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
     gaps,
     lines,
   };
+}
+
+/** Why the elevation model's figures may not match the field's inputs now. */
+function outdatedNote(t: { upToDate: boolean; stale: boolean }): string {
+  if (t.upToDate) return '';
+  return t.stale ? ' (the last terrain run stopped before it finished: run it again)' : ' (boundary changed: being recomputed)';
 }

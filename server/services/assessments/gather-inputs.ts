@@ -48,7 +48,8 @@ export async function gatherInputs(sequelize: Sequelize, scope: AssessmentScope,
           meanLS: t.stats.meanLS,
           cellCount: t.stats.cellCount,
           cellSizeM: t.stats.cellSizeM,
-          upToDate: t.fieldVersion === f.version,
+          upToDate: t.fieldVersion === f.version && !t.stale,
+          stale: t.stale,
           concentratedFlowCells: t.stats.concentratedFlow?.cellCount ?? 0,
         }
       : null;

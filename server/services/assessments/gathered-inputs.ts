@@ -4,7 +4,7 @@ import type { Climate, Cropping, Ground } from '../../../shared/schemas/season';
 import type { FactorOverride, OverrideFactor } from '../../../shared/schemas/overrides';
 import type { FieldSoilSummary } from '../../../shared/schemas/soils';
 
-export type TerrainFigures = { meanSlopePct: number; meanLS: number | null; cellCount: number; cellSizeM?: number; upToDate: boolean; concentratedFlowCells: number };
+export type TerrainFigures = { meanSlopePct: number; meanLS: number | null; cellCount: number; cellSizeM?: number; upToDate: boolean; stale: boolean; concentratedFlowCells: number };
 
 /** A typed record and the person who last typed it, where known. */
 export type Typed<T> = T & { typedBy: string | null };

@@ -18,8 +18,10 @@ export type FieldTerrain = {
   cellSizeM: number;
   epsg: number;
   computedAt: string;
-  /** false while the figures are for an older outline of the field. */
+  /** false while the figures are for an older outline of the field, or stale. */
   upToDate: boolean;
+  /** The terrain run that should have replaced these figures stopped before it finished. */
+  stale: boolean;
 };
 
 /** How often figures for an outdated outline are asked for again, ms. */
@@ -42,7 +44,8 @@ export const getFieldTerrainQueryOptions = (fieldId: number, fieldVersion: numbe
     queryFn: () => getFieldTerrain(fieldId),
     // Figures for an older outline are being recomputed on the server: ask again shortly.
     refetchInterval: (query) => {
-      if (query.state.data && !query.state.data.upToDate) return STALE_TERRAIN_POLL_MS;
+      // Stale figures wait for someone to run terrain again: nothing to ask for until then.
+      if (query.state.data && !query.state.data.upToDate && !query.state.data.stale) return STALE_TERRAIN_POLL_MS;
       // terrain_pending: a terrain run is queued or running; ask until it lands.
       if (isTerrainPending(query.state.error)) return STALE_TERRAIN_POLL_MS;
       if (isNoTerrain(query.state.error) && query.state.errorUpdateCount <= NO_TERRAIN_RETRIES)

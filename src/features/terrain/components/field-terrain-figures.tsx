@@ -42,7 +42,12 @@ export function FieldTerrainFigures({ fieldId, fieldVersion, farmId, units }: Pr
         )
       ) : (
         <>
-          {!terrain.data.upToDate ? (
+          {terrain.data.stale ? (
+            <Notice tone="caution" testId="field-terrain-outdated">
+              The last terrain run stopped before it finished, so these figures may not match the farm's elevation model
+              or slope classes. Run it again, for example by saving the slope classes.
+            </Notice>
+          ) : !terrain.data.upToDate ? (
             <Notice tone="caution" testId="field-terrain-outdated">
               These figures are for the field's previous outline; new ones are being worked out.
             </Notice>
