@@ -2,6 +2,7 @@
 // field when the list asks for it (focusRequest changes).
 import { useEffect, useRef } from 'react';
 import { useMap } from 'react-leaflet';
+import type L from 'leaflet';
 import { bboxToBounds, geometriesBounds, geometryBounds } from '../../../lib/geo-leaflet';
 import type { FieldFeature } from '../../../../shared/schemas/field';
 
@@ -14,6 +15,13 @@ type Props = {
 };
 
 const PADDING: [number, number] = [32, 32];
+/** The layers panel (16 rem wide) sits open on the map's right edge on wide screens: fit the fields beside it, not under it. */
+const LAYERS_PANEL_PX = 16 * 16 + 8;
+
+function fitPadding(map: L.Map): L.FitBoundsOptions {
+  const panelOpen = window.innerWidth >= 640 && map.getSize().x > 2.5 * LAYERS_PANEL_PX;
+  return { paddingTopLeft: PADDING, paddingBottomRight: [PADDING[0] + (panelOpen ? LAYERS_PANEL_PX : 0), PADDING[1]], maxZoom: 17 };
+}
 
 export function MapViewControl({ fields, farmBbox, focus }: Props) {
   const map = useMap();
@@ -23,7 +31,7 @@ export function MapViewControl({ fields, farmBbox, focus }: Props) {
     if (fitted.current) return;
     const bounds = geometriesBounds(fields.map((f) => f.geometry)) ?? (farmBbox ? bboxToBounds(farmBbox) : null);
     if (!bounds) return;
-    map.fitBounds(bounds, { padding: PADDING, maxZoom: 17 });
+    map.fitBounds(bounds, fitPadding(map));
     fitted.current = true;
   }, [map, fields, farmBbox]);
 
@@ -32,7 +40,7 @@ export function MapViewControl({ fields, farmBbox, focus }: Props) {
     if (!focus || focus.seq === lastSeq.current) return;
     lastSeq.current = focus.seq;
     const field = fields.find((f) => f.id === focus.fieldId);
-    if (field) map.flyToBounds(geometryBounds(field.geometry), { padding: PADDING, maxZoom: 17, duration: 0.6 });
+    if (field) map.flyToBounds(geometryBounds(field.geometry), { ...fitPadding(map), duration: 0.6 });
   }, [map, focus, fields]);
 
   return null;
