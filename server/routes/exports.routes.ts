@@ -12,7 +12,7 @@ import type { FileStorage } from '../services/storage/file-storage';
 import { loadPlanMembership } from '../middleware/plan-access';
 import type { PlanViewer } from '../services/plans/plan-read.service';
 
-const viewerOf = (req: Request): PlanViewer => ({ farmId: req.membership!.farmId, membershipId: req.membership!.id, role: req.membership!.role });
+const viewerOf = (req: Request): PlanViewer => ({ farmId: req.membership!.farmId, membershipId: req.membership!.id, role: req.membership!.role, units: req.user!.units });
 
 export function exportsRoutes(deps: { sequelize: Sequelize; storage: FileStorage }): { farms: Router; plans: Router } {
   const { sequelize } = deps;

@@ -18,7 +18,7 @@ import type { FileStorage } from '../services/storage/file-storage';
 import { addComment, approvePlan, returnPlan, submitPlan } from '../services/plans/plan-review.service';
 
 const actorOf = (req: Request) => ({ userId: req.user!.id });
-const viewerOf = (req: Request): PlanViewer => ({ farmId: req.membership!.farmId, membershipId: req.membership!.id, role: req.membership!.role });
+const viewerOf = (req: Request): PlanViewer => ({ farmId: req.membership!.farmId, membershipId: req.membership!.id, role: req.membership!.role, units: req.user!.units });
 const planIdOf = (res: { locals: Record<string, unknown> }) => res.locals.planId as number;
 const actionIdOf = (res: { locals: Record<string, unknown> }) => res.locals.actionId as number;
 

@@ -5,6 +5,7 @@ import { applyTreatments } from '../../../shared/erosion/treatments/field-treatm
 import { TREATMENT_KEYS, type TreatmentKey } from '../../../shared/erosion/treatments/types';
 import type { PlanAction, PlanFieldPrediction, PlanPrediction } from '../../../shared/schemas/plans';
 import type { FarmTreatmentsAnswer } from '../../../shared/schemas/treatments';
+import type { Units } from '../../../shared/schemas/auth';
 import { Plan } from '../../models';
 import { sumSaved } from '../../presenters/plan.presenter';
 import { farmTreatments } from '../treatments/farm-treatments.service';
@@ -59,11 +60,13 @@ export function predictFromOptions(actions: PlanAction[], options: FarmTreatment
   return { fields, tonnesSavedPerYr: sumSaved(fields) };
 }
 
-/** The prediction for a plan's actions in its farm and season. */
-export async function predictPlan(plan: { farmId: number; season: string; actions: PlanAction[] }): Promise<PlanPrediction> {
+/**
+ * The prediction for a plan's actions in its farm and season, its effects worded in the reader's
+ * units (a prediction frozen with an approval keeps the words of the one who approved it).
+ */
+export async function predictPlan(plan: { farmId: number; season: string; actions: PlanAction[] }, units: Units = 'ha'): Promise<PlanPrediction> {
   const fieldIds = [...new Set(plan.actions.map((a) => a.fieldId))];
   if (fieldIds.length === 0) return { fields: [], tonnesSavedPerYr: 0 };
-  // The prediction carries figures and the options' effects; the plan is read in hectare words for now.
-  const options = await farmTreatments(Plan.sequelize!, { farmId: plan.farmId, seasonLabel: plan.season, fieldIds, units: 'ha' });
+  const options = await farmTreatments(Plan.sequelize!, { farmId: plan.farmId, seasonLabel: plan.season, fieldIds, units });
   return predictFromOptions(plan.actions, options);
 }

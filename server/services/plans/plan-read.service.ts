@@ -4,6 +4,7 @@
 import type { Transaction } from 'sequelize';
 import type { Plan as PlanShape, PlanVersion as PlanVersionShape } from '../../../shared/schemas/plans';
 import { planChanges } from '../../../shared/plan-changes';
+import type { Units } from '../../../shared/schemas/auth';
 import { HttpError, notFound } from '../../lib/http-error';
 import { Field, Plan, PlanAction, PlanComment, PlanVersion, Season, User } from '../../models';
 import { forLandowner, presentAction, presentFrozen, presentPlan, type People } from '../../presenters/plan.presenter';
@@ -11,7 +12,8 @@ import { resolveSeason } from '../seasons.service';
 import { predictPlan } from './plan-prediction';
 
 /** Who reads: their farm, membership and role. */
-export type PlanViewer = { farmId: number; membershipId: number; role: 'farmer' | 'advisor' | 'landowner' };
+/** Who reads a plan; `units` words the prediction's effects (hectares when not given). */
+export type PlanViewer = { farmId: number; membershipId: number; role: 'farmer' | 'advisor' | 'landowner'; units?: Units };
 
 async function peopleOf(ids: (number | null)[], transaction?: Transaction): Promise<People> {
   const wanted = [...new Set(ids.filter((x): x is number => x != null))];
@@ -24,7 +26,7 @@ async function peopleOf(ids: (number | null)[], transaction?: Transaction): Prom
  * The live plan as the API shows it (read inside the caller's transaction when given), with the
  * prediction of its treatments from the season's stored assessments.
  */
-export async function livePlan(planId: number, transaction?: Transaction): Promise<PlanShape> {
+export async function livePlan(planId: number, transaction?: Transaction, units: Units = 'ha'): Promise<PlanShape> {
   const plan = await Plan.findByPk(planId, { include: [{ model: Season, as: 'season', attributes: ['label'] }], transaction });
   if (!plan) throw notFound('That plan');
   // One after another: inside a transaction they share one connection.
@@ -43,7 +45,7 @@ export async function livePlan(planId: number, transaction?: Transaction): Promi
     approvedRevision: newest ?? null,
     people,
   });
-  return { ...shown, prediction: await predictPlan(shown) };
+  return { ...shown, prediction: await predictPlan(shown, units) };
 }
 
 async function ownedFieldIds(viewer: PlanViewer): Promise<Set<number>> {
@@ -73,7 +75,7 @@ async function withFollowUp(plan: PlanShape): Promise<PlanShape> {
 
 /** GET /api/plans/:planId. A landowner gets the newest approved revision of their own fields, with the work done since. */
 export async function readPlan(viewer: PlanViewer, planId: number): Promise<PlanShape> {
-  if (viewer.role !== 'landowner') return livePlan(planId);
+  if (viewer.role !== 'landowner') return livePlan(planId, undefined, viewer.units);
   const newest = await PlanVersion.newestOf(planId);
   // plan-access lets a landowner through only to plans with an approved revision.
   if (!newest) throw notFound('That plan');
