@@ -4,8 +4,18 @@ import type { RiskClass } from '../erosion/risk-class';
 import type { Origin } from './provenance';
 
 export type InputKey = 'r' | 'k' | 'slope' | 'length' | 'crop' | 'practice' | 'c' | 'p' | 't' | 'storm' | 'hsg' | 'drainage';
-/** One input of an assessment: its value in words and where it came from. */
-export type AssessmentInput = { key: InputKey; label: string; value: string; origin: Origin; note?: string };
+/** The figure of an input that has a unit, kept as a number so each reader sees it in their units. */
+export type InputQuantity =
+  | { kind: 'erosivity'; rSi: number }
+  | { kind: 'annual-rain'; mmPerYr: number }
+  | { kind: 'storm'; mm: number }
+  | { kind: 'length'; m: number }
+  | { kind: 'tolerance'; tonPerAcYr: number };
+/**
+ * One input of an assessment: its value in words (SI; written again in the reader's units from
+ * `quantity` when there is one) and where it came from.
+ */
+export type AssessmentInput = { key: InputKey; label: string; value: string; quantity?: InputQuantity; origin: Origin; note?: string };
 
 export type GapKey = 'erosivity' | 'erodibility' | 'slope' | 'slope-length' | 'cropping' | 'soil-group';
 /** Where a gap is filled: a tab of the Field screen, or the farm's climate panel. */

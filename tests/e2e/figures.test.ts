@@ -46,6 +46,27 @@ describe('figures on the main screens', () => {
     await page.close();
   });
 
+  it('writes the Risk tab’s inputs in the reader’s units: metres and mm for hectares, feet and inches for acres', async () => {
+    const { farm, users, ids } = await makeDemoLikeFarm(app.sequelize);
+    const { page, errors } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);
+    const risk = `${app.baseUrl}/farms/${farm.id}/fields/${ids['Mill Hill']}?tab=risk`;
+    const seen: Record<string, string[]> = {};
+    for (const units of ['ha', 'ac'] as const) {
+      expect((await page.request.patch(`${app.baseUrl}/api/auth/me`, { data: { units } })).status()).toBe(200);
+      await page.goto(risk);
+      await page.getByTestId('input-length').waitFor({ timeout: 20_000 });
+      seen[units] = await Promise.all(['input-length', 'input-storm', 'input-t'].map((id) => page.getByTestId(id).locator('.num').innerText()));
+    }
+    expect(seen.ha[0]).toMatch(/^\d[\d,]* m$/);
+    expect(seen.ac[0]).toMatch(/^\d[\d,]* ft$/);
+    expect(seen.ha[1]).toMatch(/ mm$/);
+    expect(seen.ac[1]).toMatch(/ in$/);
+    expect(seen.ha[2]).toMatch(/ t\/ha\/yr$/);
+    expect(seen.ac[2]).toMatch(/ t\/ac\/yr$/);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
   it('names the farm, then the field, in the header of a field', async () => {
     const { farm, users, ids } = await makeDemoLikeFarm(app.sequelize);
     const { page } = await signInPage(app.browser, app.baseUrl, users.farmer.email, TEST_PASSWORD);

@@ -44,11 +44,12 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
       key: 'r',
       label: 'Rainfall erosivity R',
       value: `${fmt(climate.rValue, 0)} MJ·mm/(ha·h·yr)`,
+      quantity: { kind: 'erosivity', rSi: climate.rValue },
       origin: { kind: 'derived', source: { title: 'AH-703, ch. 2 (storm EI30 summed)' }, detail: rec ? `from a rainfall record, ${rec.years} yr, ${rec.erosiveStorms} erosive storms` : 'from a rainfall record' },
     });
   } else if (climate.rFrom === 'value' && climate.rValue != null) {
     r = { from: 'value', value: climate.rValue, units: 'si' };
-    lines.push({ key: 'r', label: 'Rainfall erosivity R', value: `${fmt(climate.rValue, 0)} MJ·mm/(ha·h·yr)`, origin: typed(climate.typedBy) });
+    lines.push({ key: 'r', label: 'Rainfall erosivity R', value: `${fmt(climate.rValue, 0)} MJ·mm/(ha·h·yr)`, quantity: { kind: 'erosivity', rSi: climate.rValue }, origin: typed(climate.typedBy) });
   } else if (climate.annualPrecipitationMm != null) {
     r = { from: 'precipitation', annualPrecipitationMm: climate.annualPrecipitationMm };
     const checked = rFromAnnualPrecipitationChecked(climate.annualPrecipitationMm);
@@ -56,6 +57,7 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
       key: 'r',
       label: 'Rainfall erosivity R',
       value: `from ${fmt(climate.annualPrecipitationMm, 0)} mm/yr of rain`,
+      quantity: { kind: 'annual-rain', mmPerYr: climate.annualPrecipitationMm },
       origin: { kind: 'derived', source: { title: 'Renard & Freimund 1994, J. Hydrol. 157:287' }, detail: `annual precipitation typed${climate.typedBy ? ` by ${climate.typedBy}` : ''}` },
       ...(checked.warning ? { note: checked.warning } : {}),
     });
@@ -96,6 +98,7 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
       key: 'length',
       label: 'Slope length',
       value: `${fmt(slopeLengthM, 0)} m`,
+      quantity: { kind: 'length', m: slopeLengthM },
       origin: typed(g.ground?.typedBy ?? null),
       ...(g.terrain ? { note: "also the longest flow path the elevation model's LS may use on this field" } : {}),
     });
@@ -105,6 +108,7 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
       key: 'length',
       label: 'Slope length',
       value: `${ASSUMED_SLOPE_LENGTH_M} m`,
+      quantity: { kind: 'length', m: ASSUMED_SLOPE_LENGTH_M },
       origin: { kind: 'rule-of-thumb' },
       note: 'assumed for the practice limit only; LS comes from the elevation model',
     });
@@ -145,7 +149,7 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
   }
 
   const tOrigin = g.soil.tSource ?? { kind: 'default' };
-  lines.push({ key: 't', label: 'Soil-loss tolerance T', value: `${g.soil.tTonPerAcYr} t/ac/yr`, origin: tOrigin });
+  lines.push({ key: 't', label: 'Soil-loss tolerance T', value: `${g.soil.tTonPerAcYr} t/ac/yr`, ...(g.soil.tTonPerAcYr != null ? { quantity: { kind: 'tolerance' as const, tonPerAcYr: g.soil.tTonPerAcYr } } : {}), origin: tOrigin });
 
   let runoff: EstimateInput['runoff'];
   if (climate && cr) {
@@ -162,7 +166,7 @@ export function buildEstimateInput(g: GatheredInputs): BuiltInput {
         drained: ground?.drained ?? false,
         ...(ground?.drained && ground.drainedWaterTableDepthCm != null ? { drainedWaterTableDepthCm: ground.drainedWaterTableDepthCm } : {}),
       };
-      lines.push({ key: 'storm', label: 'Design storm', value: `${fmt(climate.designStormMm, 0)} mm`, origin: typed(climate.typedBy) });
+      lines.push({ key: 'storm', label: 'Design storm', value: `${fmt(climate.designStormMm, 0)} mm`, quantity: { kind: 'storm', mm: climate.designStormMm }, origin: typed(climate.typedBy) });
       lines.push({ key: 'hsg', label: 'Hydrologic soil group', value: g.soil.hsg, origin: { kind: 'derived', detail: "from the field's soil checks or soil map" } });
       if (ground?.drained) {
         const depth = ground.drainedWaterTableDepthCm;

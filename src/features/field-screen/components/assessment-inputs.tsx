@@ -3,6 +3,8 @@
 // thumb, or an example value to replace.
 import type { FieldAssessment } from '../../../../shared/schemas/assessment';
 import { originWords, type Origin, type OriginKind } from '../../../../shared/schemas/provenance';
+import type { Units } from '../../../../shared/schemas/auth';
+import { formatInputQuantity } from '../../../../shared/format/input-quantity';
 
 const KIND: Record<OriginKind, { text: string; className: string }> = {
   typed: { text: 'typed', className: 'border-clay-dark bg-clay-light text-clay-dark' },
@@ -18,7 +20,7 @@ function whence(origin: Origin, note: string | undefined): string {
   return [words, origin.detail, note].filter(Boolean).join('; ');
 }
 
-export function AssessmentInputs({ inputs }: { inputs: FieldAssessment['inputs'] }) {
+export function AssessmentInputs({ inputs, units }: { inputs: FieldAssessment['inputs']; units: Units }) {
   return (
     <section aria-labelledby="inputs-heading" data-testid="assessment-inputs" className="flex flex-col gap-1">
       <h3 id="inputs-heading" className="font-serif text-lg font-semibold">
@@ -30,7 +32,7 @@ export function AssessmentInputs({ inputs }: { inputs: FieldAssessment['inputs']
           return (
             <li key={i.key} className="flex flex-wrap items-baseline gap-x-3 gap-y-0.5 px-3 py-1.5" data-testid={`input-${i.key}`}>
               <span className="w-full shrink-0 text-ink-soft sm:w-48">{i.label}</span>
-              <span className="num min-w-0 flex-1 font-medium">{i.value}</span>
+              <span className="num min-w-0 flex-1 font-medium">{i.quantity ? formatInputQuantity(i.quantity, units) : i.value}</span>
               <span className={`whitespace-nowrap rounded border px-1.5 text-xs font-semibold ${KIND[i.origin.kind].className}`} data-testid="input-origin">
                 {KIND[i.origin.kind].text}
               </span>

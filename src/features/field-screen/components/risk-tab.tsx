@@ -213,7 +213,7 @@ export function RiskTab({ farmId, fieldId, season, units, canEdit, onOpenTab }: 
           }
         />
       ) : null}
-      <AssessmentInputs inputs={a.inputs} />
+      <AssessmentInputs inputs={a.inputs} units={units} />
 
       {e?.practice && e.practice.notes.length > 0 ? (
         <Notice title="About the practice">
