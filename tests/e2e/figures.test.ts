@@ -73,7 +73,8 @@ describe('figures on the main screens', () => {
     await page.goto(`${app.baseUrl}/farms/${farm.id}/fields/${ids['Mill Hill']}`);
     const nav = page.getByRole('navigation', { name: 'Where you are' });
     await expect.poll(() => nav.getByTestId('screen-name').innerText(), { timeout: 15_000 }).toBe('Mill Hill');
-    expect((await nav.innerText()).replace(/\s+/g, ' ').trim()).toBe(`/ ${farm.name} / Mill Hill`);
+    // The farm's name arrives with its own query, a moment after the field's.
+    await expect.poll(async () => (await nav.innerText()).replace(/\s+/g, ' ').trim(), { timeout: 15_000 }).toBe(`/ ${farm.name} / Mill Hill`);
     await page.close();
   });
 
