@@ -67,9 +67,10 @@ async function watchedPage(errors: string[], who: string, viewport = { width: 12
 }
 
 let step = 0;
-async function shot(page: Page, name: string) {
+/** A numbered screenshot of the whole page, or of the window only (e.g. scrolled to a part of a long page). */
+async function shot(page: Page, name: string, fullPage = true) {
   step += 1;
-  await page.screenshot({ path: path.join(SHOTS, `${String(step).padStart(2, '0')}-${name}.png`), fullPage: true });
+  await page.screenshot({ path: path.join(SHOTS, `${String(step).padStart(2, '0')}-${name}.png`), fullPage });
 }
 
 /** The first link in the newest caught mail to an address, read from the Dev mailbox page. */
@@ -86,7 +87,7 @@ async function mailedLink(errors: string[], address: string, pathPart: RegExp): 
         await mailbox.waitForTimeout(500);
         return (await row.count()) > 0;
       },
-      { timeout: 30_000, intervals: [500] },
+      { timeout: 30_000, interval: 500 },
     )
     .toBe(true);
   await row.getByRole('button').first().click();
@@ -204,6 +205,9 @@ describe('the whole loop in Chromium', () => {
     await farmer.getByTestId('climate-summary').waitFor({ state: 'attached', timeout: 15_000 });
     expect(await farmer.getByTestId('climate-missing').count()).toBe(0);
     await expect.poll(() => farmer.getByTestId('board-row').count(), { timeout: 15_000 }).toBe(3);
+    // The assessed field ranks first; the other two say what they are missing.
+    await expect.poll(() => farmer.getByTestId('board-row').first().innerText(), { timeout: 15_000 }).toContain('North Ridge');
+    expect(await farmer.getByTestId('board-row').first().innerText()).not.toContain('Not assessed');
     await shot(farmer, 'priority-board');
 
     // The Risk tab's figures and what to do about them; one option goes into the plan.
@@ -211,7 +215,9 @@ describe('the whole loop in Chromium', () => {
     await farmer.getByTestId('assessment-soil-loss').waitFor({ timeout: 15_000 });
     const option = farmer.getByTestId('treatment-option').first();
     await option.waitFor({ timeout: 15_000 });
-    await shot(farmer, 'risk-tab-what-to-do');
+    await shot(farmer, 'risk-tab-figures');
+    await farmer.getByTestId('what-to-do').scrollIntoViewIfNeeded();
+    await shot(farmer, 'risk-tab-what-to-do', false);
     await option.getByTestId('option-add-to-plan').click();
     await option.getByTestId('option-added').waitFor({ timeout: 15_000 });
 
