@@ -91,7 +91,7 @@ async function mailedLink(errors: string[], address: string, pathPart: RegExp): 
     )
     .toBe(true);
   await row.getByRole('button').first().click();
-  await shot(mailbox, `mailbox-${address.split('@')[0]}`);
+  await shot(mailbox, `mailbox-${address.split('-')[0]}`);
   const link = await row.getByTestId('mail-link').first().getAttribute('href');
   expect(link).toMatch(pathPart);
   await mailbox.close();
