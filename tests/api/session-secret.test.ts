@@ -2,7 +2,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import jwt from 'jsonwebtoken';
-import { mkdtempSync, readFileSync, statSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { inject } from 'vitest';
@@ -14,9 +14,13 @@ import { hashToken } from '../../server/services/one-time-token';
 import { makeUser } from '../helpers/test-app';
 
 const dataDir = mkdtempSync(path.join(tmpdir(), 'fieldshed-secret-'));
+const other = mkdtempSync(path.join(tmpdir(), 'fieldshed-secret-'));
 const sequelize = createSequelize(inject('databaseUrl'));
 initModels(sequelize);
-afterAll(() => sequelize.close());
+afterAll(async () => {
+  await sequelize.close();
+  for (const dir of [dataDir, other]) rmSync(dir, { recursive: true, force: true });
+});
 
 describe('session secret', () => {
   it('generates a random secret on first start and keeps it in DATA_DIR with mode 0600', () => {
@@ -26,7 +30,6 @@ describe('session secret', () => {
     expect(first.sessionSecret.length).toBeGreaterThanOrEqual(40);
     expect(readFileSync(file, 'utf8').trim()).toBe(first.sessionSecret);
     expect(loadConfig({ NODE_ENV: 'development', DATA_DIR: dataDir }).sessionSecret).toBe(first.sessionSecret);
-    const other = mkdtempSync(path.join(tmpdir(), 'fieldshed-secret-'));
     expect(loadConfig({ NODE_ENV: 'development', DATA_DIR: other }).sessionSecret).not.toBe(first.sessionSecret);
   });
 
