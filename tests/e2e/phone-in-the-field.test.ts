@@ -51,7 +51,7 @@ afterAll(() => app?.close());
 const overflowPx = () => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
 const offline = (on: boolean) => page.context().setOffline(on);
 /** A network switched off shows as failed loads in the console; those are expected here. */
-const unexpected = () => errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|Failed to fetch/.test(e));
+const unexpected = () => errors.filter((e) => !/ERR_INTERNET_DISCONNECTED|net::ERR_FAILED|Failed to fetch/.test(e));
 
 describe('a phone in the field', () => {
   it('shows the priority board and the soil samples as cards, with nothing running off the screen', async () => {
