@@ -97,7 +97,14 @@ describe('a phone in the field', () => {
   it('keeps a soil check made offline on the phone, counts it as waiting, and sends it when the network is back', async () => {
     await page.goto(`${app.baseUrl}/farms/${farmId}/fields/${fieldId}?tab=soil`);
     await page.getByTestId('soil-sample-card').first().waitFor({ timeout: 15_000 });
-    // The installed app's worker has taken over the page (it claims open pages when it starts).
+    // The installed app's worker takes over the page (it claims open pages when it starts). Installing it means
+    // storing every built file, which a busy machine makes slow: wait for it to be active, and open the page again
+    // if it had not claimed this one yet.
+    await page.evaluate(() => navigator.serviceWorker.ready.then(() => undefined));
+    if (!(await page.evaluate(() => Boolean(navigator.serviceWorker.controller)))) {
+      await page.reload();
+      await page.getByTestId('soil-sample-card').first().waitFor({ timeout: 15_000 });
+    }
     await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller)), { timeout: 20_000 }).toBe(true);
 
     await offline(true);
@@ -130,7 +137,7 @@ describe('a phone in the field', () => {
     expect(stored[0].positionAccuracyM).toBe(HERE.accuracy);
     expect(await SoilPhoto.count({ where: { sampleId: stored[0].id } })).toBe(1);
     expect(unexpected()).toEqual([]);
-  });
+  }, 90_000);
 
   it('opens the field screen, the last board and the farm map again with no network, from what the service worker kept', async () => {
     expect(await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.scope)).toBe(`${app.baseUrl}/`);
