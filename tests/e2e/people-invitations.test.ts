@@ -3,59 +3,29 @@
 // mailbox at desktop and phone widths go to the system temp folder.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
-import { inject } from 'vitest';
 import { createField } from '../../server/services/fields.service';
-import { JobQueue } from '../../server/services/jobs/job-queue';
-import { openMailTransport, type MailTransport } from '../../server/services/mail/mail-transport';
-import { sendMailJobHandler } from '../../server/services/mail/send-mail-job';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { createSequelize } from '../../server/db/sequelize';
-import { initModels } from '../../server/models';
 import { makeFarm, squareFeature, TEST_PASSWORD } from '../helpers/test-app';
-import { launchChromium, listen, signInPage } from '../helpers/browser';
+import { signInPage } from '../helpers/browser';
+import { startMailBrowserApp } from '../helpers/mail-browser-app';
 import path from 'node:path';
 import os from 'node:os';
 import type { Browser } from 'playwright-core';
-import type { Server } from 'node:http';
 
+let app: Awaited<ReturnType<typeof startMailBrowserApp>>;
 let baseUrl: string;
 let browser: Browser;
-let server: Server;
-let mail: MailTransport;
-let jobs: JobQueue;
-const sequelize = createSequelize(inject('databaseUrl'));
 
 beforeAll(async () => {
-  initModels(sequelize);
-  mail = await openMailTransport({ smtpUrl: undefined });
-  const config0 = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}` });
-  jobs = await JobQueue.start(inject('databaseUrl'), undefined, `p${randomUUID().slice(0, 8)}-`, { mail: sendMailJobHandler(mail, config0) });
-  // The links in mail must point at this server: its port is known only once it listens.
-  const placeholder = await listen(createApp({ sequelize, config: config0, clientDir: path.resolve('dist') }));
-  const port = new URL(placeholder.url).port;
-  placeholder.server.close();
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}`, PORT: port, PUBLIC_URL: `http://127.0.0.1:${port}` });
-  const app = createApp({ sequelize, config, jobs, devMailbox: true, clientDir: path.resolve('dist') });
-  server = await new Promise<Server>((resolve) => {
-    const s = app.listen(Number(port), '127.0.0.1', () => resolve(s));
-  });
-  baseUrl = config.publicUrl;
-  browser = await launchChromium();
+  app = await startMailBrowserApp();
+  ({ baseUrl, browser } = app);
 });
-afterAll(async () => {
-  await browser?.close();
-  server?.close();
-  await jobs?.stop(2000);
-  await mail?.close();
-  await sequelize.close();
-});
+afterAll(() => app?.close());
 
 describe('people and invitations in Chromium', () => {
   it('invites an advisor who accepts from the mailed link and sees the farm', async () => {
     const { farm, users } = await makeFarm(['farmer']);
     for (const [i, name] of ['Long slope', 'Creek bottom'].entries()) {
-      await createField({ sequelize }, { userId: users.farmer.id }, farm.id, { geometry: squareFeature(-91.8 + i * 0.01, 42.3, 200).geometry, name });
+      await createField({ sequelize: app.sequelize }, { userId: users.farmer.id }, farm.id, { geometry: squareFeature(-91.8 + i * 0.01, 42.3, 200).geometry, name });
     }
     const email = `advisor-${randomUUID().slice(0, 8)}@example.test`;
     const { page, errors } = await signInPage(browser, baseUrl, users.farmer.email, TEST_PASSWORD);

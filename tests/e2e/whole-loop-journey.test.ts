@@ -5,57 +5,26 @@
 // invitation and approves; a landowner joins for one field, reads the approved plan and saves
 // its PDF. A screenshot of each step goes to test-results/journey/.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
 import { randomUUID } from 'node:crypto';
 import { mkdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Server } from 'node:http';
 import type { Browser, Page } from 'playwright-core';
-import { JobQueue } from '../../server/services/jobs/job-queue';
-import { openMailTransport, type MailTransport } from '../../server/services/mail/mail-transport';
-import { sendMailJobHandler } from '../../server/services/mail/send-mail-job';
-import { createApp } from '../../server/app';
-import { loadConfig } from '../../server/config';
-import { createSequelize } from '../../server/db/sequelize';
-import { initModels } from '../../server/models';
-import { launchChromium, listen } from '../helpers/browser';
+import { startMailBrowserApp } from '../helpers/mail-browser-app';
 import { pdfPageTexts } from '../helpers/pdf-text';
 
 const SHOTS = path.resolve('test-results/journey');
 const PASSWORD = 'a good long password for the journey';
 
+let app: Awaited<ReturnType<typeof startMailBrowserApp>>;
 let baseUrl: string;
 let browser: Browser;
-let server: Server;
-let mail: MailTransport;
-let jobs: JobQueue;
-const sequelize = createSequelize(inject('databaseUrl'));
 
 beforeAll(async () => {
   mkdirSync(SHOTS, { recursive: true });
-  initModels(sequelize);
-  mail = await openMailTransport({ smtpUrl: undefined });
-  const config0 = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}` });
-  jobs = await JobQueue.start(inject('databaseUrl'), undefined, `j${randomUUID().slice(0, 8)}-`, { mail: sendMailJobHandler(mail, config0) });
-  // The links in mail must point at this server: its port is known only once it listens.
-  const placeholder = await listen(createApp({ sequelize, config: config0, clientDir: path.resolve('dist') }));
-  const port = new URL(placeholder.url).port;
-  placeholder.server.close();
-  const config = loadConfig({ NODE_ENV: 'test', SESSION_SECRET: `e2e-${randomUUID()}`, PORT: port, PUBLIC_URL: `http://127.0.0.1:${port}` });
-  const app = createApp({ sequelize, config, jobs, devMailbox: true, clientDir: path.resolve('dist') });
-  server = await new Promise<Server>((resolve) => {
-    const s = app.listen(Number(port), '127.0.0.1', () => resolve(s));
-  });
-  baseUrl = config.publicUrl;
-  browser = await launchChromium();
+  app = await startMailBrowserApp();
+  ({ baseUrl, browser } = app);
 });
-afterAll(async () => {
-  await browser?.close();
-  server?.close();
-  await jobs?.stop(2000);
-  await mail?.close();
-  await sequelize.close();
-});
+afterAll(() => app?.close());
 
 /** A fresh page (its own cookies) whose script errors and 5xx answers are collected, as signInPage does. */
 async function watchedPage(errors: string[], who: string, viewport = { width: 1280, height: 900 }): Promise<Page> {
