@@ -11,16 +11,18 @@ import type { DemGrid } from './types';
 export type DemHeader = Omit<DemGrid, 'elevationM'>;
 /** Why a header cannot be used: not a TIFF at all, a grid over the cell limit, or anything else. */
 export type DemHeaderProblem = 'not_tiff' | 'too_many_cells' | 'invalid';
-export type ReadDemHeaderResult = { ok: true; header: DemHeader; image: GeoTIFFImage; buffer: ArrayBuffer } | { ok: false; problem: DemHeaderProblem; reason: string };
+export type ReadDemHeaderResult = { ok: true; header: DemHeader; image: GeoTIFFImage } | { ok: false; problem: DemHeaderProblem; reason: string };
 
 const fail = (problem: DemHeaderProblem, reason: string): ReadDemHeaderResult => ({ ok: false, problem, reason });
 
 const USER_DEFINED = 32767;
 const FOOT_M: Record<number, number> = { 9002: 0.3048, 9003: 1200 / 3937 };
 
-/** The bytes as an ArrayBuffer of their own (geotiff reads whole ArrayBuffers). */
-export function asArrayBuffer(bytes: ArrayBuffer | Uint8Array): ArrayBuffer {
-  return bytes instanceof Uint8Array ? (bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer) : bytes;
+/** The bytes as a whole ArrayBuffer (geotiff reads whole ArrayBuffers), copied only when they are part of a larger one. */
+function asArrayBuffer(bytes: ArrayBuffer | Uint8Array): ArrayBuffer {
+  if (!(bytes instanceof Uint8Array)) return bytes;
+  if (bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength && bytes.buffer instanceof ArrayBuffer) return bytes.buffer;
+  return bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength) as ArrayBuffer;
 }
 
 function isTiff(buffer: ArrayBuffer): boolean {
@@ -47,15 +49,14 @@ export async function readDemHeader(bytes: ArrayBuffer | Uint8Array, maxCells = 
     return fail('invalid', `damaged GeoTIFF header: ${(e as Error).message}`);
   }
   try {
-    const read = headerOf(image, maxCells);
-    return read.ok ? { ...read, buffer } : read;
+    return headerOf(image, maxCells);
   } catch (e) {
     // A damaged header can make geotiff throw while a tag is read.
     return fail('invalid', `damaged GeoTIFF header: ${(e as Error).message}`);
   }
 }
 
-function headerOf(image: GeoTIFFImage, maxCells: number): { ok: true; header: DemHeader; image: GeoTIFFImage } | { ok: false; problem: DemHeaderProblem; reason: string } {
+function headerOf(image: GeoTIFFImage, maxCells: number): ReadDemHeaderResult {
   const width = image.getWidth();
   const height = image.getHeight();
   if (!(Number.isInteger(width) && width > 0 && Number.isInteger(height) && height > 0)) {
