@@ -2,11 +2,13 @@
 // reads a GeoTIFF, lays out fields of 1 km² (200 × 200 cells of 5 m, 10-cell lanes between them)
 // over it, and runs what the terrain job runs — in the terrain worker thread, as the app does:
 // decode, fill, flow, slope and LS, hillshade, the four map pictures, each field's figures.
-// Prints one JSON line: time per stage, whole time (wall clock and CPU), peak RSS.
-// Usage: tsx scripts/terrain-job-once.ts <dem.tif> <originX> <originY> <cells per side>
+// Prints one JSON line: time per stage, whole time (wall clock and CPU), the thread's start, the
+// RSS before the job and at its peak.
+// Usage: tsx scripts/terrain-job-once.ts <dem.tif> <originX> <originY> <cells per side>, or the
+// same arguments to `node` with the bundle scripts/bench-terrain-job.ts builds of this file.
 import { readFileSync } from 'node:fs';
 import proj4 from 'proj4';
-import { runFarmTerrainInThread } from '../server/services/terrain/run-in-thread';
+import { runFarmTerrainInThread, startTerrainThread } from '../server/services/terrain/run-in-thread';
 import { DEFAULT_SLOPE_CLASSES } from '../server/services/terrain';
 
 const [file, ox, oy, side] = process.argv.slice(2);
@@ -25,8 +27,14 @@ for (let fr = 0; fr < per; fr++) {
   }
 }
 
+const baselineRssBytes = process.memoryUsage().rss;
 const t0 = performance.now();
 const cpu0 = process.cpuUsage();
+// The thread is started first, as the job's first run in a process starts it (after the file is
+// read there; the order changes no time), so its start and memory can be told apart.
+await startTerrainThread();
+const threadStartMs = performance.now() - t0;
+const threadRssBytes = process.memoryUsage().rss;
 const bytes = readFileSync(file);
 // A file this large has a buffer of its own: hand it over as it is, as the job does.
 const demBytes = (bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes.buffer : bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength)) as ArrayBuffer;
@@ -37,7 +45,7 @@ const wholeMs = performance.now() - t0;
 const cpu = process.cpuUsage(cpu0);
 const between = (from: string, to: string) => (at.get(to) ?? wholeMs) - (at.get(from) ?? 0);
 const stages = [
-  { stage: 'read file, start thread', ms: between('', 'decoding') },
+  { stage: 'start thread, read file', ms: between('', 'decoding') },
   { stage: 'decode', ms: between('decoding', 'read') },
   { stage: 'fill', ms: between('start', 'fill') },
   { stage: 'flow directions (D8)', ms: between('fill', 'flow-direction') },
@@ -58,6 +66,10 @@ console.log(JSON.stringify({
   fields: fields.length,
   fieldsWithFigures: out.figures.length,
   layerBytes: out.layers.reduce((a, l) => a + l.png.byteLength, 0),
+  threadStartMs,
+  // RSS of the process before the job (Node and the modules loaded), and with the thread started.
+  baselineRssBytes,
+  threadRssBytes,
   maxRssBytes: process.resourceUsage().maxRSS * 1024,
 }));
 process.exit(0);

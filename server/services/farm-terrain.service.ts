@@ -30,7 +30,11 @@ const STAGE_WORDS: Record<string, string> = {
 /** Buffer over a typed array's bytes, no copy. */
 const bytesOf = (a: Uint8Array | Uint16Array | Float32Array): Buffer => Buffer.from(a.buffer, a.byteOffset, a.byteLength);
 
-/** The file's bytes as an ArrayBuffer of their own, which can be handed to the thread. */
+/**
+ * The file's bytes as an ArrayBuffer of their own, which can be handed to the thread (transferred,
+ * and read there in place). File storage reads a file into a Buffer that is its whole ArrayBuffer,
+ * so this copies nothing; only a view into a larger buffer is copied.
+ */
 function ownArrayBuffer(b: Buffer): ArrayBuffer {
   if (b.byteOffset === 0 && b.byteLength === b.buffer.byteLength) return b.buffer as ArrayBuffer;
   return b.buffer.slice(b.byteOffset, b.byteOffset + b.byteLength) as ArrayBuffer;

@@ -1,24 +1,39 @@
-// The worker thread's side of a farm's terrain runs (started by run-in-thread.ts through
-// terrain-thread.mjs): takes one FarmTerrainInput at a time, posts progress while it works, and
-// posts the result with its large buffers transferred, not copied.
+// The worker thread's side of a farm's terrain runs (started by run-in-thread.ts from the bundle
+// thread-bundle.ts makes of this file): says it is ready once loaded, then takes one
+// FarmTerrainInput at a time, posts progress while it works, and posts the result with its large
+// buffers transferred, not copied.
 import { parentPort } from 'node:worker_threads';
 import { runFarmTerrain, type FarmTerrainInput, type FarmTerrainOutput } from './farm-terrain-run';
 
 export type ThreadMessage =
+  | { type: 'ready' }
   | { type: 'progress'; fraction: number; stage: string }
   | { type: 'done'; output: FarmTerrainOutput }
   | { type: 'error'; message: string };
 
-/** A view that owns its whole buffer (a small Buffer may sit in Node's shared pool, which must not move). */
-function ownBuffer<T extends Uint8Array | Uint16Array | Float32Array>(a: T): T {
-  return a.byteOffset === 0 && a.byteLength === a.buffer.byteLength ? a : (a.slice() as T);
+/**
+ * The array to hand over, its buffer added to `buffers`. A view that fills at least half its
+ * buffer goes as it is, with the whole buffer: the other side gets the same view at the same
+ * offset (e.g. a grid written into the file's own bytes, its header before it). A smaller one is
+ * copied first: it may be a Buffer in Node's shared pool (always under half of it), which must
+ * not move, and a copy costs little there.
+ */
+function handOver<T extends Uint8Array | Uint16Array | Float32Array>(a: T, buffers: Set<ArrayBuffer>): T {
+  const own = a.byteLength * 2 >= a.buffer.byteLength ? a : (a.slice() as T);
+  buffers.add(own.buffer as ArrayBuffer);
+  return own;
 }
 
-/** The result with every large array owning its buffer, and those buffers, to hand over instead of copying. */
+/** The result, and the buffers to transfer with it (each once, even when arrays share one). */
 function forTransfer(out: FarmTerrainOutput): { output: FarmTerrainOutput; buffers: ArrayBuffer[] } {
-  const output = { ...out, ls: ownBuffer(out.ls), labels: ownBuffer(out.labels), layers: out.layers.map((l) => ({ ...l, png: ownBuffer(new Uint8Array(l.png.buffer, l.png.byteOffset, l.png.byteLength)) })) };
-  const buffers = [output.ls.buffer, output.labels.buffer, ...output.layers.map((l) => l.png.buffer)] as ArrayBuffer[];
-  return { output, buffers };
+  const buffers = new Set<ArrayBuffer>();
+  const output = {
+    ...out,
+    ls: handOver(out.ls, buffers),
+    labels: handOver(out.labels, buffers),
+    layers: out.layers.map((l) => ({ ...l, png: handOver(new Uint8Array(l.png.buffer, l.png.byteOffset, l.png.byteLength), buffers) })),
+  };
+  return { output, buffers: [...buffers] };
 }
 
 const port = parentPort;
@@ -33,3 +48,4 @@ port.on('message', (input: FarmTerrainInput) => {
     (e: unknown) => post({ type: 'error', message: e instanceof Error ? e.message : String(e) }),
   );
 });
+port.postMessage({ type: 'ready' } satisfies ThreadMessage);
