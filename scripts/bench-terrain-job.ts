@@ -66,15 +66,7 @@ type JobRun = {
   maxRssBytes: number;
 };
 const dir = mkdtempSync(path.join(os.tmpdir(), 'fieldshed-bench-job-'));
-// The job's process as plain JavaScript: the script and the thread it starts, side by side.
-const bundleDir = path.join(dir, 'bundle');
-await build({
-  ...NODE_BUNDLE_OPTIONS,
-  entryPoints: { 'terrain-job-once': 'scripts/terrain-job-once.ts', 'terrain-thread': 'server/services/terrain/terrain-thread.ts' },
-  outdir: bundleDir,
-  outExtension: { '.js': '.mjs' },
-});
-const jobScript = path.join(bundleDir, 'terrain-job-once.mjs');
+const jobScript = path.join(dir, 'bundle', 'terrain-job-once.mjs');
 const gdalVersion = has('gdalinfo') ? spawnSync('gdalinfo', ['--version'], { encoding: 'utf8' }).stdout.trim() : '';
 const saga = has('saga_cmd');
 const sagaVersion = saga ? (spawnSync('saga_cmd', ['--version'], { encoding: 'utf8' }).stdout.match(/SAGA Version: (\S+)/)?.[1] ?? '') : '';
@@ -91,6 +83,13 @@ function runSaga(file: string, n: number): number {
 }
 const results: Array<{ n: number; ratios: number[]; sagaRatios: number[]; ourMs: number[]; gdalMs: number[]; sagaMs: number[]; jobs: JobRun[] }> = [];
 try {
+  // The job's process as plain JavaScript: the script and the thread it starts, side by side.
+  await build({
+    ...NODE_BUNDLE_OPTIONS,
+    entryPoints: { 'terrain-job-once': 'scripts/terrain-job-once.ts', 'terrain-thread': 'server/services/terrain/terrain-thread.ts' },
+    outdir: path.dirname(jobScript),
+    outExtension: { '.js': '.mjs' },
+  });
   for (const n of SIZES) {
     const file = path.join(dir, `dem-${n}.tif`);
     writeFileSync(file, writeGeoTiff({ width: n, height: n, samples: makeDem(n), originX: ORIGIN_X, originY: ORIGIN_Y, cellSizeX: 5, cellSizeY: 5, epsg: 32615, nodata: -9999 }));
