@@ -15,6 +15,7 @@ import path from 'node:path';
 import { build } from 'esbuild';
 import { writeGeoTiff } from '../server/services/terrain';
 import { NODE_BUNDLE_OPTIONS } from '../server/services/terrain/thread-bundle';
+import { benchFields } from './bench-fields';
 import { writeDocSection } from './doc-section';
 
 const args = process.argv.slice(2);
@@ -92,12 +93,14 @@ try {
   });
   for (const n of SIZES) {
     const file = path.join(dir, `dem-${n}.tif`);
+    const fieldsFile = path.join(dir, `fields-${n}.json`);
+    writeFileSync(fieldsFile, JSON.stringify(benchFields(ORIGIN_X, ORIGIN_Y, n)));
     writeFileSync(file, writeGeoTiff({ width: n, height: n, samples: makeDem(n), originX: ORIGIN_X, originY: ORIGIN_Y, cellSizeX: 5, cellSizeY: 5, epsg: 32615, nodata: -9999 }));
     const r = { n, ratios: [] as number[], sagaRatios: [] as number[], ourMs: [] as number[], gdalMs: [] as number[], sagaMs: [] as number[], jobs: [] as JobRun[] };
     for (let k = 0; k < pairsFor(n); k++) {
       const runGdal = () => (has('gdaldem') ? wall('gdaldem', ['slope', '-p', '-q', file, path.join(dir, `slope-${n}.tif`)]).ms : NaN);
       const runOurs = () => {
-        const w = wall(process.execPath, [jobScript, file, String(ORIGIN_X), String(ORIGIN_Y), String(n)]);
+        const w = wall(process.execPath, [jobScript, file, fieldsFile]);
         r.jobs.push(JSON.parse(w.stdout.trim().split('\n').pop()!) as JobRun);
         return w.ms;
       };
@@ -125,11 +128,12 @@ const lines = [
   '',
   '- **Fieldshed process**: `node terrain-job-once.mjs` from start to exit, plain JavaScript: scripts/terrain-job-once.ts and',
   '  the terrain thread\'s code bundled by esbuild once before the rounds (not counted), as the app\'s thread runs its',
-  '  bundle. Covered: Node start-up, the terrain worker thread\'s start, reading the file, decode (in place: the grid is',
-  '  the file\'s own bytes), Priority-Flood+ε fill with slope cells off the heap,',
-  '  D8, contributing area (unbroken, then broken at field borders), Horn slope and LS, hillshade, the four map pictures',
-  '  (palette PNGs), each field\'s figures (1 km² fields, 200×200 cells, 10-cell lanes; every third with a typed 60 m',
-  '  slope length). Not included: the database writes and file storage of the job.',
+  '  bundle. Covered: Node start-up, reading the fields\' outlines (laid out beforehand, scripts/bench-fields.ts), the',
+  '  terrain worker thread\'s start, reading the file, decode (in place: the grid is the file\'s own bytes),',
+  '  Priority-Flood+ε fill with slope cells off the heap, D8, contributing area (unbroken, then broken at field borders),',
+  '  Horn slope and LS, hillshade, the four map pictures (palette PNGs), each field\'s figures (1 km² fields, 200×200',
+  '  cells, 10-cell lanes; every third with a typed 60 m slope length). Not included: the database writes and file',
+  '  storage of the job.',
   '- **gdaldem**: `gdaldem slope -p` (Horn slope only) from start to exit, on the same GeoTIFF.',
   saga
     ? `- **SAGA ${sagaVersion}**: four \`saga_cmd --cores=1\` processes one after the other, each from start to exit, the times summed:

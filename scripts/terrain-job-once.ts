@@ -1,31 +1,22 @@
 // One farm terrain job's computation in a process of its own, for scripts/bench-terrain-job.ts:
-// reads a GeoTIFF, lays out fields of 1 km² (200 × 200 cells of 5 m, 10-cell lanes between them)
-// over it, and runs what the terrain job runs — in the terrain worker thread, as the app does:
-// decode, fill, flow, slope and LS, hillshade, the four map pictures, each field's figures.
+// reads a GeoTIFF and the benchmark farm's fields over it (scripts/bench-fields.ts), and runs what
+// the terrain job runs — in the terrain worker thread, as the app does: decode, fill, flow, slope
+// and LS, hillshade, the four map pictures, each field's figures.
 // Prints one JSON line: time per stage, whole time (wall clock and CPU), the thread's start, the
 // RSS before the job and at its peak.
-// Usage: tsx scripts/terrain-job-once.ts <dem.tif> <originX> <originY> <cells per side>, or the
-// same arguments to `node` with the bundle scripts/bench-terrain-job.ts builds of this file.
+// Usage: tsx scripts/terrain-job-once.ts <dem.tif> <originX> <originY> <cells per side>, or
+// <dem.tif> <fields.json> with the fields written beforehand, as the benchmark does so that this
+// process does not load proj4 only to lay them out; the same arguments to `node` with the bundle
+// scripts/bench-terrain-job.ts builds of this file.
 import { readFileSync } from 'node:fs';
-import proj4 from 'proj4';
 import { runFarmTerrainInThread, startTerrainThread } from '../server/services/terrain/run-in-thread';
-import { DEFAULT_SLOPE_CLASSES } from '../server/services/terrain';
+import { DEFAULT_SLOPE_CLASSES } from '../server/services/terrain/slope-classes';
+import type { BenchField } from './bench-fields';
 
-const [file, ox, oy, side] = process.argv.slice(2);
-const originX = Number(ox), originY = Number(oy), n = Number(side);
-const UTM15N = '+proj=utm +zone=15 +datum=WGS84 +units=m +no_defs';
-const CELL_M = 5;
-
-const fields: Array<{ id: number; geometry: GeoJSON.Polygon; typedSlopeLengthM: number | null }> = [];
-const per = Math.floor(n / 210);
-for (let fr = 0; fr < per; fr++) {
-  for (let fc = 0; fc < per; fc++) {
-    const e0 = originX + fc * 210 * CELL_M, n1 = originY - fr * 210 * CELL_M, s = 200 * CELL_M;
-    const ring = [[e0, n1 - s], [e0 + s, n1 - s], [e0 + s, n1], [e0, n1], [e0, n1 - s]].map((p) => proj4(UTM15N, 'WGS84', p));
-    // Every third field has a typed slope length of 60 m (terraces), as in scripts/bench-terrain.ts.
-    fields.push({ id: fields.length + 1, geometry: { type: 'Polygon', coordinates: [ring] }, typedSlopeLengthM: fields.length % 3 === 2 ? 60 : null });
-  }
-}
+const args = process.argv.slice(2);
+const file = args[0];
+const fields: BenchField[] =
+  args.length === 2 ? (JSON.parse(readFileSync(args[1], 'utf8')) as BenchField[]) : (await import('./bench-fields')).benchFields(Number(args[1]), Number(args[2]), Number(args[3]));
 
 const baselineRssBytes = process.memoryUsage().rss;
 const t0 = performance.now();
