@@ -1,7 +1,8 @@
 // The farm job's terrain run in the DEM's own grid: the same stages as runTerrain (pipeline.ts),
 // ordered so that the elevations can be overwritten and every large buffer serves twice.
-//   1. slope (2-byte codes) and shaded relief (1 byte) from the DEM, in one pass
-//      (slope-and-relief.ts); the caller draws the relief picture from it (onRelief);
+//   1. shaded relief (1 byte) from the DEM, which the caller draws at once (onRelief), then slope
+//      as 2-byte codes (slope-and-relief.ts): drawn before the codes exist, the relief picture's
+//      scratch memory does not add to the run's peak;
 //   2. Priority-Flood+ε fill in place, the relief's buffer reused for the closed flags, which
 //      become the D8 directions;
 //   3. contributing area into the filled grid (where water gathers → a 1-bit mask), then again
@@ -66,10 +67,14 @@ export function runTerrainInPlace(dem: DemGrid, options: InPlaceOptions = {}): I
   const z = dem.elevationM;
   progress(0, 'start');
 
-  const codes = new Uint16Array(w * h);
+  // The relief first and drawn at once, while only it and the DEM are held; then the slope codes.
   const byteGrid = new Uint8Array(w * h); // the relief, then the closed flags, then the directions
-  slopeCodesAndRelief(dem, codes, byteGrid);
-  options.onRelief?.(byteGrid);
+  if (options.onRelief) {
+    slopeCodesAndRelief(dem, null, byteGrid);
+    options.onRelief(byteGrid);
+  }
+  const codes = new Uint16Array(w * h);
+  slopeCodesAndRelief(dem, codes, null);
   step('slope and relief');
 
   fillDepressions(z, w, h, { inPlace: true, closedScratch: byteGrid });

@@ -15,12 +15,12 @@ const SIN_ALT = Math.sin(ALTITUDE);
 const SUN_E = Math.sin(AZIMUTH) * Math.cos(ALTITUDE);
 const SUN_N = Math.cos(AZIMUTH) * Math.cos(ALTITUDE);
 
-/** Fills `codes` (slope, 2-byte codes) and, when given, `shade` (relief 0..255, 0 = nodata). */
-export function slopeCodesAndRelief(dem: DemGrid, codes: Uint16Array, shade: Uint8Array | null): void {
+/** Fills `codes` (slope, 2-byte codes) and `shade` (relief 0..255, 0 = nodata), either or both. */
+export function slopeCodesAndRelief(dem: DemGrid, codes: Uint16Array | null, shade: Uint8Array | null): void {
   const { width: w, height: h, elevationM: z } = dem;
-  if (codes.length !== w * h) throw new Error(`codes has ${codes.length} cells, expected ${w * h}`);
+  if (codes && codes.length !== w * h) throw new Error(`codes has ${codes.length} cells, expected ${w * h}`);
   if (shade && shade.length !== w * h) throw new Error(`shade has ${shade.length} cells, expected ${w * h}`);
-  codes.fill(SLOPE_CODE_NODATA);
+  codes?.fill(SLOPE_CODE_NODATA);
   shade?.fill(0);
   for (let r = 1; r < h - 1; r++) {
     // Horn 1981: dz/dx = ((z2 + 2z5 + z8) − (z0 + 2z3 + z6)) / (8·dx); dz/dy likewise by rows
@@ -36,7 +36,7 @@ export function slopeCodesAndRelief(dem: DemGrid, codes: Uint16Array, shade: Uin
       const dx = (z2 + 2 * z5 + z8 - (z0 + 2 * z3 + z6)) * kx;
       const dy = (z6 + 2 * z7 + z8 - (z0 + 2 * z1 + z2)) * ky;
       // slopeHornRow keeps slope in a Float32 grid: round as it does
-      codes[i] = encodeSlopePct(Math.fround(100 * Math.sqrt(dx * dx + dy * dy)));
+      if (codes !== null) codes[i] = encodeSlopePct(Math.fround(100 * Math.sqrt(dx * dx + dy * dy)));
       if (shade === null) continue;
       // Lambert, as hillshade.ts with p = dx, q = −dy: (sin h − p·sinA·cos h − q·cosA·cos h) / √(1 + p² + q²)
       const cang = (SIN_ALT - dx * SUN_E + dy * SUN_N) / Math.sqrt(1 + dx * dx + dy * dy);
