@@ -1,12 +1,14 @@
 // A farm's whole terrain computation from the elevation model's file bytes and the field
-// outlines: decode, label each field's cells, runTerrain, draw the map layers, work out each
-// field's figures. Pure CPU and no database, so it can run in a worker thread
+// outlines: decode, find each field's cells, run the terrain stages in the DEM's own grid
+// (pipeline-in-place.ts), draw the map layers, work out each field's figures. Pure CPU and no database, so it can run in a worker thread
 // (terrain-thread.ts); the caller reads its inputs and stores what it returns.
 // Field borders break overland flow for LS; where water gathers is drawn from unbroken flow.
-// Field labels are 2 bytes per cell (Uint16, up to 65 535 fields), kept for the soil-loss map.
+// Field labels are 2 bytes per cell (Uint16, up to 65 535 fields), made at the end for the
+// soil-loss map in the slope codes' buffer.
 import type { MultiPolygon, Polygon } from 'geojson';
 import { readDem } from './read-dem';
-import { runTerrain } from './pipeline';
+import { runTerrainInPlace } from './pipeline-in-place';
+import { FieldLabelRows } from './field-label-rows';
 import { renderLayer, type BoundsWgs84, type LayerKind, type LegendEntry, type RenderValues } from './render-layer';
 import { reprojectBoundary, converterBetween } from './reproject';
 import { polygonSpans, type GridFrame } from './rasterise-polygon';
@@ -55,42 +57,37 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
   const dem = read.dem;
   onProgress(0.05, 'read');
   const frame = { width: dem.width, height: dem.height, originX: dem.originX, originY: dem.originY, cellSizeX: dem.cellSizeX, cellSizeY: dem.cellSizeY, epsg: dem.epsg };
-  // Each field's cells carry its label, so overland flow starts afresh at its border.
-  const labels = new Uint16Array(dem.width * dem.height);
+  // Each field's cells, as row runs; overland flow starts afresh at its border.
   const ringsByField = new Map<number, Array<Array<[number, number]>>>();
-  fields.forEach((f, idx) => {
+  const spansByField = fields.map((f) => {
     const rings = reprojectBoundary(f.geometry, dem.epsg);
-    if (!rings.ok) return;
+    if (!rings.ok) return null;
     ringsByField.set(f.id, rings.rings);
-    const spans = polygonSpans(rings.rings, frame);
-    for (let k = 0; k < spans.length; k += 2) labels.fill(idx + 1, spans[k], spans[k + 1]);
+    return polygonSpans(rings.rings, frame);
   });
+  const fieldRows = new FieldLabelRows(dem.width, dem.height, spansByField);
   // A slope length typed on the Ground tab (terraces, diversions, field roads) caps the flow length.
   const capByLabel = new Float64Array(fields.length + 1).fill(NaN);
   fields.forEach((f, idx) => (capByLabel[idx + 1] = f.typedSlopeLengthM ?? NaN));
-  const grids = runTerrain(dem, {
-    flowBreakLabels: labels,
+
+  const layers: FarmTerrainOutput['layers'] = [];
+  const draw = (kind: LayerKind, values: RenderValues) => {
+    const r = renderLayer({ kind, grid: frame, values, slopeClasses });
+    if (!r.ok) throw new Error(`Could not draw the ${LAYER_LABELS[kind]} layer: ${r.reason}`);
+    layers.push({ kind, png: r.png, bounds: r.bounds, legend: r.legend });
+  };
+  // The DEM's grid is filled in place and ends holding LS (pipeline-in-place.ts).
+  const grids = runTerrainInPlace(dem, {
+    fields: fieldRows,
     maxSlopeLengthMByLabel: capByLabel,
-    onProgress: (f, stage) => onProgress(0.05 + 0.65 * f, stage),
+    onRelief: (shade) => draw('hillshade', shade),
+    onProgress: (f, stage) => onProgress(0.05 + 0.7 * f, stage),
   });
 
-  // The elevations are not needed past runTerrain: free them before the pictures are drawn.
-  dem.elevationM = new Float32Array(0);
-
-  onProgress(0.7, 'drawing map layers');
-  const sources: { kind: LayerKind; values: RenderValues | null }[] = [
-    { kind: 'hillshade', values: grids.hillshade },
-    { kind: 'slope-classes', values: grids.slopePct },
-    { kind: 'ls', values: grids.ls },
-    { kind: 'concentrated-flow', values: grids.contributingAreaM2 },
-  ];
-  const layers: FarmTerrainOutput['layers'] = [];
-  for (const l of sources) {
-    if (!l.values) continue;
-    const r = renderLayer({ kind: l.kind, grid: frame, values: l.values, slopeClasses });
-    if (!r.ok) throw new Error(`Could not draw the ${LAYER_LABELS[l.kind]} layer: ${r.reason}`);
-    layers.push({ kind: l.kind, png: r.png, bounds: r.bounds, legend: r.legend });
-  }
+  onProgress(0.75, 'drawing map layers');
+  draw('slope-classes', grids.slopePct);
+  draw('ls', grids.ls);
+  draw('concentrated-flow', grids.contributingAreaM2);
 
   onProgress(0.85, 'working out each field');
   const toWgs = converterBetween(dem.epsg, 4326);
@@ -105,5 +102,7 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
     const stats: FieldTerrainFigures = { ...s.stats, concentratedFlow: { ...flow, points: pointsWgs84 }, cellSizeM: dem.rowCellSizeXM[0], epsg: dem.epsg };
     return [{ fieldId: f.id, stats }];
   });
+  // The slope codes are done with: their buffer takes the field labels kept for the soil-loss map.
+  const labels = fieldRows.toGrid(new Uint16Array(grids.slopePct.codes.buffer, 0, dem.width * dem.height));
   return { frame, layers, ls: grids.ls, labels, figures };
 }

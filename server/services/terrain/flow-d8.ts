@@ -25,6 +25,7 @@ export function flowDirectionD8(filledM: Float32Array, grid: GridShape, out?: Ui
   const { width: w, height: h } = grid;
   if (out && out.length !== w * h) throw new Error(`out has ${out.length} cells, expected ${w * h}`);
   const dir = out ? out.fill(0) : new Uint8Array(w * h);
+  const z = filledM;
   const off = new Int32Array(9);
   for (let k = 1; k <= 8; k++) off[k] = D8_ROW[k] * w + D8_COL[k];
   const invDist = new Float64Array(9);
@@ -34,28 +35,47 @@ export function flowDirectionD8(filledM: Float32Array, grid: GridShape, out?: Ui
     const diag = 1 / Math.sqrt(dx * dx + dy * dy);
     for (let k = 1; k <= 8; k++) invDist[k] = D8_ROW[k] !== 0 && D8_COL[k] !== 0 ? diag : D8_ROW[k] !== 0 ? 1 / dy : 1 / dx;
     const edgeRow = r === 0 || r === h - 1;
-    for (let c = 0; c < w; c++) {
-      const i = r * w + c;
-      const zc = filledM[i];
-      if (zc !== zc) continue;
-      let best = 0, bestCode = 0;
-      if (!edgeRow && c > 0 && c < w - 1) {
-        for (let k = 1; k <= 8; k++) {
-          const g = (zc - filledM[i + off[k]]) * invDist[k]; // NaN neighbour → NaN, never > best
-          if (g > best) { best = g; bestCode = k; }
-        }
-      } else {
-        for (let k = 1; k <= 8; k++) {
-          const rr = r + D8_ROW[k], cc = c + D8_COL[k];
-          if (rr < 0 || cc < 0 || rr >= h || cc >= w) continue;
-          const g = (zc - filledM[i + off[k]]) * invDist[k];
-          if (g > best) { best = g; bestCode = k; }
-        }
+    const base = r * w;
+    if (!edgeRow && w > 2) {
+      edgeCell(z, dir, grid, r, 0, off, invDist);
+      // Interior cells: the eight neighbours written out in code order 1..8 (E, SE, S, SW, W, NW,
+      // N, NE), the first strictly steepest kept, as the loop over k below does.
+      const ex = 1 / dx, sy = 1 / dy;
+      for (let i = base + 1, end = base + w - 1; i < end; i++) {
+        const zc = z[i];
+        if (zc !== zc) continue;
+        let best = 0, code = 0, g = 0; // a NaN neighbour gives NaN, never > best
+        g = (zc - z[i + 1]) * ex; if (g > best) { best = g; code = 1; }
+        g = (zc - z[i + w + 1]) * diag; if (g > best) { best = g; code = 2; }
+        g = (zc - z[i + w]) * sy; if (g > best) { best = g; code = 3; }
+        g = (zc - z[i + w - 1]) * diag; if (g > best) { best = g; code = 4; }
+        g = (zc - z[i - 1]) * ex; if (g > best) { best = g; code = 5; }
+        g = (zc - z[i - w - 1]) * diag; if (g > best) { best = g; code = 6; }
+        g = (zc - z[i - w]) * sy; if (g > best) { best = g; code = 7; }
+        g = (zc - z[i - w + 1]) * diag; if (g > best) code = 8;
+        dir[i] = code;
       }
-      dir[i] = bestCode;
+      edgeCell(z, dir, grid, r, w - 1, off, invDist);
+    } else {
+      for (let c = 0; c < w; c++) edgeCell(z, dir, grid, r, c, off, invDist);
     }
   }
   return dir;
+}
+
+/** D8 code of a cell on the grid's border: neighbours outside the grid are left out. */
+function edgeCell(z: Float32Array, dir: Uint8Array, grid: GridShape, r: number, c: number, off: Int32Array, invDist: Float64Array): void {
+  const i = r * grid.width + c;
+  const zc = z[i];
+  if (zc !== zc) return;
+  let best = 0, bestCode = 0;
+  for (let k = 1; k <= 8; k++) {
+    const rr = r + D8_ROW[k], cc = c + D8_COL[k];
+    if (rr < 0 || cc < 0 || rr >= grid.height || cc >= grid.width) continue;
+    const g = (zc - z[i + off[k]]) * invDist[k];
+    if (g > best) { best = g; bestCode = k; }
+  }
+  dir[i] = bestCode;
 }
 
 /**
@@ -65,7 +85,10 @@ export function flowDirectionD8(filledM: Float32Array, grid: GridShape, out?: Ui
  * Float32 grid to reuse, even `nodataMask` itself (each cell is read before it is written).
  * With `labels`, area passes from a cell to its receiver only when both carry the same label:
  * a flow break at label edges (e.g. field borders), while the walk order stays the same.
- * `inDegreeScratch` (one byte per cell, overwritten) saves allocating the in-degree grid.
+ * `flowBreaks` (1 bit per cell, bit i & 7 of byte i >> 3) says the same per cell directly: set
+ * where no area passes from the cell to its receiver (see labelFlowBreaks).
+ * The count of donors still to come lives in the upper four bits of each `dir` byte during the
+ * walk (codes use the lower four), so no in-degree grid is needed; `dir` is as given on return.
  */
 export function flowAccumulationM2(
   dir: Uint8Array,
@@ -73,40 +96,77 @@ export function flowAccumulationM2(
   nodataMask: Float32Array,
   out?: Float32Array,
   labels?: Int32Array | Uint16Array,
-  inDegreeScratch?: Uint8Array,
+  flowBreaks?: Uint8Array,
 ): Float32Array {
   const { width: w, height: h } = grid;
   const n = w * h;
   const acc = out ?? new Float32Array(n);
   if (acc.length !== n) throw new Error(`out has ${acc.length} cells, expected ${n}`);
-  if (inDegreeScratch && inDegreeScratch.length !== n) throw new Error(`inDegreeScratch has ${inDegreeScratch.length} cells, expected ${n}`);
+  if (dir.length !== n) throw new Error(`dir has ${dir.length} cells, expected ${n}`);
+  const breaks = flowBreaks ?? (labels ? labelFlowBreaks(dir, w, h, labels) : null);
+  if (breaks && breaks.length !== (n + 7) >> 3) throw new Error(`flowBreaks has ${breaks.length} bytes, expected ${(n + 7) >> 3}`);
   const off = new Int32Array(9);
   for (let k = 1; k <= 8; k++) off[k] = D8_ROW[k] * w + D8_COL[k];
-  const indeg = inDegreeScratch ? inDegreeScratch.fill(0) : new Uint8Array(n);
+  for (let i = 0; i < n; i++) if (dir[i] > 8) throw new Error(`dir holds code ${dir[i]} at cell ${i}; D8 codes are 0..8`);
   for (let r = 0; r < h; r++) {
     const areaM2 = grid.rowCellSizeXM[r] * grid.rowCellSizeYM[r];
     for (let i = r * w, end = i + w; i < end; i++) {
       const m = nodataMask[i];
       acc[i] = m === m ? areaM2 : NaN;
-      const d = dir[i];
-      if (d !== 0) indeg[i + off[d]]++;
+      const d = dir[i] & 15;
+      if (d !== 0) dir[i + off[d]] += 16; // one more donor (at most 8: fits in four bits)
     }
   }
-  const DONE = 255;
+  // Upper bits: 0 = all donors in, 1..8 = donors to come, 15 = done.
   for (let i = 0; i < n; i++) {
-    if (indeg[i] !== 0) continue;
+    if (dir[i] >= 16) continue;
     let j = i;
     for (;;) {
-      indeg[j] = DONE;
       const d = dir[j];
+      dir[j] = d | 0xf0;
       if (d === 0) break;
       const k = j + off[d];
-      if (!labels || labels[k] === labels[j]) acc[k] += acc[j];
-      if (--indeg[k] !== 0) break;
+      if (breaks === null || ((breaks[j >> 3] >> (j & 7)) & 1) === 0) acc[k] += acc[j];
+      const left = dir[k] - 16;
+      dir[k] = left;
+      if (left >= 16) break;
       j = k;
     }
   }
+  for (let i = 0; i < n; i++) dir[i] &= 15;
   return acc;
+}
+
+/**
+ * Where a cell and its D8 receiver carry different labels, as 1 bit per cell (bit i & 7 of byte
+ * i >> 3): the flow breaks for flowAccumulationM2. `labelRow(r, out)` writes row r's labels.
+ */
+export function flowBreaksByRow(dir: Uint8Array, width: number, height: number, labelRow: (r: number, out: Uint16Array | Int32Array) => void): Uint8Array {
+  const bits = new Uint8Array((width * height + 7) >> 3);
+  // Rows r − 1, r, r + 1, turned round as r moves on.
+  let above = new Int32Array(width), here = new Int32Array(width), below = new Int32Array(width);
+  if (height > 0) labelRow(0, here);
+  for (let r = 0; r < height; r++) {
+    if (r + 1 < height) labelRow(r + 1, below);
+    const rows = [above, here, below];
+    for (let c = 0, i = r * width; c < width; c++, i++) {
+      const d = dir[i] & 15;
+      if (d === 0) continue;
+      if (rows[1 + D8_ROW[d]][c + D8_COL[d]] !== here[c]) bits[i >> 3] |= 1 << (i & 7);
+    }
+    const spare = above;
+    above = here;
+    here = below;
+    below = spare;
+  }
+  return bits;
+}
+
+/** flowBreaksByRow for a whole label grid. */
+export function labelFlowBreaks(dir: Uint8Array, width: number, height: number, labels: Int32Array | Uint16Array): Uint8Array {
+  return flowBreaksByRow(dir, width, height, (r, out) => {
+    for (let c = 0, i = r * width; c < width; c++, i++) out[c] = labels[i];
+  });
 }
 
 /** Upslope area at each cell's inlet, A_in = contributing area − the cell's own area (m²). */

@@ -5,8 +5,8 @@
 //
 // Memory (bytes per cell beyond the DEM, n cells; accounted in a ByteLedger, see
 // docs/benchmarks.md): one Float32 work grid is the filled DEM, then the contributing area, then
-// LS (4); the fill's closed flags become the D8 directions (1), dropped once LS is done; the
-// in-degree scratch (1) lives through the accumulation(s) only. Slope is computed row by row for
+// LS (4); the fill's closed flags become the D8 directions (1), dropped once LS is done (the
+// accumulation keeps its count of donors in the directions' upper bits). Slope is computed row by row for
 // LS and kept as 2-byte codes (slope-pct-grid.ts); where water gathers is kept as 1 bit per cell
 // (contributing-area-mask.ts); the hillshade (1) comes last, after the directions are freed.
 // Peak: 7.125 (at LS, and again at the end) — plus the caller's labels (2 as Uint16), plus 4
@@ -15,7 +15,7 @@ import type { RillRatio } from '../../../shared/erosion/slope-length';
 import { ByteLedger, type MemoryFn } from './byte-ledger';
 import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
 import { fillDepressions } from './fill-depressions';
-import { flowAccumulationM2, flowDirectionD8 } from './flow-d8';
+import { flowAccumulationM2, flowDirectionD8, labelFlowBreaks } from './flow-d8';
 import { hillshade } from './hillshade';
 import { lsGrid } from './ls-grid';
 import { slopeHornRow } from './slope-horn';
@@ -176,18 +176,18 @@ function flowAndLs(dem: DemGrid, work: Float32Array, options: TerrainOptions, le
 /** Contributing area into `work` (unbroken → the mask; then, with labels, broken at their edges). */
 function accumulate(dem: DemGrid, work: Float32Array, dir: Uint8Array, options: TerrainOptions, ledger: ByteLedger): ContributingAreaMask {
   const labels = options.flowBreakLabels;
-  const inDegree = new Uint8Array(work.length);
-  ledger.hold('in-degree', inDegree.byteLength);
   // The filled DEM is NaN exactly where the DEM is, so the DEM serves as the nodata mask.
-  flowAccumulationM2(dir, dem, dem.elevationM, work, undefined, inDegree);
+  flowAccumulationM2(dir, dem, dem.elevationM, work);
   const flowMask = ContributingAreaMask.fromArea(work, options.concentratedFlowMinAreaM2 ?? DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2);
   ledger.hold('flow mask', flowMask.bits.byteLength);
   ledger.mark('flow-accumulation');
   if (labels) {
     // LS counts only the area inside the same field: accumulate again, broken at labels.
-    flowAccumulationM2(dir, dem, dem.elevationM, work, labels, inDegree);
+    const breaks = labelFlowBreaks(dir, dem.width, dem.height, labels);
+    ledger.hold('flow breaks', breaks.byteLength);
+    flowAccumulationM2(dir, dem, dem.elevationM, work, undefined, breaks);
     ledger.mark('field-broken accumulation');
+    ledger.drop('flow breaks');
   }
-  ledger.drop('in-degree');
   return flowMask;
 }
