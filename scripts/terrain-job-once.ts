@@ -29,7 +29,7 @@ const threadRssBytes = process.memoryUsage().rss;
 const bytes = readFileSync(file);
 // A file this large has a buffer of its own: hand it over as it is, as the job does.
 const demBytes = (bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes.buffer : bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength)) as ArrayBuffer;
-// Progress names the runTerrain stage just finished; 'decoding', 'drawing map layers' and 'working out each field' name the one starting.
+// Progress names the stage just finished (pipeline-in-place.ts); 'decoding', 'drawing map layers' and 'working out each field' name the one starting.
 const at = new Map<string, number>();
 const out = await runFarmTerrainInThread({ demBytes, fields, slopeClasses: [...DEFAULT_SLOPE_CLASSES] }, (_f, stage) => at.set(stage, performance.now() - t0));
 const wholeMs = performance.now() - t0;
@@ -38,12 +38,13 @@ const between = (from: string, to: string) => (at.get(to) ?? wholeMs) - (at.get(
 const stages = [
   { stage: 'start thread, read file', ms: between('', 'decoding') },
   { stage: 'decode', ms: between('decoding', 'read') },
-  { stage: 'fill', ms: between('start', 'fill') },
+  { stage: 'field outlines to cells', ms: between('read', 'start') },
+  { stage: 'relief and its picture, slope', ms: between('start', 'slope and relief') },
+  { stage: 'fill', ms: between('slope and relief', 'fill') },
   { stage: 'flow directions (D8)', ms: between('fill', 'flow-direction') },
   { stage: 'contributing area, twice', ms: between('flow-direction', 'flow-accumulation') },
-  { stage: 'slope and LS', ms: between('flow-accumulation', 'ls') },
-  { stage: 'hillshade', ms: between('ls', 'hillshade') },
-  { stage: 'four map pictures', ms: between('drawing map layers', 'working out each field') },
+  { stage: 'LS', ms: between('flow-accumulation', 'ls') },
+  { stage: 'three other map pictures', ms: between('drawing map layers', 'working out each field') },
   { stage: "each field's figures, hand-back", ms: between('working out each field', '') },
 ];
 console.log(JSON.stringify({

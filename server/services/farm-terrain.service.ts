@@ -21,10 +21,8 @@ const STAGE_WORDS: Record<string, string> = {
   fill: 'hollows filled',
   'flow-direction': 'flow directions',
   'flow-accumulation': 'upslope areas',
-  ls: 'slope and LS',
-  hillshade: 'shaded relief',
-  'soil-loss': 'soil loss',
-  done: 'grids done',
+  'slope and relief': 'slope and shaded relief',
+  ls: 'LS',
 };
 
 /** Buffer over a typed array's bytes, no copy. */

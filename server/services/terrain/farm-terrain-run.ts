@@ -49,7 +49,8 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
   const { fields, slopeClasses } = input;
   if (fields.length > MAX_TERRAIN_FIELDS) throw new Error(`This farm has ${fields.length} fields; terrain can label at most ${MAX_TERRAIN_FIELDS}.`);
   onProgress(0, 'decoding');
-  // Taken out of the input, so the file's bytes can be freed as soon as they are decoded.
+  // Taken out of the input: for a plain Float32 file the grid is the file's own bytes (read-dem.ts),
+  // which the run then overwrites.
   const bytes = input.demBytes;
   input.demBytes = new ArrayBuffer(0);
   const read = await readDem(bytes);
@@ -81,10 +82,10 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
     fields: fieldRows,
     maxSlopeLengthMByLabel: capByLabel,
     onRelief: (shade) => draw('hillshade', shade),
-    onProgress: (f, stage) => onProgress(0.05 + 0.7 * f, stage),
+    onProgress: (f, stage) => onProgress(0.05 + 0.65 * f, stage),
   });
 
-  onProgress(0.75, 'drawing map layers');
+  onProgress(0.7, 'drawing map layers');
   draw('slope-classes', grids.slopePct);
   draw('ls', grids.ls);
   draw('concentrated-flow', grids.contributingAreaM2);
