@@ -6,18 +6,26 @@
 // their spill point) with no separate flat-resolution pass. The ε is one Float32 step (~3e-5 m
 // at 300 m), far below DEM precision.
 //
-// Cells on slopes skip the priority queue (Zhou, Sun & Fu 2016, Computers & Geosciences 90:87,
-// "an efficient variant of the Priority-Flood algorithm"): a neighbour n above the ε step whose
-// own unvisited neighbours all lie above n's ε step can raise nothing, and its filled elevation is
-// its own (the path back through the cell it was reached from is never higher), so it is taken
-// at once from a stack, in any order, instead of waiting in the heap. Only cells that may border
-// a hollow or a flat go through the heap. The filled surface is the plain version's up to the ε
-// steps on flats (which cell of a flat gets which step depends on the order ties are met); every
-// cell still drains to an edge (tests/unit/terrain/fill-reference.test.ts).
+// Slope cells skip the priority queue (after Zhou, Sun & Fu 2016, Computers & Geosciences 90:87,
+// and Wei, Zhou & Dong 2019, ISPRS Int. J. Geo-Inf. 8:164; the arrangement below is our own).
+// Invariant: a cell n reached from a finished cell p with z[n] above p's ε step keeps its own
+// elevation (the path back through p is lower), so its filled level is known at once, in any
+// order. Such cells go on a stack and are expanded straight away, closing and stacking their own
+// higher neighbours the same way. Only raising a neighbour needs the priority order: a stacked
+// cell that meets an unvisited neighbour at or below its ε step leaves it alone and goes into the
+// priority queue with its elevation, to raise it (if no one has by then) when its turn comes.
+// So each neighbourhood is read once, plus once more for the cells that wait in the queue.
+// The filled surface is the plain version's up to the ε steps on flats (which cell of a flat
+// gets which step depends on the order ties are met); every cell drains to an edge.
 //
-// Memory: the closed flags (1 B/cell, may be the caller's scratch grid), the heap, the pit FIFO
-// and the slope stack, all growing by doubling; their peak is reported in `stats`.
-import { CellMinHeap } from './min-heap';
+// The priority queue is a radix heap over the Float32 bits (radix-queue.ts): Priority-Flood's
+// keys never go below the last one popped, so no comparison tree is needed. Border cells are
+// marked 2 in the closed grid while the fill runs, so only they pay for bounds checks.
+//
+// Memory: the closed flags (1 B/cell, may be the caller's scratch grid; left all 1), the radix
+// heap's chunk pool, the pit FIFO and the slope stack, all growing by doubling; the sum of their
+// peaks is reported in `stats`.
+import { MonotoneCellQueue, orderedKey } from './radix-queue';
 
 export type FillOptions = {
   /** Write into the given array instead of a copy (saves 4 bytes per cell). */
@@ -41,7 +49,9 @@ function nextUp(v: number): number {
   return f32[0];
 }
 
-/** Returns the filled elevations (NaN stays NaN). O(n log n) worst case. */
+const BORDER = 2; // closed flag of a grid-border cell while the fill runs
+
+/** Returns the filled elevations (NaN stays NaN). O(n) queue work per cell plus the radix heap's. */
 export function fillDepressions(
   elevationM: Float32Array,
   width: number,
@@ -51,83 +61,78 @@ export function fillDepressions(
   const n = width * height;
   if (elevationM.length !== n) throw new Error(`elevationM has ${elevationM.length} cells, expected ${n}`);
   const z = options.inPlace ? elevationM : elevationM.slice();
+  const bits = new Int32Array(z.buffer, z.byteOffset, n);
   if (options.closedScratch && options.closedScratch.length !== n) throw new Error(`closedScratch has ${options.closedScratch.length} cells, expected ${n}`);
-  const closed = options.closedScratch ? options.closedScratch.fill(0) : new Uint8Array(n);
-  const open = new CellMinHeap(4 * (width + height));
+  const closed = options.closedScratch ?? new Uint8Array(n);
+  const open = new MonotoneCellQueue(4 * (width + height));
   let pit = new Int32Array(1024);
   let pitMask = pit.length - 1; // the FIFO's length is a power of two
   let pitHead = 0, pitCount = 0, pitPeakBytes = pit.byteLength;
-  let stack = new Int32Array(64);
+  let stack = new Int32Array(1024);
   let stackTop = 0, stackPeakBytes = stack.byteLength;
 
   // Nodata cells are closed; valid cells on the border or touching nodata are seeds.
   let nodataCells = 0;
-  for (let i = 0; i < n; i++) if (z[i] !== z[i]) { closed[i] = 1; nodataCells++; }
+  for (let i = 0; i < n; i++) {
+    const nodata = z[i] !== z[i];
+    closed[i] = nodata ? 1 : 0;
+    if (nodata) nodataCells++;
+  }
+  const lastRow = height - 1, lastCol = width - 1;
   for (let r = 0; r < height; r++) {
     // Without nodata only the border seeds: visit just those cells.
-    const inner = nodataCells === 0 && r > 0 && r < height - 1;
+    const inner = nodataCells === 0 && r > 0 && r < lastRow;
     // (c = 0 → width − 1 only when that moves on: a one-column grid would otherwise never end.)
-    for (let c = 0; c < width; c = inner && c === 0 && width > 1 ? width - 1 : c + 1) {
+    for (let c = 0; c < width; c = inner && c === 0 && width > 1 ? lastCol : c + 1) {
       const i = r * width + c;
       if (closed[i]) continue;
-      let seed = r === 0 || c === 0 || r === height - 1 || c === width - 1;
-      if (!seed) {
-        for (let dr = -1; dr <= 1 && !seed; dr++) {
-          for (let dc = -1; dc <= 1; dc++) {
-            const v = z[i + dr * width + dc];
-            if (v !== v) { seed = true; break; }
-          }
+      const border = r === 0 || c === 0 || r === lastRow || c === lastCol;
+      let seed = border;
+      for (let dr = -1; dr <= 1 && !seed; dr++) {
+        for (let dc = -1; dc <= 1; dc++) {
+          const v = z[i + dr * width + dc];
+          if (v !== v) { seed = true; break; }
         }
       }
       if (seed) {
-        closed[i] = 1;
-        open.push(i, z[i]);
+        closed[i] = border ? BORDER : 1;
+        open.push(i, orderedKey(bits[i]));
       }
     }
   }
 
-  const offsets = Int32Array.of(-width - 1, -width, -width + 1, -1, 1, width - 1, width, width + 1);
+  const o0 = -width - 1, o1 = -width, o2 = -width + 1, o3 = -1, o4 = 1, o5 = width - 1, o6 = width, o7 = width + 1;
+  const offsets = Int32Array.of(o0, o1, o2, o3, o4, o5, o6, o7);
   const dRow = Int32Array.of(-1, -1, -1, 0, 0, 1, 1, 1);
   const dCol = Int32Array.of(-1, 0, 1, -1, 1, -1, 0, 1);
-  const lastRow = height - 1, lastCol = width - 1;
 
-  /** True when every unvisited neighbour of cell i lies above i's ε step (then i raises nothing). */
+  /** True when every unvisited neighbour of interior cell i lies above i's ε step (then i raises nothing). */
   const onSlope = (i: number, zi: number): boolean => {
     const floor = nextUp(zi);
-    const row = (i / width) | 0;
-    const col = i - row * width;
-    const interior = row > 0 && col > 0 && row < lastRow && col < lastCol;
-    for (let k = 0; k < 8; k++) {
-      if (!interior) {
-        const rr = row + dRow[k], cc = col + dCol[k];
-        if (rr < 0 || cc < 0 || rr > lastRow || cc > lastCol) continue;
-      }
-      const nb = i + offsets[k];
-      if (closed[nb] === 0 && z[nb] <= floor) return false;
-    }
-    return true;
+    return !((closed[i + o0] === 0 && z[i + o0] <= floor) || (closed[i + o1] === 0 && z[i + o1] <= floor) ||
+      (closed[i + o2] === 0 && z[i + o2] <= floor) || (closed[i + o3] === 0 && z[i + o3] <= floor) ||
+      (closed[i + o4] === 0 && z[i + o4] <= floor) || (closed[i + o5] === 0 && z[i + o5] <= floor) ||
+      (closed[i + o6] === 0 && z[i + o6] <= floor) || (closed[i + o7] === 0 && z[i + o7] <= floor));
   };
 
-  while (stackTop > 0 || pitCount > 0 || open.size > 0) {
-    let c: number, zc: number;
+  for (;;) {
+    let c: number;
+    let onBorder = false;
     if (stackTop > 0) {
       c = stack[--stackTop];
-      zc = z[c];
-    } else if (pitCount > 0) {
+    } else if (pitCount > 0 && !open.hasKeyAtMost(orderedKey(bits[pit[pitHead]]))) {
       c = pit[pitHead];
       pitHead = (pitHead + 1) & pitMask;
       pitCount--;
-      zc = z[c];
-    } else {
-      zc = open.topKey(); // the key is the cell's elevation: closed cells are never raised
+    } else if (open.size > 0) {
       c = open.pop();
-    }
+      onBorder = closed[c] === BORDER;
+    } else break;
+    const zc = z[c];
     const floor = nextUp(zc); // the ε of Alg. 3
-    const row = (c / width) | 0;
-    const col = c - row * width;
-    const interior = row > 0 && col > 0 && row < lastRow && col < lastCol;
+    const row = onBorder ? (c / width) | 0 : 0, col = c - row * width;
     for (let k = 0; k < 8; k++) {
-      if (!interior) {
+      if (onBorder) {
         const rr = row + dRow[k], cc = col + dCol[k];
         if (rr < 0 || cc < 0 || rr > lastRow || cc > lastCol) continue;
       }
@@ -135,8 +140,8 @@ export function fillDepressions(
       if (closed[nb] !== 0) continue;
       closed[nb] = 1;
       const zn = z[nb];
-      // Barnes et al. 2014 Alg. 3: if z[n] ≤ z[c] + ε then z[n] ← z[c] + ε, push to pit queue
       if (zn <= floor) {
+        // Barnes et al. 2014 Alg. 3: if z[n] ≤ z[c] + ε then z[n] ← z[c] + ε, push to pit queue
         z[nb] = floor;
         if (pitCount === pit.length) {
           const bigger = new Int32Array(pit.length * 2);
@@ -149,7 +154,6 @@ export function fillDepressions(
         pit[(pitHead + pitCount) & pitMask] = nb;
         pitCount++;
       } else if (onSlope(nb, zn)) {
-        // Zhou et al. 2016: a slope cell is final as it is; take it now, not through the heap.
         if (stackTop === stack.length) {
           const bigger = new Int32Array(stack.length * 2);
           stackPeakBytes = Math.max(stackPeakBytes, stack.byteLength + bigger.byteLength);
@@ -157,9 +161,12 @@ export function fillDepressions(
           stack = bigger;
         }
         stack[stackTop++] = nb;
-      } else open.push(nb, zn);
+      } else open.push(nb, orderedKey(bits[nb]));
     }
   }
+  // Border cells back to plain closed: the caller may rely on an all-1 scratch grid.
+  for (let c = 0; c < width; c++) { closed[c] = 1; closed[lastRow * width + c] = 1; }
+  for (let r = 0; r < height; r++) { closed[r * width] = 1; closed[r * width + lastCol] = 1; }
   // Sum of each queue's own peak, so never below the three together at any moment.
   if (options.stats) options.stats.queueBytes = open.peakBytes + pitPeakBytes + stackPeakBytes;
   return z;

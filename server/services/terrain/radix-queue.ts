@@ -1,0 +1,190 @@
+// A monotone priority queue of grid cells keyed by Float32 elevation, for Priority-Flood, which
+// pops keys in non-decreasing order and never pushes a key below the last one popped. It is a
+// radix heap (Ahuja, Mehlhorn, Orlin & Tarjan 1990, "Faster algorithms for the shortest path
+// problem", Journal of the ACM 37:213) with base 256 instead of 2, laid out as multi-level
+// buckets (Denardo & Fox 1979, "Shortest-route methods: 1. Reaching, pruning, and buckets",
+// Operations Research 27:161).
+//
+// Keys are the Float32 bit patterns mapped to unsigned integers in the same order (positive
+// values: sign bit set; negative values: all bits inverted), so -0 sorts just below +0. `floor`
+// is a lower bound of every key held. A key sits at the level of the highest byte in which it
+// differs from `floor` (level 0: only the low byte differs), in the bucket of that byte's value.
+// When level 0 is empty, the first non-empty bucket of the lowest non-empty level is opened:
+// `floor` takes its byte (lower bytes 0) and its entries are dealt into lower levels. Each entry
+// moves at most three times, and at most a few bitmap words are scanned per pop; no comparisons
+// between keys. Equal keys leave last in, first out.
+//
+// Memory: buckets are stacks of 64-entry chunks (cell and key, 8 bytes per entry) from one pool,
+// so an emptied bucket gives its room back; the pool grows by doubling. `peakBytes` counts the
+// pool at its largest, old and new arrays together while doubling.
+
+const SHIFT = 6;
+const CHUNK = 1 << SHIFT; // entries per chunk
+const BUCKETS = 4 * 256; // four byte levels
+
+/** The monotone unsigned key of Float32 bits `bits` (read as an Int32). */
+export function orderedKey(bits: number): number {
+  return (bits >= 0 ? bits ^ 0x80000000 : ~bits) >>> 0;
+}
+
+export class MonotoneCellQueue {
+  size = 0;
+  /** Most bytes the pool has held at once (old and new arrays while doubling). */
+  peakBytes = 0;
+  private cells: Int32Array;
+  private keys: Uint32Array;
+  private below: Int32Array; // per chunk: the next chunk down its bucket's stack (or the free list), or −1
+  private freeChunk = -1;
+  private usedChunks = 0; // chunks ever handed out (the rest of the pool is fresh)
+  private readonly top = new Int32Array(BUCKETS).fill(-1); // per bucket: its top chunk, or −1
+  private readonly fill = new Int32Array(BUCKETS); // per bucket: entries in its top chunk
+  private readonly nonEmpty = new Int32Array(BUCKETS / 32); // one bit per bucket
+  private floor = 0; // a lower bound of every key held (the last key popped, or below it)
+
+  constructor(initialEntries = 4096) {
+    const chunks = Math.max(64, Math.ceil(initialEntries / CHUNK));
+    this.cells = new Int32Array(chunks * CHUNK);
+    this.keys = new Uint32Array(chunks * CHUNK);
+    this.below = new Int32Array(chunks);
+    this.peakBytes = this.poolBytes();
+  }
+
+  /** Adds a cell with key `orderedKey(bits)`; throws when the key is below the last one popped. */
+  push(cell: number, key: number): void {
+    if (key < this.floor) throw new Error(`key ${key} below the last key popped (${this.floor}): the queue is monotone`);
+    this.add(this.bucketOf(key), cell, key);
+    this.size++;
+  }
+
+  /**
+   * True when a key ≤ `limit` is held (then pop() returns one). Only buckets that may hold such
+   * keys are opened, so keys ≥ `limit` may still be pushed afterwards.
+   */
+  hasKeyAtMost(limit: number): boolean {
+    if (this.size === 0) return false;
+    for (;;) {
+      const b0 = this.firstInLevel(0);
+      if (b0 >= 0) return ((this.floor & ~0xff) | b0) >>> 0 <= limit;
+      const b = this.lowestBucket();
+      if (this.lowerBound(b) > limit) return false;
+      this.open(b);
+    }
+  }
+
+  /** Removes an entry with the smallest key and returns its cell. Throws when empty. */
+  pop(): number {
+    if (this.size === 0) throw new Error('pop() on an empty queue');
+    let b = this.firstInLevel(0);
+    while (b < 0) {
+      this.open(this.lowestBucket());
+      b = this.firstInLevel(0);
+    }
+    this.floor = ((this.floor & ~0xff) | b) >>> 0;
+    this.size--;
+    const chunk = this.top[b];
+    const slot = --this.fill[b];
+    const cell = this.cells[(chunk << SHIFT) + slot];
+    if (slot === 0) {
+      this.top[b] = this.below[chunk];
+      this.below[chunk] = this.freeChunk;
+      this.freeChunk = chunk;
+      if (this.top[b] < 0) this.nonEmpty[b >> 5] &= ~(1 << (b & 31));
+      else this.fill[b] = CHUNK;
+    }
+    return cell;
+  }
+
+  /** The bucket of `key` (≥ floor): its level × 256 + the value of its byte at that level. */
+  private bucketOf(key: number): number {
+    const diff = key ^ this.floor;
+    const level = diff === 0 ? 0 : (31 - Math.clz32(diff)) >> 3;
+    return (level << 8) | ((key >>> (level << 3)) & 0xff);
+  }
+
+  private add(b: number, cell: number, key: number): void {
+    let chunk = this.top[b];
+    let slot = this.fill[b];
+    if (chunk < 0 || slot === CHUNK) {
+      const fresh = this.takeChunk();
+      this.below[fresh] = chunk;
+      if (chunk < 0) this.nonEmpty[b >> 5] |= 1 << (b & 31);
+      this.top[b] = chunk = fresh;
+      slot = 0;
+    }
+    const at = (chunk << SHIFT) + slot;
+    this.cells[at] = cell;
+    this.keys[at] = key;
+    this.fill[b] = slot + 1;
+  }
+
+  /** The first non-empty bucket of a level, or −1. */
+  private firstInLevel(level: number): number {
+    for (let w = level << 3, end = w + 8; w < end; w++) {
+      const bitsSet = this.nonEmpty[w];
+      if (bitsSet !== 0) return (w << 5) | (31 - Math.clz32(bitsSet & -bitsSet));
+    }
+    return -1;
+  }
+
+  /** The first bucket of the lowest non-empty level above 0 (call only when level 0 is empty and size > 0). */
+  private lowestBucket(): number {
+    let b = -1;
+    for (let level = 1; b < 0; level++) b = this.firstInLevel(level);
+    return b;
+  }
+
+  /** The smallest key bucket b (above level 0) can hold: floor's higher bytes, b's byte, zeroes below. */
+  private lowerBound(b: number): number {
+    const shift = (b >> 8) << 3;
+    const high = shift + 8 === 32 ? 0 : (this.floor >>> (shift + 8)) << (shift + 8);
+    return (high | ((b & 0xff) << shift)) >>> 0;
+  }
+
+  /** Makes bucket b's lower bound the floor and deals its entries into lower levels. */
+  private open(b: number): void {
+    this.floor = this.lowerBound(b);
+    let chunk = this.top[b], n = this.fill[b];
+    this.top[b] = -1;
+    this.fill[b] = 0;
+    this.nonEmpty[b >> 5] &= ~(1 << (b & 31));
+    while (chunk >= 0) {
+      for (let at = chunk << SHIFT, end = at + n; at < end; at++) {
+        const key = this.keys[at];
+        this.add(this.bucketOf(key), this.cells[at], key);
+      }
+      const next = this.below[chunk];
+      this.below[chunk] = this.freeChunk;
+      this.freeChunk = chunk;
+      chunk = next;
+      n = CHUNK;
+    }
+  }
+
+  private takeChunk(): number {
+    if (this.freeChunk >= 0) {
+      const chunk = this.freeChunk;
+      this.freeChunk = this.below[chunk];
+      return chunk;
+    }
+    if (this.usedChunks === this.below.length) this.grow();
+    return this.usedChunks++;
+  }
+
+  private grow(): void {
+    const chunks = this.below.length * 2;
+    const cells = new Int32Array(chunks * CHUNK);
+    cells.set(this.cells);
+    const keys = new Uint32Array(chunks * CHUNK);
+    keys.set(this.keys);
+    const below = new Int32Array(chunks);
+    below.set(this.below);
+    this.peakBytes = Math.max(this.peakBytes, this.poolBytes() + cells.byteLength + keys.byteLength + below.byteLength);
+    this.cells = cells;
+    this.keys = keys;
+    this.below = below;
+  }
+
+  private poolBytes(): number {
+    return this.cells.byteLength + this.keys.byteLength + this.below.byteLength;
+  }
+}
