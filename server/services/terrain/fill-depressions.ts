@@ -49,8 +49,6 @@ function nextUp(v: number): number {
   return f32[0];
 }
 
-const BORDER = 2; // closed flag of a grid-border cell while the fill runs
-
 /** Returns the filled elevations (NaN stays NaN). O(n) queue work per cell plus the radix heap's. */
 export function fillDepressions(
   elevationM: Float32Array,
@@ -63,7 +61,12 @@ export function fillDepressions(
   const z = options.inPlace ? elevationM : elevationM.slice();
   const bits = new Int32Array(z.buffer, z.byteOffset, n);
   if (options.closedScratch && options.closedScratch.length !== n) throw new Error(`closedScratch has ${options.closedScratch.length} cells, expected ${n}`);
-  const closed = options.closedScratch ?? new Uint8Array(n);
+  // The closed flags, one bit per cell (a 1 MB grid of 8 M cells stays in cache): in the
+  // caller's scratch grid when it is there and big enough, else in a grid of their own.
+  const words = (n + 31) >>> 5;
+  const scratch = options.closedScratch;
+  const own = !scratch || scratch.byteOffset % 4 !== 0 || scratch.byteLength < 4 * words;
+  const closed = own ? new Int32Array(words) : new Int32Array(scratch.buffer, scratch.byteOffset, words).fill(0);
   const open = new MonotoneCellQueue(4 * (width + height));
   let pit = new Int32Array(1024);
   let pitMask = pit.length - 1; // the FIFO's length is a power of two
@@ -71,12 +74,14 @@ export function fillDepressions(
   let stack = new Int32Array(1024);
   let stackTop = 0, stackPeakBytes = stack.byteLength;
 
-  // Nodata cells are closed; valid cells on the border or touching nodata are seeds.
+  // Nodata cells are closed; valid cells on the border or touching nodata are seeds. Border
+  // cells go into the queue as ~cell, so only they pay for bounds checks.
   let nodataCells = 0;
   for (let i = 0; i < n; i++) {
-    const nodata = z[i] !== z[i];
-    closed[i] = nodata ? 1 : 0;
-    if (nodata) nodataCells++;
+    if (z[i] !== z[i]) {
+      closed[i >> 5] |= 1 << i;
+      nodataCells++;
+    }
   }
   const lastRow = height - 1, lastCol = width - 1;
   for (let r = 0; r < height; r++) {
@@ -85,7 +90,7 @@ export function fillDepressions(
     // (c = 0 → width − 1 only when that moves on: a one-column grid would otherwise never end.)
     for (let c = 0; c < width; c = inner && c === 0 && width > 1 ? lastCol : c + 1) {
       const i = r * width + c;
-      if (closed[i]) continue;
+      if (closed[i >> 5] & (1 << i)) continue;
       const border = r === 0 || c === 0 || r === lastRow || c === lastCol;
       let seed = border;
       for (let dr = -1; dr <= 1 && !seed; dr++) {
@@ -95,8 +100,8 @@ export function fillDepressions(
         }
       }
       if (seed) {
-        closed[i] = border ? BORDER : 1;
-        open.push(i, orderedKey(bits[i]));
+        closed[i >> 5] |= 1 << i;
+        open.push(border ? ~i : i, orderedKey(bits[i]));
       }
     }
   }
@@ -105,15 +110,8 @@ export function fillDepressions(
   const offsets = Int32Array.of(o0, o1, o2, o3, o4, o5, o6, o7);
   const dRow = Int32Array.of(-1, -1, -1, 0, 0, 1, 1, 1);
   const dCol = Int32Array.of(-1, 0, 1, -1, 1, -1, 0, 1);
-
-  /** True when every unvisited neighbour of interior cell i lies above i's ε step (then i raises nothing). */
-  const onSlope = (i: number, zi: number): boolean => {
-    const floor = nextUp(zi);
-    return !((closed[i + o0] === 0 && z[i + o0] <= floor) || (closed[i + o1] === 0 && z[i + o1] <= floor) ||
-      (closed[i + o2] === 0 && z[i + o2] <= floor) || (closed[i + o3] === 0 && z[i + o3] <= floor) ||
-      (closed[i + o4] === 0 && z[i + o4] <= floor) || (closed[i + o5] === 0 && z[i + o5] <= floor) ||
-      (closed[i + o6] === 0 && z[i + o6] <= floor) || (closed[i + o7] === 0 && z[i + o7] <= floor));
-  };
+  /** True when cell j is unvisited and at or below `floor`. */
+  const low = (j: number, floor: number): boolean => (closed[j >> 5] & (1 << j)) === 0 && z[j] <= floor;
 
   for (;;) {
     let c: number;
@@ -126,7 +124,10 @@ export function fillDepressions(
       pitCount--;
     } else if (open.size > 0) {
       c = open.pop();
-      onBorder = closed[c] === BORDER;
+      if (c < 0) {
+        c = ~c;
+        onBorder = true;
+      }
     } else break;
     const zc = z[c];
     const floor = nextUp(zc); // the ε of Alg. 3
@@ -137,8 +138,9 @@ export function fillDepressions(
         if (rr < 0 || cc < 0 || rr > lastRow || cc > lastCol) continue;
       }
       const nb = c + offsets[k];
-      if (closed[nb] !== 0) continue;
-      closed[nb] = 1;
+      const word = nb >> 5, bit = 1 << nb;
+      if (closed[word] & bit) continue;
+      closed[word] |= bit;
       const zn = z[nb];
       if (zn <= floor) {
         // Barnes et al. 2014 Alg. 3: if z[n] ≤ z[c] + ε then z[n] ← z[c] + ε, push to pit queue
@@ -153,21 +155,28 @@ export function fillDepressions(
         }
         pit[(pitHead + pitCount) & pitMask] = nb;
         pitCount++;
-      } else if (onSlope(nb, zn)) {
-        if (stackTop === stack.length) {
-          const bigger = new Int32Array(stack.length * 2);
-          stackPeakBytes = Math.max(stackPeakBytes, stack.byteLength + bigger.byteLength);
-          bigger.set(stack);
-          stack = bigger;
-        }
-        stack[stackTop++] = nb;
-      } else open.push(nb, orderedKey(bits[nb]));
+        continue;
+      }
+      // Zhou et al. 2016: a cell above the ε step none of whose unvisited neighbours lie at or
+      // below its own ε step raises nothing; it is final as it is, so take it now, off the heap.
+      const up = nextUp(zn);
+      if (low(nb + o0, up) || low(nb + o1, up) || low(nb + o2, up) || low(nb + o3, up) ||
+        low(nb + o4, up) || low(nb + o5, up) || low(nb + o6, up) || low(nb + o7, up)) {
+        open.push(nb, orderedKey(bits[nb]));
+        continue;
+      }
+      if (stackTop === stack.length) {
+        const bigger = new Int32Array(stack.length * 2);
+        stackPeakBytes = Math.max(stackPeakBytes, stack.byteLength + bigger.byteLength);
+        bigger.set(stack);
+        stack = bigger;
+      }
+      stack[stackTop++] = nb;
     }
   }
-  // Border cells back to plain closed: the caller may rely on an all-1 scratch grid.
-  for (let c = 0; c < width; c++) { closed[c] = 1; closed[lastRow * width + c] = 1; }
-  for (let r = 0; r < height; r++) { closed[r * width] = 1; closed[r * width + lastCol] = 1; }
+  // The caller may use the scratch grid afterwards: leave it all 1, as if flagged per byte.
+  scratch?.fill(1);
   // Sum of each queue's own peak, so never below the three together at any moment.
-  if (options.stats) options.stats.queueBytes = open.peakBytes + pitPeakBytes + stackPeakBytes;
+  if (options.stats) options.stats.queueBytes = open.peakBytes + pitPeakBytes + stackPeakBytes + (own ? closed.byteLength : 0);
   return z;
 }
