@@ -106,12 +106,9 @@ export function fillDepressions(
     }
   }
 
-  const o0 = -width - 1, o1 = -width, o2 = -width + 1, o3 = -1, o4 = 1, o5 = width - 1, o6 = width, o7 = width + 1;
-  const offsets = Int32Array.of(o0, o1, o2, o3, o4, o5, o6, o7);
+  const offsets = Int32Array.of(-width - 1, -width, -width + 1, -1, 1, width - 1, width, width + 1);
   const dRow = Int32Array.of(-1, -1, -1, 0, 0, 1, 1, 1);
   const dCol = Int32Array.of(-1, 0, 1, -1, 1, -1, 0, 1);
-  /** True when cell j is unvisited and at or below `floor`. */
-  const low = (j: number, floor: number): boolean => (closed[j >> 5] & (1 << j)) === 0 && z[j] <= floor;
 
   for (;;) {
     let c: number;
@@ -127,6 +124,14 @@ export function fillDepressions(
       if (c < 0) {
         c = ~c;
         onBorder = true;
+      } else {
+        // Most waiting cells find their neighbours all taken by then: skip them without reading z.
+        let k = 0;
+        for (; k < 8; k++) {
+          const j = c + offsets[k];
+          if ((closed[j >> 5] & (1 << j)) === 0) break;
+        }
+        if (k === 8) continue;
       }
     } else break;
     const zc = z[c];
@@ -160,8 +165,12 @@ export function fillDepressions(
       // Zhou et al. 2016: a cell above the ε step none of whose unvisited neighbours lie at or
       // below its own ε step raises nothing; it is final as it is, so take it now, off the heap.
       const up = nextUp(zn);
-      if (low(nb + o0, up) || low(nb + o1, up) || low(nb + o2, up) || low(nb + o3, up) ||
-        low(nb + o4, up) || low(nb + o5, up) || low(nb + o6, up) || low(nb + o7, up)) {
+      let m = 0;
+      for (; m < 8; m++) {
+        const j = nb + offsets[m];
+        if ((closed[j >> 5] & (1 << j)) === 0 && z[j] <= up) break;
+      }
+      if (m < 8) {
         open.push(nb, orderedKey(bits[nb]));
         continue;
       }
