@@ -39,9 +39,16 @@ export type FillOptions = {
 // One Float32 and its bits, for the ε step (IEEE 754 nextafter toward +∞).
 const f32 = new Float32Array(1);
 const i32 = new Int32Array(f32.buffer);
+const MIN_NORMAL = 2 ** -126;
+const STEP = 2 ** -24 + 2 ** -47;
 
-/** The next Float32 above v (v a Float32, not NaN). */
+/**
+ * The next Float32 above v (v a Float32, not NaN). For normal v, v + |v|·(2⁻²⁴ + 2⁻⁴⁷) is exact in
+ * double precision and lies just over half a Float32 step from v, so rounding it to Float32 gives
+ * the next value up (checked against the bit increment on 2·10⁷ bit patterns and every binade's edges).
+ */
 function nextUp(v: number): number {
+  if (v >= MIN_NORMAL || v <= -MIN_NORMAL) return Math.fround(v + Math.abs(v) * STEP);
   if (v === 0) return 1.401298464324817e-45; // smallest positive subnormal
   f32[0] = v;
   if (v > 0) i32[0]++;
