@@ -116,6 +116,7 @@ export function fillDepressions(
   const offsets = Int32Array.of(-width - 1, -width, -width + 1, -1, 1, width - 1, width, width + 1);
   const dRow = Int32Array.of(-1, -1, -1, 0, 0, 1, 1, 1);
   const dCol = Int32Array.of(-1, 0, 1, -1, 1, -1, 0, 1);
+  const taken = new Int32Array(8); // the current cell's higher neighbours, closed, awaiting the slope test
 
   for (;;) {
     let c: number;
@@ -144,6 +145,9 @@ export function fillDepressions(
     const zc = z[c];
     const floor = nextUp(zc); // the ε of Alg. 3
     const row = onBorder ? (c / width) | 0 : 0, col = c - row * width;
+    // First take every unvisited neighbour (raising the low ones), then test the higher ones:
+    // a neighbour of c is closed by then, so it no longer keeps a higher one off the stack.
+    let higher = 0;
     for (let k = 0; k < 8; k++) {
       if (onBorder) {
         const rr = row + dRow[k], cc = col + dCol[k];
@@ -153,25 +157,28 @@ export function fillDepressions(
       const word = nb >> 5, bit = 1 << nb;
       if (closed[word] & bit) continue;
       closed[word] |= bit;
-      const zn = z[nb];
-      if (zn <= floor) {
-        // Barnes et al. 2014 Alg. 3: if z[n] ≤ z[c] + ε then z[n] ← z[c] + ε, push to pit queue
-        z[nb] = floor;
-        if (pitCount === pit.length) {
-          const bigger = new Int32Array(pit.length * 2);
-          pitPeakBytes = Math.max(pitPeakBytes, pit.byteLength + bigger.byteLength);
-          for (let j = 0; j < pitCount; j++) bigger[j] = pit[(pitHead + j) & pitMask];
-          pit = bigger;
-          pitMask = pit.length - 1;
-          pitHead = 0;
-        }
-        pit[(pitHead + pitCount) & pitMask] = nb;
-        pitCount++;
+      if (z[nb] > floor) {
+        taken[higher++] = nb;
         continue;
       }
+      // Barnes et al. 2014 Alg. 3: if z[n] ≤ z[c] + ε then z[n] ← z[c] + ε, push to pit queue
+      z[nb] = floor;
+      if (pitCount === pit.length) {
+        const bigger = new Int32Array(pit.length * 2);
+        pitPeakBytes = Math.max(pitPeakBytes, pit.byteLength + bigger.byteLength);
+        for (let j = 0; j < pitCount; j++) bigger[j] = pit[(pitHead + j) & pitMask];
+        pit = bigger;
+        pitMask = pit.length - 1;
+        pitHead = 0;
+      }
+      pit[(pitHead + pitCount) & pitMask] = nb;
+      pitCount++;
+    }
+    for (let h = 0; h < higher; h++) {
+      const nb = taken[h];
       // Zhou et al. 2016: a cell above the ε step none of whose unvisited neighbours lie at or
       // below its own ε step raises nothing; it is final as it is, so take it now, off the heap.
-      const up = nextUp(zn);
+      const up = nextUp(z[nb]);
       let m = 0;
       for (; m < 8; m++) {
         const j = nb + offsets[m];
