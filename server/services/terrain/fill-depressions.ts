@@ -122,8 +122,36 @@ export function fillDepressions(
     let c: number;
     let onBorder = false;
     if (stackTop > 0) {
+      // A slope cell (final at its own elevation). Zhou et al. 2016: if none of its unvisited
+      // neighbours lies at or below its ε step, it raises nothing: take them all now, off the
+      // heap, as slope cells too. Otherwise it waits in the heap for its turn.
       c = stack[--stackTop];
-    } else if (pitCount > 0 && !open.hasKeyAtMost(orderedKey(bits[pit[pitHead]]))) {
+      const floor = nextUp(z[c]);
+      let found = 0, k = 0;
+      for (; k < 8; k++) {
+        const nb = c + offsets[k];
+        if (closed[nb >> 5] & (1 << nb)) continue;
+        if (z[nb] <= floor) break;
+        taken[found++] = nb;
+      }
+      if (k < 8) {
+        open.push(c, orderedKey(bits[c]));
+        continue;
+      }
+      if (stackTop + found > stack.length) {
+        const bigger = new Int32Array(stack.length * 2);
+        stackPeakBytes = Math.max(stackPeakBytes, stack.byteLength + bigger.byteLength);
+        bigger.set(stack);
+        stack = bigger;
+      }
+      for (let h = 0; h < found; h++) {
+        const nb = taken[h];
+        closed[nb >> 5] |= 1 << nb;
+        stack[stackTop++] = nb;
+      }
+      continue;
+    }
+    if (pitCount > 0 && !open.hasKeyAtMost(orderedKey(bits[pit[pitHead]]))) {
       c = pit[pitHead];
       pitHead = (pitHead + 1) & pitMask;
       pitCount--;
@@ -142,12 +170,17 @@ export function fillDepressions(
         if (k === 8) continue;
       }
     } else break;
-    const zc = z[c];
-    const floor = nextUp(zc); // the ε of Alg. 3
+    // In priority order (Barnes et al. 2014 Alg. 3): each unvisited neighbour at or below
+    // z[c] + ε is raised to z[c] + ε and goes to the pit queue; a higher one is final as it is
+    // and goes on the slope stack.
+    const floor = nextUp(z[c]);
     const row = onBorder ? (c / width) | 0 : 0, col = c - row * width;
-    // First take every unvisited neighbour (raising the low ones), then test the higher ones:
-    // a neighbour of c is closed by then, so it no longer keeps a higher one off the stack.
-    let higher = 0;
+    if (stackTop + 8 > stack.length) {
+      const bigger = new Int32Array(stack.length * 2);
+      stackPeakBytes = Math.max(stackPeakBytes, stack.byteLength + bigger.byteLength);
+      bigger.set(stack);
+      stack = bigger;
+    }
     for (let k = 0; k < 8; k++) {
       if (onBorder) {
         const rr = row + dRow[k], cc = col + dCol[k];
@@ -158,10 +191,9 @@ export function fillDepressions(
       if (closed[word] & bit) continue;
       closed[word] |= bit;
       if (z[nb] > floor) {
-        taken[higher++] = nb;
+        stack[stackTop++] = nb;
         continue;
       }
-      // Barnes et al. 2014 Alg. 3: if z[n] ≤ z[c] + ε then z[n] ← z[c] + ε, push to pit queue
       z[nb] = floor;
       if (pitCount === pit.length) {
         const bigger = new Int32Array(pit.length * 2);
@@ -173,28 +205,6 @@ export function fillDepressions(
       }
       pit[(pitHead + pitCount) & pitMask] = nb;
       pitCount++;
-    }
-    for (let h = 0; h < higher; h++) {
-      const nb = taken[h];
-      // Zhou et al. 2016: a cell above the ε step none of whose unvisited neighbours lie at or
-      // below its own ε step raises nothing; it is final as it is, so take it now, off the heap.
-      const up = nextUp(z[nb]);
-      let m = 0;
-      for (; m < 8; m++) {
-        const j = nb + offsets[m];
-        if ((closed[j >> 5] & (1 << j)) === 0 && z[j] <= up) break;
-      }
-      if (m < 8) {
-        open.push(nb, orderedKey(bits[nb]));
-        continue;
-      }
-      if (stackTop === stack.length) {
-        const bigger = new Int32Array(stack.length * 2);
-        stackPeakBytes = Math.max(stackPeakBytes, stack.byteLength + bigger.byteLength);
-        bigger.set(stack);
-        stack = bigger;
-      }
-      stack[stackTop++] = nb;
     }
   }
   // The caller may use the scratch grid afterwards: leave it all 1, as if flagged per byte.
