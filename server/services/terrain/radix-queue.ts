@@ -27,6 +27,11 @@ export function orderedKey(bits: number): number {
   return (bits >= 0 ? bits ^ 0x80000000 : ~bits) >>> 0;
 }
 
+/** Index of the lowest set bit of x (x ≠ 0). */
+function lowestBit(x: number): number {
+  return 31 - Math.clz32(x & -x);
+}
+
 export class MonotoneCellQueue {
   size = 0;
   /** Most bytes the pool has held at once (old and new arrays while doubling). */
@@ -39,6 +44,7 @@ export class MonotoneCellQueue {
   private readonly top = new Int32Array(BUCKETS).fill(-1); // per bucket: its top chunk, or −1
   private readonly fill = new Int32Array(BUCKETS); // per bucket: entries in its top chunk
   private readonly nonEmpty = new Int32Array(BUCKETS / 32); // one bit per bucket
+  private nonEmptyWords = 0; // one bit per word of nonEmpty that is not 0
   private floor = 0; // a lower bound of every key held (the last key popped, or below it)
 
   constructor(initialEntries = 4096) {
@@ -88,7 +94,7 @@ export class MonotoneCellQueue {
       this.top[b] = this.below[chunk];
       this.below[chunk] = this.freeChunk;
       this.freeChunk = chunk;
-      if (this.top[b] < 0) this.nonEmpty[b >> 5] &= ~(1 << (b & 31));
+      if (this.top[b] < 0) this.markEmpty(b);
       else this.fill[b] = CHUNK;
     }
     return cell;
@@ -107,7 +113,10 @@ export class MonotoneCellQueue {
     if (chunk < 0 || slot === CHUNK) {
       const fresh = this.takeChunk();
       this.below[fresh] = chunk;
-      if (chunk < 0) this.nonEmpty[b >> 5] |= 1 << (b & 31);
+      if (chunk < 0) {
+        this.nonEmpty[b >> 5] |= 1 << (b & 31);
+        this.nonEmptyWords |= 1 << (b >> 5);
+      }
       this.top[b] = chunk = fresh;
       slot = 0;
     }
@@ -119,18 +128,21 @@ export class MonotoneCellQueue {
 
   /** The first non-empty bucket of a level, or −1. */
   private firstInLevel(level: number): number {
-    for (let w = level << 3, end = w + 8; w < end; w++) {
-      const bitsSet = this.nonEmpty[w];
-      if (bitsSet !== 0) return (w << 5) | (31 - Math.clz32(bitsSet & -bitsSet));
-    }
-    return -1;
+    const words = this.nonEmptyWords & (0xff << (level << 3));
+    if (words === 0) return -1;
+    const w = lowestBit(words);
+    return (w << 5) | lowestBit(this.nonEmpty[w]);
   }
 
   /** The first bucket of the lowest non-empty level above 0 (call only when level 0 is empty and size > 0). */
   private lowestBucket(): number {
-    let b = -1;
-    for (let level = 1; b < 0; level++) b = this.firstInLevel(level);
-    return b;
+    const w = lowestBit(this.nonEmptyWords & ~0xff);
+    return (w << 5) | lowestBit(this.nonEmpty[w]);
+  }
+
+  private markEmpty(b: number): void {
+    const w = b >> 5;
+    if ((this.nonEmpty[w] &= ~(1 << (b & 31))) === 0) this.nonEmptyWords &= ~(1 << w);
   }
 
   /** The smallest key bucket b (above level 0) can hold: floor's higher bytes, b's byte, zeroes below. */
@@ -146,7 +158,7 @@ export class MonotoneCellQueue {
     let chunk = this.top[b], n = this.fill[b];
     this.top[b] = -1;
     this.fill[b] = 0;
-    this.nonEmpty[b >> 5] &= ~(1 << (b & 31));
+    this.markEmpty(b);
     while (chunk >= 0) {
       for (let at = chunk << SHIFT, end = at + n; at < end; at++) {
         const key = this.keys[at];
