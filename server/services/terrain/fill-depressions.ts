@@ -74,7 +74,7 @@ export function fillDepressions(
   const scratch = options.closedScratch;
   const own = !scratch || scratch.byteOffset % 4 !== 0 || scratch.byteLength < 4 * words;
   const closed = own ? new Int32Array(words) : new Int32Array(scratch.buffer, scratch.byteOffset, words).fill(0);
-  const open = new MonotoneCellQueue(4 * (width + height));
+  const open = new MonotoneCellQueue();
   let pit = new Int32Array(1024);
   let pitMask = pit.length - 1; // the FIFO's length is a power of two
   let pitHead = 0, pitCount = 0, pitPeakBytes = pit.byteLength;

@@ -18,8 +18,10 @@
 // so an emptied bucket gives its room back; the pool grows by doubling. `peakBytes` counts the
 // pool at its largest, old and new arrays together while doubling.
 
-const SHIFT = 6;
+const SHIFT = 5;
 const CHUNK = 1 << SHIFT; // entries per chunk
+const SEG_SHIFT = 7;
+const SEG_CHUNKS = 1 << SEG_SHIFT; // chunks per segment (32 kB of entries)
 const BUCKETS = 4 * 256; // four byte levels
 
 /** The monotone unsigned key of Float32 bits `bits` (read as an Int32). */
@@ -34,10 +36,9 @@ function lowestBit(x: number): number {
 
 export class MonotoneCellQueue {
   size = 0;
-  /** Most bytes the pool has held at once (old and new arrays while doubling). */
+  /** Most bytes the pool has held at once (the chunk links counted old and new while doubling). */
   peakBytes = 0;
-  private cells: Int32Array;
-  private keys: Uint32Array;
+  private readonly segments: Int32Array[] = []; // per segment: cell, key, cell, key, … of its chunks
   private below: Int32Array; // per chunk: the next chunk down its bucket's stack (or the free list), or −1
   private freeChunk = -1;
   private usedChunks = 0; // chunks ever handed out (the rest of the pool is fresh)
@@ -47,12 +48,9 @@ export class MonotoneCellQueue {
   private nonEmptyWords = 0; // one bit per word of nonEmpty that is not 0
   private floor = 0; // a lower bound of every key held (the last key popped, or below it)
 
-  constructor(initialEntries = 4096) {
-    const chunks = Math.max(64, Math.ceil(initialEntries / CHUNK));
-    this.cells = new Int32Array(chunks * CHUNK);
-    this.keys = new Uint32Array(chunks * CHUNK);
-    this.below = new Int32Array(chunks);
-    this.peakBytes = this.poolBytes();
+  constructor() {
+    this.below = new Int32Array(SEG_CHUNKS);
+    this.peakBytes = this.below.byteLength;
   }
 
   /** Adds a cell with key `orderedKey(bits)`; throws when the key is below the last one popped. */
@@ -89,7 +87,7 @@ export class MonotoneCellQueue {
     this.size--;
     const chunk = this.top[b];
     const slot = --this.fill[b];
-    const cell = this.cells[(chunk << SHIFT) + slot];
+    const cell = this.segments[chunk >> SEG_SHIFT][(((chunk & (SEG_CHUNKS - 1)) << SHIFT) + slot) << 1];
     if (slot === 0) {
       this.top[b] = this.below[chunk];
       this.below[chunk] = this.freeChunk;
@@ -120,9 +118,10 @@ export class MonotoneCellQueue {
       this.top[b] = chunk = fresh;
       slot = 0;
     }
-    const at = (chunk << SHIFT) + slot;
-    this.cells[at] = cell;
-    this.keys[at] = key;
+    const segment = this.segments[chunk >> SEG_SHIFT];
+    const at = (((chunk & (SEG_CHUNKS - 1)) << SHIFT) + slot) << 1;
+    segment[at] = cell;
+    segment[at + 1] = key;
     this.fill[b] = slot + 1;
   }
 
@@ -160,9 +159,10 @@ export class MonotoneCellQueue {
     this.fill[b] = 0;
     this.markEmpty(b);
     while (chunk >= 0) {
-      for (let at = chunk << SHIFT, end = at + n; at < end; at++) {
-        const key = this.keys[at];
-        this.add(this.bucketOf(key), this.cells[at], key);
+      const segment = this.segments[chunk >> SEG_SHIFT];
+      for (let at = (chunk & (SEG_CHUNKS - 1)) << (SHIFT + 1), end = at + 2 * n; at < end; at += 2) {
+        const key = segment[at + 1] >>> 0;
+        this.add(this.bucketOf(key), segment[at], key);
       }
       const next = this.below[chunk];
       this.below[chunk] = this.freeChunk;
@@ -178,25 +178,16 @@ export class MonotoneCellQueue {
       this.freeChunk = this.below[chunk];
       return chunk;
     }
-    if (this.usedChunks === this.below.length) this.grow();
+    if (this.usedChunks === this.below.length) {
+      const below = new Int32Array(this.below.length * 2);
+      below.set(this.below);
+      this.peakBytes += below.byteLength; // old and new links together for a moment
+      this.below = below;
+    }
+    if (this.usedChunks === this.segments.length * SEG_CHUNKS) {
+      this.segments.push(new Int32Array(SEG_CHUNKS * CHUNK * 2));
+      this.peakBytes += SEG_CHUNKS * CHUNK * 8;
+    }
     return this.usedChunks++;
-  }
-
-  private grow(): void {
-    const chunks = this.below.length * 2;
-    const cells = new Int32Array(chunks * CHUNK);
-    cells.set(this.cells);
-    const keys = new Uint32Array(chunks * CHUNK);
-    keys.set(this.keys);
-    const below = new Int32Array(chunks);
-    below.set(this.below);
-    this.peakBytes = Math.max(this.peakBytes, this.poolBytes() + cells.byteLength + keys.byteLength + below.byteLength);
-    this.cells = cells;
-    this.keys = keys;
-    this.below = below;
-  }
-
-  private poolBytes(): number {
-    return this.cells.byteLength + this.keys.byteLength + this.below.byteLength;
   }
 }

@@ -387,7 +387,7 @@ describe('monotone cell queue (radix heap)', () => {
 
   it('pops keys in non-decreasing order, every pushed cell once, when pushes never go below the last pop', () => {
     const rnd = seededRandom(5);
-    const q = new MonotoneCellQueue(16);
+    const q = new MonotoneCellQueue();
     const keyOfCell = new Map<number, number>();
     let last = keyOf(-50), pushed = 0, popped = 0, outOfOrder = 0;
     for (let step = 0; step < 200_000; step++) {
