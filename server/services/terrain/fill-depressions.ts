@@ -1,38 +1,43 @@
 // Depression filling by Priority-Flood+ε (Barnes, Lehman & Mulla 2014, Computers & Geosciences
 // 62:117, Algorithm 3): seed a min-priority queue with the edge cells (grid border and cells next
-// to nodata), pop the lowest, and raise each unvisited neighbour to at least the next Float32
-// above the popped cell. Raised cells go through a plain FIFO (the "pit" queue). Every filled
-// cell ends strictly above the cell it was reached from, so flats and filled pits drain (toward
-// their spill point) with no separate flat-resolution pass. The ε is one Float32 step (~3e-5 m
-// at 300 m), far below DEM precision.
+// to nodata), take the lowest, and raise each unvisited neighbour to at least the next Float32
+// above it. Raised cells go through a plain FIFO (the "pit" queue). Every filled cell ends
+// strictly above the cell it was reached from, so flats and filled pits drain (toward their
+// spill point) with no separate flat-resolution pass. The ε is one Float32 step (~3e-5 m at
+// 300 m), far below DEM precision.
 //
-// Slope cells skip the priority queue (after Zhou, Sun & Fu 2016, Computers & Geosciences 90:87,
-// and Wei, Zhou & Dong 2019, ISPRS Int. J. Geo-Inf. 8:164; the arrangement below is our own).
-// Invariant: a cell n reached from a finished cell p with z[n] above p's ε step keeps its own
-// elevation (the path back through p is lower), so its filled level is known at once, in any
-// order. Such cells go on a stack and are expanded straight away, closing and stacking their own
-// higher neighbours the same way. Only raising a neighbour needs the priority order: a stacked
-// cell that meets an unvisited neighbour at or below its ε step leaves it alone and goes into the
-// priority queue with its elevation, to raise it (if no one has by then) when its turn comes.
-// So each neighbourhood is read once, plus once more for the cells that wait in the queue.
-// The filled surface is the plain version's up to the ε steps on flats (which cell of a flat
-// gets which step depends on the order ties are met); every cell drains to an edge.
+// Invariant: a cell's filled level is written when it is first reached and never changes, and
+// the cells that raise a neighbour are taken in non-decreasing order of level. The pit FIFO's
+// levels never decrease, so taking the lower front of the FIFO and the heap (the heap on ties)
+// keeps that order exactly; on ties a flat is entered from all its lower edge cells at once and
+// gets its ε steps breadth-first from the nearest of them.
 //
-// The priority queue is a radix heap over the Float32 bits (radix-queue.ts): Priority-Flood's
-// keys never go below the last one popped, so no comparison tree is needed. Border cells are
-// marked 2 in the closed grid while the fill runs, so only they pay for bounds checks.
+// Slope cells skip the heap (after Zhou, Sun & Fu 2016, Computers & Geosciences 90:87; Wei, Zhou
+// & Dong 2019, ISPRS Int. J. Geo-Inf. 8:164, recalled from memory, describe further variants;
+// the arrangement here is our own). A neighbour above the ε step of the cell that reached it
+// keeps its own elevation (the path back is lower), so it is final at once and goes on a stack.
+// When it leaves the stack it is tested and expanded in one pass over its neighbours: if none
+// of the unvisited ones lies at or below its own ε step it can raise nothing, so they are all
+// taken as slope cells too, in any order; otherwise it waits in the heap under its elevation
+// until raising is its turn. Most waiting cells find all their neighbours taken by then and are
+// dropped after a look at the closed bits, without reading elevations.
 //
-// Memory: the closed flags (1 B/cell, may be the caller's scratch grid; left all 1), the radix
-// heap's chunk pool, the pit FIFO and the slope stack, all growing by doubling; the sum of their
-// peaks is reported in `stats`.
+// Cost: every cell goes once through the stack or the pit FIFO, and at most once through the
+// heap, a radix heap over the Float32 bits (radix-queue.ts) whose entries move at most three
+// times: O(n) in all. The closed flags are one bit per cell (1 MB for 8 M cells stays in cache),
+// kept in the caller's scratch grid when given, which is left all 1. Border seeds go into the
+// heap as ~cell, so only they pay for bounds checks.
+//
+// Memory: the closed bits (n/8 bytes, none when the scratch grid holds them), the heap's
+// segments, the pit FIFO and the slope stack; the sum of their peaks is reported in `stats`.
 import { MonotoneCellQueue, orderedKey } from './radix-queue';
 
 export type FillOptions = {
   /** Write into the given array instead of a copy (saves 4 bytes per cell). */
   inPlace?: boolean;
-  /** A one-byte grid to use for the closed flags (overwritten; left all 1), instead of a new one. */
+  /** A one-byte grid to hold the closed flags (overwritten; left all 1), instead of a new grid. */
   closedScratch?: Uint8Array;
-  /** Filled in on return: an upper bound on the bytes the heap, the pit FIFO and the slope stack held at once. */
+  /** Filled in on return: an upper bound on the bytes the queues (and closed bits of its own) held at once. */
   stats?: { queueBytes: number };
 };
 
@@ -43,11 +48,11 @@ const MIN_NORMAL = 2 ** -126;
 const STEP = 2 ** -24 + 2 ** -47;
 
 /**
- * The next Float32 above v (v a Float32, not NaN). For normal v, v + |v|·(2⁻²⁴ + 2⁻⁴⁷) is exact in
- * double precision and lies just over half a Float32 step from v, so rounding it to Float32 gives
- * the next value up (checked against the bit increment on 2·10⁷ bit patterns and every binade's edges).
+ * The next Float32 above v (v a Float32, not NaN; IEEE 754 nextUp). For normal v, v + |v|·(2⁻²⁴ +
+ * 2⁻⁴⁷) is exact in double precision and lies just over half a Float32 step from v (toward +∞),
+ * so one rounding to Float32 gives the next value; zero and subnormals step the bits.
  */
-function nextUp(v: number): number {
+export function nextFloat32Up(v: number): number {
   if (v >= MIN_NORMAL || v <= -MIN_NORMAL) return Math.fround(v + Math.abs(v) * STEP);
   if (v === 0) return 1.401298464324817e-45; // smallest positive subnormal
   f32[0] = v;
@@ -56,7 +61,7 @@ function nextUp(v: number): number {
   return f32[0];
 }
 
-/** Returns the filled elevations (NaN stays NaN). O(n) queue work per cell plus the radix heap's. */
+/** Returns the filled elevations (NaN stays NaN). */
 export function fillDepressions(
   elevationM: Float32Array,
   width: number,
@@ -75,10 +80,10 @@ export function fillDepressions(
   const own = !scratch || scratch.byteOffset % 4 !== 0 || scratch.byteLength < 4 * words;
   const closed = own ? new Int32Array(words) : new Int32Array(scratch.buffer, scratch.byteOffset, words).fill(0);
   const open = new MonotoneCellQueue();
-  let pit = new Int32Array(1024);
+  let pit = new Int32Array(64);
   let pitMask = pit.length - 1; // the FIFO's length is a power of two
   let pitHead = 0, pitCount = 0, pitPeakBytes = pit.byteLength;
-  let stack = new Int32Array(1024);
+  let stack = new Int32Array(64);
   let stackTop = 0, stackPeakBytes = stack.byteLength;
 
   // Nodata cells are closed; valid cells on the border or touching nodata are seeds. Border
@@ -126,7 +131,7 @@ export function fillDepressions(
       // neighbours lies at or below its ε step, it raises nothing: take them all now, off the
       // heap, as slope cells too. Otherwise it waits in the heap for its turn.
       c = stack[--stackTop];
-      const floor = nextUp(z[c]);
+      const floor = nextFloat32Up(z[c]);
       let found = 0, k = 0;
       for (; k < 8; k++) {
         const nb = c + offsets[k];
@@ -173,7 +178,7 @@ export function fillDepressions(
     // In priority order (Barnes et al. 2014 Alg. 3): each unvisited neighbour at or below
     // z[c] + ε is raised to z[c] + ε and goes to the pit queue; a higher one is final as it is
     // and goes on the slope stack.
-    const floor = nextUp(z[c]);
+    const floor = nextFloat32Up(z[c]);
     const row = onBorder ? (c / width) | 0 : 0, col = c - row * width;
     if (stackTop + 8 > stack.length) {
       const bigger = new Int32Array(stack.length * 2);

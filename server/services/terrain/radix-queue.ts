@@ -11,17 +11,18 @@
 // differs from `floor` (level 0: only the low byte differs), in the bucket of that byte's value.
 // When level 0 is empty, the first non-empty bucket of the lowest non-empty level is opened:
 // `floor` takes its byte (lower bytes 0) and its entries are dealt into lower levels. Each entry
-// moves at most three times, and at most a few bitmap words are scanned per pop; no comparisons
-// between keys. Equal keys leave last in, first out.
+// moves at most three times; one bit per bucket and one per 32 buckets find the first non-empty
+// bucket without a scan; no two keys are ever compared. Equal keys leave last in, first out.
 //
-// Memory: buckets are stacks of 64-entry chunks (cell and key, 8 bytes per entry) from one pool,
-// so an emptied bucket gives its room back; the pool grows by doubling. `peakBytes` counts the
-// pool at its largest, old and new arrays together while doubling.
+// Memory: buckets are stacks of 8-entry chunks (a link, then cell and key: 8.5 bytes per entry)
+// from one pool, so an emptied bucket gives its room back to the others. The pool grows by
+// 4.25 kB segments that are never copied or freed; `peakBytes` counts them all, so it bounds the
+// queue's bytes from above.
 
-const SHIFT = 5;
-const CHUNK = 1 << SHIFT; // entries per chunk
-const SEG_SHIFT = 7;
-const SEG_CHUNKS = 1 << SEG_SHIFT; // chunks per segment (32 kB of entries)
+const CHUNK = 8; // entries per chunk
+const STRIDE = 1 + 2 * CHUNK; // a chunk: the link to the chunk below it, then cell, key, cell, key, …
+const SEG_SHIFT = 6;
+const SEG_CHUNKS = 1 << SEG_SHIFT; // chunks per segment (4.25 kB)
 const BUCKETS = 4 * 256; // four byte levels
 
 /** The monotone unsigned key of Float32 bits `bits` (read as an Int32). */
@@ -38,8 +39,7 @@ export class MonotoneCellQueue {
   size = 0;
   /** Most bytes the pool has held at once (the chunk links counted old and new while doubling). */
   peakBytes = 0;
-  private readonly segments: Int32Array[] = []; // per segment: cell, key, cell, key, … of its chunks
-  private below: Int32Array; // per chunk: the next chunk down its bucket's stack (or the free list), or −1
+  private readonly segments: Int32Array[] = []; // SEG_CHUNKS chunks each; a link is −1 at a stack's bottom
   private freeChunk = -1;
   private usedChunks = 0; // chunks ever handed out (the rest of the pool is fresh)
   private readonly top = new Int32Array(BUCKETS).fill(-1); // per bucket: its top chunk, or −1
@@ -48,10 +48,6 @@ export class MonotoneCellQueue {
   private nonEmptyWords = 0; // one bit per word of nonEmpty that is not 0
   private floor = 0; // a lower bound of every key held (the last key popped, or below it)
 
-  constructor() {
-    this.below = new Int32Array(SEG_CHUNKS);
-    this.peakBytes = this.below.byteLength;
-  }
 
   /** Adds a cell with key `orderedKey(bits)`; throws when the key is below the last one popped. */
   push(cell: number, key: number): void {
@@ -87,10 +83,12 @@ export class MonotoneCellQueue {
     this.size--;
     const chunk = this.top[b];
     const slot = --this.fill[b];
-    const cell = this.segments[chunk >> SEG_SHIFT][(((chunk & (SEG_CHUNKS - 1)) << SHIFT) + slot) << 1];
+    const segment = this.segments[chunk >> SEG_SHIFT];
+    const base = (chunk & (SEG_CHUNKS - 1)) * STRIDE;
+    const cell = segment[base + 1 + 2 * slot];
     if (slot === 0) {
-      this.top[b] = this.below[chunk];
-      this.below[chunk] = this.freeChunk;
+      this.top[b] = segment[base];
+      segment[base] = this.freeChunk;
       this.freeChunk = chunk;
       if (this.top[b] < 0) this.markEmpty(b);
       else this.fill[b] = CHUNK;
@@ -110,7 +108,7 @@ export class MonotoneCellQueue {
     let slot = this.fill[b];
     if (chunk < 0 || slot === CHUNK) {
       const fresh = this.takeChunk();
-      this.below[fresh] = chunk;
+      this.segments[fresh >> SEG_SHIFT][(fresh & (SEG_CHUNKS - 1)) * STRIDE] = chunk;
       if (chunk < 0) {
         this.nonEmpty[b >> 5] |= 1 << (b & 31);
         this.nonEmptyWords |= 1 << (b >> 5);
@@ -118,8 +116,8 @@ export class MonotoneCellQueue {
       this.top[b] = chunk = fresh;
       slot = 0;
     }
+    const at = (chunk & (SEG_CHUNKS - 1)) * STRIDE + 1 + 2 * slot;
     const segment = this.segments[chunk >> SEG_SHIFT];
-    const at = (((chunk & (SEG_CHUNKS - 1)) << SHIFT) + slot) << 1;
     segment[at] = cell;
     segment[at + 1] = key;
     this.fill[b] = slot + 1;
@@ -160,12 +158,13 @@ export class MonotoneCellQueue {
     this.markEmpty(b);
     while (chunk >= 0) {
       const segment = this.segments[chunk >> SEG_SHIFT];
-      for (let at = (chunk & (SEG_CHUNKS - 1)) << (SHIFT + 1), end = at + 2 * n; at < end; at += 2) {
+      const base = (chunk & (SEG_CHUNKS - 1)) * STRIDE;
+      for (let at = base + 1, end = at + 2 * n; at < end; at += 2) {
         const key = segment[at + 1] >>> 0;
         this.add(this.bucketOf(key), segment[at], key);
       }
-      const next = this.below[chunk];
-      this.below[chunk] = this.freeChunk;
+      const next = segment[base];
+      segment[base] = this.freeChunk;
       this.freeChunk = chunk;
       chunk = next;
       n = CHUNK;
@@ -175,18 +174,12 @@ export class MonotoneCellQueue {
   private takeChunk(): number {
     if (this.freeChunk >= 0) {
       const chunk = this.freeChunk;
-      this.freeChunk = this.below[chunk];
+      this.freeChunk = this.segments[chunk >> SEG_SHIFT][(chunk & (SEG_CHUNKS - 1)) * STRIDE];
       return chunk;
     }
-    if (this.usedChunks === this.below.length) {
-      const below = new Int32Array(this.below.length * 2);
-      below.set(this.below);
-      this.peakBytes += below.byteLength; // old and new links together for a moment
-      this.below = below;
-    }
     if (this.usedChunks === this.segments.length * SEG_CHUNKS) {
-      this.segments.push(new Int32Array(SEG_CHUNKS * CHUNK * 2));
-      this.peakBytes += SEG_CHUNKS * CHUNK * 8;
+      this.segments.push(new Int32Array(SEG_CHUNKS * STRIDE));
+      this.peakBytes += SEG_CHUNKS * STRIDE * 4;
     }
     return this.usedChunks++;
   }
