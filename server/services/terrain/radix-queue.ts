@@ -61,7 +61,7 @@ export class MonotoneCellQueue {
    * keys are opened, so keys ≥ `limit` may still be pushed afterwards.
    */
   hasKeyAtMost(limit: number): boolean {
-    if (this.size === 0) return false;
+    if (this.size === 0 || limit < this.floor) return false;
     for (;;) {
       const b0 = this.firstInLevel(0);
       if (b0 >= 0) return ((this.floor & ~0xff) | b0) >>> 0 <= limit;
