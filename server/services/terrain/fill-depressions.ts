@@ -121,7 +121,7 @@ export function fillDepressions(
   const offsets = Int32Array.of(-width - 1, -width, -width + 1, -1, 1, width - 1, width, width + 1);
   const dRow = Int32Array.of(-1, -1, -1, 0, 0, 1, 1, 1);
   const dCol = Int32Array.of(-1, 0, 1, -1, 1, -1, 0, 1);
-  const taken = new Int32Array(8); // the current cell's higher neighbours, closed, awaiting the slope test
+  const taken = new Int32Array(8); // a slope cell's unvisited neighbours, taken if it passes the test
 
   for (;;) {
     let c: number;
