@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { fillDepressions } from '../../../server/services/terrain/fill-depressions';
+import { fillDepressions, nextFloat32Up } from '../../../server/services/terrain/fill-depressions';
 import { flowDirectionD8, flowAccumulationM2 } from '../../../server/services/terrain/flow-d8';
-import { demFromRows } from './helpers';
+import { demFromRows, seededRandom } from './helpers';
 
 // Hand-checked grids for Priority-Flood+ε (Barnes, Lehman & Mulla 2014, Alg. 3).
 describe('Priority-Flood depression filling', () => {
@@ -56,5 +56,33 @@ describe('Priority-Flood depression filling', () => {
     const filled = fillDepressions(dem.elevationM, 4, 4);
     expect(filled[9]).toBe(1);
     expect(Number.isNaN(filled[6])).toBe(true);
+  });
+});
+
+// The ε of Alg. 3 is one Float32 step up (IEEE 754-2008, clause 5.3.1, nextUp): the fill's
+// rounding shortcut must give exactly the value stepping the bits gives.
+describe('the ε step (Float32 nextUp)', () => {
+  const f = new Float32Array(1), b = new Int32Array(f.buffer);
+  const byBits = (v: number): number => {
+    if (v === 0) return 2 ** -149;
+    f[0] = v;
+    b[0] += v > 0 ? 1 : -1;
+    return f[0];
+  };
+  it('equals stepping the bits on random bit patterns and at the edges of every binade', () => {
+    const rnd = seededRandom(3);
+    const patterns: number[] = [];
+    for (let k = 0; k < 200_000; k++) patterns.push((rnd() * 2 ** 32) | 0);
+    for (let e = 0; e < 255; e++) for (const m of [0, 1, 0x400000, 0x7ffffe, 0x7fffff]) patterns.push((e << 23) | m, ((e << 23) | m) | 0x80000000);
+    let wrong = 0;
+    for (const bits of patterns) {
+      b[0] = bits;
+      const v = f[0];
+      if (Number.isNaN(v)) continue;
+      if (!Object.is(nextFloat32Up(v), byBits(v))) wrong++;
+    }
+    expect(wrong).toBe(0);
+    expect(nextFloat32Up(3.4028234663852886e38)).toBe(Infinity);
+    expect(nextFloat32Up(-0)).toBe(2 ** -149);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { fillDepressions } from '../../../server/services/terrain/fill-depressions';
 import { CellMinHeap } from '../../../server/services/terrain/min-heap';
+import { MonotoneCellQueue, orderedKey } from '../../../server/services/terrain/radix-queue';
 import { seededRandom } from './helpers';
 
 // The fill's reference is the plain Priority-Flood+ε (Barnes, Lehman & Mulla 2014, Alg. 3, our
@@ -321,5 +322,110 @@ describe('cell min-heap', () => {
 
   it('throws on pop() from an empty heap', () => {
     expect(() => new CellMinHeap().pop()).toThrow('pop() on an empty heap');
+  });
+});
+
+// More surfaces for the radix-heap fill, each checked the same way as above against the plain
+// Priority-Flood+ε (Barnes et al. 2014, Alg. 3) and the exact fill (Alg. 1).
+describe('radix-heap fill on benchmark-like terrain, noise, sea-level ground and nodata', () => {
+  const w = 260, h = 210;
+  const more = seededRandom(11);
+  // The timing benchmark's shape (rolling hills, a gentle fall to the south and 0.4 m of noise
+  // on 5 m cells), on a small grid: half the cells sit in noise hollows or on their rims.
+  const benchmarkLike = grid(w, h, (r, c) => 300 + 25 * Math.sin(c / 140) * Math.cos(r / 170) + 8 * Math.sin((c + r) / 45) - 0.01 * r + more() * 0.4);
+  const cases: Array<[string, Float32Array]> = [
+    ['benchmark-like rolling hills with 0.4 m noise', benchmarkLike],
+    ['white noise between 0 and 1 m', grid(w, h, () => more())],
+    ['ground below sea level (−60 to −20 m) with pits', grid(w, h, (r, c) => -40 + 15 * Math.sin(c / 31) * Math.cos(r / 17) - (more() < 0.03 ? 5 : more() * 0.3))],
+    ['white noise around zero (±0, tiny and negative values)', grid(w, h, () => { const v = more(); return v < 0.1 ? 0 : v < 0.15 ? -0 : v < 0.2 ? 1e-40 : (v - 0.6) * 1e-3; })],
+    ['benchmark-like hills with nodata holes, a ragged nodata edge and lone nodata cells', grid(w, h, (r, c) => {
+      if (r < 4 + 3 * Math.sin(c / 7) || (r - 100) ** 2 + (c - 130) ** 2 < 500 || more() < 0.005) return NaN;
+      return benchmarkLike[r * w + c];
+    })],
+  ];
+  for (const [name, dem] of cases) {
+    it(`matches the plain fill within ε handling and every cell drains: ${name}`, () => {
+      const exact = exactFill(dem, w, h);
+      const ref = referenceFill(dem, w, h);
+      const out = fillDepressions(dem, w, h);
+      const refSteps = maxStepsAbove(ref, exact);
+      const outSteps = maxStepsAbove(out, exact);
+      expect(outSteps).toBeGreaterThanOrEqual(0); // never below the exact filled surface
+      expect(outSteps).toBeLessThanOrEqual(refSteps);
+      expect(cellsThatDoNotDrain(out, w, h)).toBe(0);
+      let nodataMoved = 0;
+      for (let i = 0; i < dem.length; i++) if (Number.isNaN(out[i]) !== Number.isNaN(dem[i])) nodataMoved++;
+      expect(nodataMoved).toBe(0);
+    });
+  }
+
+  it('uses a scratch grid that cannot hold the closed bits (odd offset, too short) and still leaves it all 1', () => {
+    const dem = cases[0][1];
+    const expected = fillDepressions(dem, w, h);
+    const backing = new Uint8Array(w * h + 1).fill(9);
+    const scratch = backing.subarray(1); // byteOffset 1: not usable as 32-bit words
+    const stats = { queueBytes: 0 };
+    expect(differingCells(fillDepressions(dem, w, h, { closedScratch: scratch, stats }), expected)).toBe(0);
+    expect(scratch.every((v) => v === 1)).toBe(true);
+    expect(backing[0]).toBe(9);
+    // counts its own closed bits then (one bit per cell) besides the queues
+    expect(stats.queueBytes).toBeGreaterThanOrEqual(Math.ceil((w * h) / 8));
+    const tiny = new Uint8Array(3).fill(5);
+    fillDepressions(Float32Array.of(1, 0, 2), 3, 1, { closedScratch: tiny });
+    expect([...tiny]).toEqual([1, 1, 1]);
+  });
+});
+
+describe('monotone cell queue (radix heap)', () => {
+  const f = new Float32Array(1), b = new Int32Array(f.buffer);
+  const keyOf = (v: number): number => { f[0] = v; return orderedKey(b[0]); };
+
+  it('orders Float32 keys like the numbers, negatives and −0 included', () => {
+    const values = [-3.4e38, -300, -1, -1e-40, -0, 0, 1e-45, 1e-40, 1, 300.00003, 3.4e38];
+    for (let i = 1; i < values.length; i++) expect(keyOf(values[i])).toBeGreaterThan(keyOf(values[i - 1]));
+  });
+
+  it('pops keys in non-decreasing order, every pushed cell once, when pushes never go below the last pop', () => {
+    const rnd = seededRandom(5);
+    const q = new MonotoneCellQueue();
+    const keyOfCell = new Map<number, number>();
+    let last = keyOf(-50), pushed = 0, popped = 0, outOfOrder = 0;
+    for (let step = 0; step < 200_000; step++) {
+      if (q.size > 0 && rnd() < 0.5) {
+        const cell = q.pop();
+        const key = keyOfCell.get(cell)!;
+        if (key < last) outOfOrder++;
+        last = key;
+        keyOfCell.delete(cell);
+        popped++;
+      } else {
+        // near the last key most of the time (as in a flood), now and then far above it; ties often
+        const v = rnd() < 0.9 ? Math.round(rnd() * 40) / 100 : rnd() * 200;
+        f[0] = -50 + v;
+        const key = Math.max(last, orderedKey(b[0]));
+        q.push(pushed, key);
+        keyOfCell.set(pushed++, key);
+      }
+    }
+    while (q.size > 0) {
+      const cell = q.pop();
+      const key = keyOfCell.get(cell)!;
+      if (key < last) outOfOrder++;
+      last = key;
+      keyOfCell.delete(cell);
+      popped++;
+    }
+    expect(outOfOrder).toBe(0);
+    expect(popped).toBe(pushed);
+    expect(keyOfCell.size).toBe(0); // each cell came out once
+    expect(q.peakBytes).toBeGreaterThan(0);
+  });
+
+  it('throws on a key below the last one popped and on pop() when empty', () => {
+    const q = new MonotoneCellQueue();
+    q.push(1, keyOf(5));
+    q.pop();
+    expect(() => q.push(2, keyOf(4))).toThrow('the queue is monotone');
+    expect(() => q.pop()).toThrow('pop() on an empty queue');
   });
 });
