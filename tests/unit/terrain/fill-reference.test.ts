@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { fillDepressions } from '../../../server/services/terrain/fill-depressions';
-import { CellMinHeap } from '../../../server/services/terrain/min-heap';
 import { MonotoneCellQueue, orderedKey } from '../../../server/services/terrain/radix-queue';
 import { seededRandom } from './helpers';
 
@@ -295,33 +294,6 @@ describe('Priority-Flood+ε on one-column grids', () => {
   it('finishes on a one-column grid and leaves every cell as it was', () => {
     const z = grid(1, 9, () => Math.round(rnd() * 4));
     expect(differingCells(fillDepressions(z, 1, 9), z)).toBe(0);
-  });
-});
-
-describe('cell min-heap', () => {
-  it('pops the same cells in the same order as the textbook binary heap, ties included', () => {
-    const heap = new CellMinHeap(16), ref = new ReferenceHeap(16);
-    const popped: number[] = [], refPopped: number[] = [];
-    for (let step = 0; step < 200_000; step++) {
-      if (ref.size > 0 && rnd() < 0.48) {
-        popped.push(heap.pop());
-        refPopped.push(ref.pop());
-      } else {
-        const key = Math.floor(rnd() * 40); // few distinct keys: many ties
-        heap.push(step, key);
-        ref.push(step, key);
-      }
-    }
-    while (ref.size > 0) {
-      popped.push(heap.pop());
-      refPopped.push(ref.pop());
-    }
-    expect(heap.size).toBe(0);
-    expect(popped).toEqual(refPopped);
-  });
-
-  it('throws on pop() from an empty heap', () => {
-    expect(() => new CellMinHeap().pop()).toThrow('pop() on an empty heap');
   });
 });
 
