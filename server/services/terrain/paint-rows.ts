@@ -1,0 +1,134 @@
+// Draws a map picture a row at a time: the source cell of each pixel (picture-frame.ts), then its
+// palette index from the cell's value, then the row packed into the PNG's scanlines. Each kind of
+// values has a loop of its own, with the class test made on what the cell holds:
+//   - a byte that is its own index (shaded relief);
+//   - a 2-byte slope code, through a table of the index of every code;
+//   - a mask bit (concentrated flow);
+//   - a Float32 value, through a table of the index of every float's top 16 bits (sign, exponent
+//     and 7 bits of the significand: a range of floats within 1/128 of each other); a range in
+//     which a class break or NaN falls is marked, and only its values are compared with the breaks.
+import type { PaletteScanlines } from './palette-png';
+import { sourceRow, type PictureFrame } from './picture-frame';
+
+export type Painter =
+  | { kind: 'byte'; values: Uint8Array }
+  | { kind: 'code'; codes: Uint16Array; entryOfCode: Uint8Array }
+  | { kind: 'bit'; bits: Uint8Array; on: number }
+  | { kind: 'float-classes'; values: Float32Array; breaks: ReadonlyArray<number>; entries: Uint8Array }
+  | { kind: 'each'; values: ArrayLike<number>; index: (v: number) => number };
+
+/** Marks a range of floats whose values fall in more than one class. */
+const MIXED = 255;
+
+/** Index of class j (count of breaks at or below v, as a class colourer counts them); 0 for NaN. */
+function classEntry(v: number, breaks: ReadonlyArray<number>, entries: Uint8Array): number {
+  if (v !== v) return 0;
+  let j = 0;
+  while (j < breaks.length && v >= breaks[j]) j++;
+  return entries[j];
+}
+
+/**
+ * The index of every range of floats sharing their top 16 bits, MIXED where they differ. The
+ * count of breaks passed only grows with v, so a range whose lowest and highest floats are in one
+ * class is wholly in it.
+ */
+function floatClassTable(breaks: ReadonlyArray<number>, entries: Uint8Array): Uint8Array {
+  const table = new Uint8Array(65536);
+  const f = new Float32Array(2);
+  const u = new Uint32Array(f.buffer);
+  for (let top = 0; top < 65536; top++) {
+    u[0] = top << 16;
+    u[1] = (top << 16) | 0xffff;
+    const lo = f[0], hi = f[1];
+    if (lo !== lo && hi !== hi) continue; // NaN only: index 0
+    // A range with NaN or an infinity at one end is compared value by value.
+    const a = classEntry(lo, breaks, entries), b = classEntry(hi, breaks, entries);
+    table[top] = a === b && lo === lo && hi === hi ? a : MIXED;
+  }
+  return table;
+}
+
+/** Draws every row of the picture into lines. */
+export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteScanlines): void {
+  const w = frame.grid.width, h = frame.grid.height;
+  const src = new Int32Array(w);
+  const idx = new Uint8Array(w);
+  switch (painter.kind) {
+    case 'byte':
+      for (let py = 0; py < h; py++) {
+        sourceRow(frame, py, src);
+        paintBytes(src, idx, painter.values);
+        lines.setRow(py, idx);
+      }
+      return;
+    case 'code':
+      for (let py = 0; py < h; py++) {
+        sourceRow(frame, py, src);
+        paintCodes(src, idx, painter.codes, painter.entryOfCode);
+        lines.setRow(py, idx);
+      }
+      return;
+    case 'bit':
+      for (let py = 0; py < h; py++) {
+        sourceRow(frame, py, src);
+        paintBits(src, idx, painter.bits, painter.on);
+        lines.setRow(py, idx);
+      }
+      return;
+    case 'float-classes': {
+      const { values, breaks, entries } = painter;
+      const table = floatClassTable(breaks, entries);
+      const bits = new Uint32Array(values.buffer, values.byteOffset, values.length);
+      for (let py = 0; py < h; py++) {
+        sourceRow(frame, py, src);
+        paintFloatClasses(src, idx, values, bits, table, breaks, entries);
+        lines.setRow(py, idx);
+      }
+      return;
+    }
+    case 'each':
+      for (let py = 0; py < h; py++) {
+        sourceRow(frame, py, src);
+        for (let px = 0; px < w; px++) {
+          const s = src[px];
+          idx[px] = s >= 0 ? painter.index(painter.values[s]) : 0;
+        }
+        lines.setRow(py, idx);
+      }
+      return;
+  }
+}
+
+function paintBytes(src: Int32Array, idx: Uint8Array, values: Uint8Array): void {
+  for (let px = 0; px < src.length; px++) {
+    const s = src[px];
+    idx[px] = s >= 0 ? values[s] : 0;
+  }
+}
+
+function paintCodes(src: Int32Array, idx: Uint8Array, codes: Uint16Array, entryOfCode: Uint8Array): void {
+  for (let px = 0; px < src.length; px++) {
+    const s = src[px];
+    idx[px] = s >= 0 ? entryOfCode[codes[s]] : 0;
+  }
+}
+
+function paintBits(src: Int32Array, idx: Uint8Array, bits: Uint8Array, on: number): void {
+  for (let px = 0; px < src.length; px++) {
+    const s = src[px];
+    idx[px] = s >= 0 && (bits[s >> 3] >> (s & 7)) & 1 ? on : 0;
+  }
+}
+
+function paintFloatClasses(src: Int32Array, idx: Uint8Array, values: Float32Array, bits: Uint32Array, table: Uint8Array, breaks: ReadonlyArray<number>, entries: Uint8Array): void {
+  for (let px = 0; px < src.length; px++) {
+    const s = src[px];
+    if (s < 0) {
+      idx[px] = 0;
+      continue;
+    }
+    const e = table[bits[s] >>> 16];
+    idx[px] = e !== MIXED ? e : classEntry(values[s], breaks, entries);
+  }
+}
