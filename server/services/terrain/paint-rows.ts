@@ -8,7 +8,7 @@
 //     and 7 bits of the significand: a range of floats within 1/128 of each other); a range in
 //     which a class break or NaN falls is marked, and only its values are compared with the breaks.
 import type { PaletteScanlines } from './palette-png';
-import { sourceRow, type PictureFrame } from './picture-frame';
+import { RowRuns, sourceRuns, type PictureFrame } from './picture-frame';
 
 export type Painter =
   | { kind: 'byte'; values: Uint8Array }
@@ -52,27 +52,27 @@ function floatClassTable(breaks: ReadonlyArray<number>, entries: Uint8Array): Ui
 /** Draws every row of the picture into lines. */
 export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteScanlines): void {
   const w = frame.grid.width, h = frame.grid.height;
-  const src = new Int32Array(w);
+  const runs = new RowRuns(w);
   const idx = new Uint8Array(w);
   switch (painter.kind) {
     case 'byte':
       for (let py = 0; py < h; py++) {
-        sourceRow(frame, py, src);
-        paintBytes(src, idx, painter.values);
+        sourceRuns(frame, py, runs);
+        paintBytes(runs, idx, painter.values);
         lines.setRow(py, idx);
       }
       return;
     case 'code':
       for (let py = 0; py < h; py++) {
-        sourceRow(frame, py, src);
-        paintCodes(src, idx, painter.codes, painter.entryOfCode);
+        sourceRuns(frame, py, runs);
+        paintCodes(runs, idx, painter.codes, painter.entryOfCode);
         lines.setRow(py, idx);
       }
       return;
     case 'bit':
       for (let py = 0; py < h; py++) {
-        sourceRow(frame, py, src);
-        paintBits(src, idx, painter.bits, painter.on);
+        sourceRuns(frame, py, runs);
+        paintBits(runs, idx, painter.bits, painter.on);
         lines.setRow(py, idx);
       }
       return;
@@ -81,18 +81,18 @@ export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteSc
       const table = floatClassTable(breaks, entries);
       const bits = new Uint32Array(values.buffer, values.byteOffset, values.length);
       for (let py = 0; py < h; py++) {
-        sourceRow(frame, py, src);
-        paintFloatClasses(src, idx, values, bits, table, breaks, entries);
+        sourceRuns(frame, py, runs);
+        paintFloatClasses(runs, idx, values, bits, table, breaks, entries);
         lines.setRow(py, idx);
       }
       return;
     }
     case 'each':
       for (let py = 0; py < h; py++) {
-        sourceRow(frame, py, src);
-        for (let px = 0; px < w; px++) {
-          const s = src[px];
-          idx[px] = s >= 0 ? painter.index(painter.values[s]) : 0;
+        sourceRuns(frame, py, runs);
+        for (let q = 0; q < runs.count; q++) {
+          const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+          for (let i = 0; i < len; i++) idx[px + i] = s >= 0 ? painter.index(painter.values[s + i]) : 0;
         }
         lines.setRow(py, idx);
       }
@@ -100,35 +100,42 @@ export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteSc
   }
 }
 
-function paintBytes(src: Int32Array, idx: Uint8Array, values: Uint8Array): void {
-  for (let px = 0; px < src.length; px++) {
-    const s = src[px];
-    idx[px] = s >= 0 ? values[s] : 0;
+// Each painter: a transparent run is filled with index 0; a run of cells is read in order.
+
+function paintBytes(runs: RowRuns, idx: Uint8Array, values: Uint8Array): void {
+  for (let q = 0; q < runs.count; q++) {
+    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+    if (s < 0) idx.fill(0, px, px + len);
+    else for (let i = 0; i < len; i++) idx[px + i] = values[s + i];
   }
 }
 
-function paintCodes(src: Int32Array, idx: Uint8Array, codes: Uint16Array, entryOfCode: Uint8Array): void {
-  for (let px = 0; px < src.length; px++) {
-    const s = src[px];
-    idx[px] = s >= 0 ? entryOfCode[codes[s]] : 0;
+function paintCodes(runs: RowRuns, idx: Uint8Array, codes: Uint16Array, entryOfCode: Uint8Array): void {
+  for (let q = 0; q < runs.count; q++) {
+    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+    if (s < 0) idx.fill(0, px, px + len);
+    else for (let i = 0; i < len; i++) idx[px + i] = entryOfCode[codes[s + i]];
   }
 }
 
-function paintBits(src: Int32Array, idx: Uint8Array, bits: Uint8Array, on: number): void {
-  for (let px = 0; px < src.length; px++) {
-    const s = src[px];
-    idx[px] = s >= 0 && (bits[s >> 3] >> (s & 7)) & 1 ? on : 0;
+function paintBits(runs: RowRuns, idx: Uint8Array, bits: Uint8Array, on: number): void {
+  for (let q = 0; q < runs.count; q++) {
+    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+    if (s < 0) idx.fill(0, px, px + len);
+    else for (let i = 0, c = s; i < len; i++, c++) idx[px + i] = (bits[c >> 3] >> (c & 7)) & 1 ? on : 0;
   }
 }
 
-function paintFloatClasses(src: Int32Array, idx: Uint8Array, values: Float32Array, bits: Uint32Array, table: Uint8Array, breaks: ReadonlyArray<number>, entries: Uint8Array): void {
-  for (let px = 0; px < src.length; px++) {
-    const s = src[px];
+function paintFloatClasses(runs: RowRuns, idx: Uint8Array, values: Float32Array, bits: Uint32Array, table: Uint8Array, breaks: ReadonlyArray<number>, entries: Uint8Array): void {
+  for (let q = 0; q < runs.count; q++) {
+    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
     if (s < 0) {
-      idx[px] = 0;
+      idx.fill(0, px, px + len);
       continue;
     }
-    const e = table[bits[s] >>> 16];
-    idx[px] = e !== MIXED ? e : classEntry(values[s], breaks, entries);
+    for (let i = 0; i < len; i++) {
+      const e = table[bits[s + i] >>> 16];
+      idx[px + i] = e !== MIXED ? e : classEntry(values[s + i], breaks, entries);
+    }
   }
 }
