@@ -8,7 +8,8 @@
 //     and 7 bits of the significand: a range of floats within 1/128 of each other); a range in
 //     which a class break or NaN falls is marked, and only its values are compared with the breaks.
 import type { PaletteScanlines } from './palette-png';
-import { RowRuns, sourceRuns, type PictureFrame } from './picture-frame';
+import type { PictureFrame } from './picture-frame';
+import { frameRuns, type FrameRuns } from './picture-runs';
 
 export type Painter =
   | { kind: 'byte'; values: Uint8Array }
@@ -52,27 +53,24 @@ function floatClassTable(breaks: ReadonlyArray<number>, entries: Uint8Array): Ui
 /** Draws every row of the picture into lines. */
 export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteScanlines): void {
   const w = frame.grid.width, h = frame.grid.height;
-  const runs = new RowRuns(w);
+  const runs = frameRuns(frame);
   const idx = new Uint8Array(w);
   switch (painter.kind) {
     case 'byte':
       for (let py = 0; py < h; py++) {
-        sourceRuns(frame, py, runs);
-        paintBytes(runs, idx, painter.values);
+        paintBytes(runs, py, idx, painter.values);
         lines.setRow(py, idx);
       }
       return;
     case 'code':
       for (let py = 0; py < h; py++) {
-        sourceRuns(frame, py, runs);
-        paintCodes(runs, idx, painter.codes, painter.entryOfCode);
+        paintCodes(runs, py, idx, painter.codes, painter.entryOfCode);
         lines.setRow(py, idx);
       }
       return;
     case 'bit':
       for (let py = 0; py < h; py++) {
-        sourceRuns(frame, py, runs);
-        paintBits(runs, idx, painter.bits, painter.on);
+        paintBits(runs, py, idx, painter.bits, painter.on);
         lines.setRow(py, idx);
       }
       return;
@@ -81,17 +79,15 @@ export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteSc
       const table = floatClassTable(breaks, entries);
       const bits = new Uint32Array(values.buffer, values.byteOffset, values.length);
       for (let py = 0; py < h; py++) {
-        sourceRuns(frame, py, runs);
-        paintFloatClasses(runs, idx, values, bits, table, breaks, entries);
+        paintFloatClasses(runs, py, idx, values, bits, table, breaks, entries);
         lines.setRow(py, idx);
       }
       return;
     }
     case 'each':
       for (let py = 0; py < h; py++) {
-        sourceRuns(frame, py, runs);
-        for (let q = 0; q < runs.count; q++) {
-          const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+        for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += runs.len[q++]) {
+          const len = runs.len[q], s = runs.src[q];
           for (let i = 0; i < len; i++) idx[px + i] = s >= 0 ? painter.index(painter.values[s + i]) : 0;
         }
         lines.setRow(py, idx);
@@ -102,33 +98,37 @@ export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteSc
 
 // Each painter: a transparent run is filled with index 0; a run of cells is read in order.
 
-function paintBytes(runs: RowRuns, idx: Uint8Array, values: Uint8Array): void {
-  for (let q = 0; q < runs.count; q++) {
-    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+function paintBytes(runs: FrameRuns, py: number, idx: Uint8Array, values: Uint8Array): void {
+  const { len: lens, src: srcs } = runs;
+  for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += lens[q++]) {
+    const len = lens[q], s = srcs[q];
     if (s < 0) idx.fill(0, px, px + len);
     else for (let i = 0; i < len; i++) idx[px + i] = values[s + i];
   }
 }
 
-function paintCodes(runs: RowRuns, idx: Uint8Array, codes: Uint16Array, entryOfCode: Uint8Array): void {
-  for (let q = 0; q < runs.count; q++) {
-    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+function paintCodes(runs: FrameRuns, py: number, idx: Uint8Array, codes: Uint16Array, entryOfCode: Uint8Array): void {
+  const { len: lens, src: srcs } = runs;
+  for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += lens[q++]) {
+    const len = lens[q], s = srcs[q];
     if (s < 0) idx.fill(0, px, px + len);
     else for (let i = 0; i < len; i++) idx[px + i] = entryOfCode[codes[s + i]];
   }
 }
 
-function paintBits(runs: RowRuns, idx: Uint8Array, bits: Uint8Array, on: number): void {
-  for (let q = 0; q < runs.count; q++) {
-    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+function paintBits(runs: FrameRuns, py: number, idx: Uint8Array, bits: Uint8Array, on: number): void {
+  const { len: lens, src: srcs } = runs;
+  for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += lens[q++]) {
+    const len = lens[q], s = srcs[q];
     if (s < 0) idx.fill(0, px, px + len);
     else for (let i = 0, c = s; i < len; i++, c++) idx[px + i] = (bits[c >> 3] >> (c & 7)) & 1 ? on : 0;
   }
 }
 
-function paintFloatClasses(runs: RowRuns, idx: Uint8Array, values: Float32Array, bits: Uint32Array, table: Uint8Array, breaks: ReadonlyArray<number>, entries: Uint8Array): void {
-  for (let q = 0; q < runs.count; q++) {
-    const px = runs.px[q], len = runs.len[q], s = runs.src[q];
+function paintFloatClasses(runs: FrameRuns, py: number, idx: Uint8Array, values: Float32Array, bits: Uint32Array, table: Uint8Array, breaks: ReadonlyArray<number>, entries: Uint8Array): void {
+  const { len: lens, src: srcs } = runs;
+  for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += lens[q++]) {
+    const len = lens[q], s = srcs[q];
     if (s < 0) {
       idx.fill(0, px, px + len);
       continue;
