@@ -125,18 +125,23 @@ function codedSlopeFigures(codes: Uint16Array, spans: Int32Array, classes: Reado
   const rankAt = Math.max(0, Math.ceil(0.9 * count) - 1);
   // Classes as parseSlopeClasses allows them go up; any others are looked up code by code.
   const rising = codeBreaks.every((b, j) => j === 0 || b >= codeBreaks[j - 1]);
-  let p90Code = -1, seen = 0, j = 0;
-  for (let code = 0; code < SLOPE_CODE_NODATA; code++) {
+  let p90Code = -1, seen = 0, j = 0, code = 0;
+  for (; code < SLOPE_CODE_NODATA; code++) {
     if (!rising) j = classIndex(codeBreaks, code);
     else while (j + 1 < codeBreaks.length && code >= codeBreaks[j + 1]) j++;
     if (p90Code >= 0 && rising && j === codeBreaks.length - 1) break; // the rest all fall in the last class
     const m = counts[code];
+    counts[code] = 0;
     seen += m;
     classCounts[j] += m;
     if (p90Code < 0 && seen > rankAt) p90Code = code;
   }
   classCounts[codeBreaks.length - 1] += count - seen;
-  counts.fill(0);
+  // The counts are left all zero: those not read above, up to the last cell counted.
+  for (let rest = count - seen; rest > 0; code++) {
+    rest -= counts[code];
+    counts[code] = 0;
+  }
   return { count, meanPct: hundredths / (100 * count), p90Pct: decodeSlopePct(p90Code), classCounts };
 }
 
