@@ -1,5 +1,5 @@
-// Draws a map picture a row at a time: the source cell of each pixel (picture-frame.ts), then its
-// palette index from the cell's value, then the row packed into the PNG's scanlines. Each kind of
+// Draws a map picture a row at a time: the runs of source cells of the row (picture-runs.ts), the
+// palette index of each pixel from its cell's value, the row packed into the PNG's scanlines. Each kind of
 // values has a loop of its own, with the class test made on what the cell holds:
 //   - a byte that is its own index (shaded relief);
 //   - a 2-byte slope code, through a table of the index of every code;
@@ -8,8 +8,7 @@
 //     and 7 bits of the significand: a range of floats within 1/128 of each other); a range in
 //     which a class break or NaN falls is marked, and only its values are compared with the breaks.
 import type { PaletteScanlines } from './palette-png';
-import type { PictureFrame } from './picture-frame';
-import { frameRuns, type FrameRuns } from './picture-runs';
+import type { FrameRuns } from './picture-runs';
 
 export type Painter =
   | { kind: 'byte'; values: Uint8Array }
@@ -51,9 +50,8 @@ function floatClassTable(breaks: ReadonlyArray<number>, entries: Uint8Array): Ui
 }
 
 /** Draws every row of the picture into lines. */
-export function drawRows(frame: PictureFrame, painter: Painter, lines: PaletteScanlines): void {
-  const w = frame.grid.width, h = frame.grid.height;
-  const runs = frameRuns(frame);
+export function drawRows(runs: FrameRuns, painter: Painter, lines: PaletteScanlines): void {
+  const w = lines.width, h = lines.height;
   const idx = new Uint8Array(w);
   switch (painter.kind) {
     case 'byte':

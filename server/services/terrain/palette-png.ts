@@ -48,7 +48,7 @@ export class PaletteScanlines {
   readonly depth: 1 | 2 | 4 | 8;
   private readonly palette: ArrayLike<number>;
   private readonly smooth: boolean;
-  private readonly rowBytes_: number;
+  private readonly bytesPerRow: number;
   private raw: Uint8Array;
 
   constructor(width: number, height: number, palette: ArrayLike<number>, options: ScanlineOptions = {}) {
@@ -58,9 +58,9 @@ export class PaletteScanlines {
     this.palette = palette;
     this.depth = bitDepthFor(palette.length);
     this.smooth = options.smooth === true && this.depth === 8;
-    this.rowBytes_ = Math.ceil((width * this.depth) / 8);
+    this.bytesPerRow = Math.ceil((width * this.depth) / 8);
     // Each row: the filter byte, then the indices packed high bits first.
-    this.raw = new Uint8Array((this.rowBytes_ + 1) * height);
+    this.raw = new Uint8Array((this.bytesPerRow + 1) * height);
   }
 
   /** True when 8-bit rows are stored Sub-filtered (PNG specification 9.2, filter type 1). */
@@ -75,7 +75,7 @@ export class PaletteScanlines {
    */
   rowBytes(y: number): Uint8Array {
     if (this.depth !== 8) throw new Error(`rowBytes is for 8-bit images, this one has ${this.depth} bits per pixel`);
-    const start = y * (this.rowBytes_ + 1);
+    const start = y * (this.bytesPerRow + 1);
     this.raw[start] = this.smooth ? 1 : 0;
     return this.raw.subarray(start + 1, start + 1 + this.width);
   }
@@ -83,7 +83,7 @@ export class PaletteScanlines {
   /** Packs row y from one index per pixel (idx[0..width)). */
   setRow(y: number, idx: Uint8Array): void {
     const { raw, width, depth } = this;
-    let p = y * (this.rowBytes_ + 1);
+    let p = y * (this.bytesPerRow + 1);
     if (depth === 8) {
       if (!this.smooth) {
         raw[p] = 0;

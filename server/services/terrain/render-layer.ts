@@ -9,6 +9,7 @@
 import { PaletteScanlines } from './palette-png';
 import { pictureFrame, type BoundsWgs84 } from './picture-frame';
 import { drawRows, type Painter } from './paint-rows';
+import { frameRuns } from './picture-runs';
 import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
 import type { GridFrame } from './rasterise-polygon';
 import { DEFAULT_SLOPE_CLASSES, type SlopeClass } from './slope-classes';
@@ -151,8 +152,9 @@ function painterFor(args: RenderArgs): { colourer: Colourer; painter: Painter } 
 
 /**
  * Renders one layer. { ok: false } when the grid's CRS is unknown. The picture is drawn a row at
- * a time straight into the PNG's packed scanlines: besides them and the compressed bytes only a
- * row of source cells and a row of indices are held.
+ * a time straight into the PNG's packed scanlines: besides them and the compressed bytes only
+ * the rows' runs of source cells (~0.25 byte per pixel, kept while the caller keeps the grid
+ * object, so a run's layers share them) and a row of indices are held.
  */
 export function renderLayer(args: RenderArgs): RenderResult {
   const { grid, values } = args;
@@ -161,7 +163,9 @@ export function renderLayer(args: RenderArgs): RenderResult {
   const framed = pictureFrame(grid, args.noWarp === true);
   if (!framed.ok) return framed;
   const { colourer, painter } = painterFor(args);
+  // The rows' source cells first (kept for the run's other layers), then the scanlines.
+  const runs = frameRuns(framed.frame);
   const lines = new PaletteScanlines(w, h, colourer.palette, { smooth: args.kind === 'hillshade' });
-  drawRows(framed.frame, painter, lines);
+  drawRows(runs, painter, lines);
   return { ok: true, png: lines.toPng(), width: w, height: h, bounds: { ...framed.frame.bounds }, legend: colourer.legend };
 }
