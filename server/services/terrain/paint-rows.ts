@@ -1,9 +1,9 @@
 // Draws a map picture a row at a time: the runs of source cells of the row (picture-runs.ts), the
 // palette index of each pixel from its cell's value, the row packed into the PNG's scanlines. Each kind of
 // values has a loop of its own, with the class test made on what the cell holds:
-//   - a byte that is its own index (shaded relief);
+//   - a byte that is its own index (shaded relief), written Sub-filtered into the 8-bit rows;
 //   - a 2-byte slope code, through a table of the index of every code;
-//   - a mask bit (concentrated flow);
+//   - a mask bit (concentrated flow), copied 8 at a time into the 1-bit rows;
 //   - a Float32 value, through a table of the index of every float's top 16 bits (sign, exponent
 //     and 7 bits of the significand: a range of floats within 1/128 of each other); a range in
 //     which a class break or NaN falls is marked, and only its values are compared with the breaks.
@@ -13,7 +13,7 @@ import type { FrameRuns } from './picture-runs';
 export type Painter =
   | { kind: 'byte'; values: Uint8Array }
   | { kind: 'code'; codes: Uint16Array; entryOfCode: Uint8Array }
-  | { kind: 'bit'; bits: Uint8Array; on: number }
+  | { kind: 'bit'; bits: Uint8Array }
   | { kind: 'float-classes'; values: Float32Array; breaks: ReadonlyArray<number>; entries: Uint8Array }
   | { kind: 'each'; values: ArrayLike<number>; index: (v: number) => number };
 
@@ -55,14 +55,9 @@ export function drawRows(runs: FrameRuns, painter: Painter, lines: PaletteScanli
   const idx = new Uint8Array(w);
   switch (painter.kind) {
     case 'byte':
-      // Straight into the 8-bit scanlines, filtered on the way when they are
-      for (let py = 0; py < h; py++) {
-        if (lines.depth !== 8) {
-          paintBytes(runs, py, idx, painter.values);
-          lines.setRow(py, idx);
-        } else if (lines.subFiltered) paintBytesSub(runs, py, lines.rowBytes(py), painter.values);
-        else paintBytes(runs, py, lines.rowBytes(py), painter.values);
-      }
+      // Straight into the relief's Sub-filtered 8-bit scanlines
+      if (!lines.subFiltered) throw new Error('a relief is drawn into Sub-filtered 8-bit scanlines');
+      for (let py = 0; py < h; py++) paintBytesSub(runs, py, lines.rowBytes(py), painter.values);
       return;
     case 'code':
       for (let py = 0; py < h; py++) {
@@ -71,10 +66,9 @@ export function drawRows(runs: FrameRuns, painter: Painter, lines: PaletteScanli
       }
       return;
     case 'bit':
-      for (let py = 0; py < h; py++) {
-        paintBits(runs, py, idx, painter.bits, painter.on);
-        lines.setRow(py, idx);
-      }
+      // A 1-bit picture, entry 1 where the bit is set: the mask's bits are copied 8 at a time.
+      if (lines.depth !== 1) throw new Error(`a mask draws a 1-bit picture, not ${lines.depth}-bit`);
+      for (let py = 0; py < h; py++) copyBits(runs, py, lines.packedRow(py), painter.bits);
       return;
     case 'float-classes': {
       const { values, breaks, entries } = painter;
@@ -100,16 +94,7 @@ export function drawRows(runs: FrameRuns, painter: Painter, lines: PaletteScanli
 
 // Each painter: a transparent run is filled with index 0; a run of cells is read in order.
 
-function paintBytes(runs: FrameRuns, py: number, idx: Uint8Array, values: Uint8Array): void {
-  const { len: lens, src: srcs } = runs;
-  for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += lens[q++]) {
-    const len = lens[q], s = srcs[q];
-    if (s < 0) idx.fill(0, px, px + len);
-    else for (let i = 0; i < len; i++) idx[px + i] = values[s + i];
-  }
-}
-
-/** As paintBytes, each byte written minus the one to its left (PNG specification 9.2, Sub). */
+/** Each cell's byte, written minus the one to its left (PNG specification 9.2, Sub). */
 function paintBytesSub(runs: FrameRuns, py: number, out: Uint8Array, values: Uint8Array): void {
   const { len: lens, src: srcs } = runs;
   let left = 0;
@@ -138,12 +123,31 @@ function paintCodes(runs: FrameRuns, py: number, idx: Uint8Array, codes: Uint16A
   }
 }
 
-function paintBits(runs: FrameRuns, py: number, idx: Uint8Array, bits: Uint8Array, on: number): void {
+/** Byte b with its bits in the opposite order (the mask counts from the low bit, PNG rows from the high bit). */
+const REVERSED = Uint8Array.from({ length: 256 }, (_, b) => {
+  let r = 0;
+  for (let k = 0; k < 8; k++) r |= ((b >> k) & 1) << (7 - k);
+  return r;
+});
+
+/** Copies the mask bits of each run of cells into a 1-bit packed row (all zero before). */
+function copyBits(runs: FrameRuns, py: number, out: Uint8Array, bits: Uint8Array): void {
   const { len: lens, src: srcs } = runs;
+  const last = bits.length - 1;
   for (let q = runs.rowStart[py], px = 0; q < runs.rowStart[py + 1]; px += lens[q++]) {
     const len = lens[q], s = srcs[q];
-    if (s < 0) idx.fill(0, px, px + len);
-    else for (let i = 0, c = s; i < len; i++, c++) idx[px + i] = (bits[c >> 3] >> (c & 7)) & 1 ? on : 0;
+    if (s < 0) continue;
+    for (let i = 0; i < len; i += 8) {
+      const c = s + i, at = c >> 3;
+      // The next 8 cells' bits, cell c lowest; those past the run's end cleared.
+      let v = ((bits[at] | (at < last ? bits[at + 1] << 8 : 0)) >> (c & 7)) & 0xff;
+      const take = Math.min(8, len - i);
+      if (take < 8) v &= (1 << take) - 1;
+      const r = REVERSED[v]; // cell c highest
+      const p = px + i, shift = p & 7;
+      out[p >> 3] |= r >> shift;
+      if (shift > 0 && take > 8 - shift) out[(p >> 3) + 1] |= (r << (8 - shift)) & 0xff;
+    }
   }
 }
 

@@ -80,6 +80,17 @@ export class PaletteScanlines {
     return this.raw.subarray(start + 1, start + 1 + this.width);
   }
 
+  /**
+   * Row y's packed bytes after its filter byte (0, none), all zero until written: pixel px's
+   * index goes in at bit px·depth, counted from the high bit of the row's first byte.
+   */
+  packedRow(y: number): Uint8Array {
+    if (this.smooth) throw new Error('packedRow is for unfiltered images');
+    const start = y * (this.bytesPerRow + 1);
+    this.raw[start] = 0;
+    return this.raw.subarray(start + 1, start + 1 + this.bytesPerRow);
+  }
+
   /** Packs row y from one index per pixel (idx[0..width)). */
   setRow(y: number, idx: Uint8Array): void {
     const { raw, width, depth } = this;

@@ -126,7 +126,7 @@ function painterFor(args: RenderArgs): { colourer: Colourer; painter: Painter } 
       throw new Error(`concentratedFlowMinAreaM2 is ${args.concentratedFlowMinAreaM2} m² but the mask was made at ${values.minAreaM2} m²`);
     }
     const colourer = colourerFor({ ...args, concentratedFlowMinAreaM2: values.minAreaM2 });
-    return { colourer, painter: { kind: 'bit', bits: values.bits, on: colourer.index(Infinity) } };
+    return { colourer, painter: { kind: 'bit', bits: values.bits } };
   }
   const colourer = colourerFor(args);
   if (values instanceof SlopePctGrid) {
