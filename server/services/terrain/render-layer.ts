@@ -6,9 +6,11 @@
 // scheme; concentrated flow in dark blue; nodata transparent.
 // Slope classes may be drawn from the pipeline's 2-byte slope codes and concentrated flow from
 // its 1-bit mask: the class tests on codes give the same pixels as on Float32 slope.
-import { encodePalettePng } from './palette-png';
+import { PaletteScanlines } from './palette-png';
+import { pictureFrame, type BoundsWgs84 } from './picture-frame';
+import { drawRows, type Painter } from './paint-rows';
+import { frameRuns } from './picture-runs';
 import { ContributingAreaMask, DEFAULT_CONCENTRATED_FLOW_MIN_AREA_M2 } from './contributing-area-mask';
-import { converterBetween } from './reproject';
 import type { GridFrame } from './rasterise-polygon';
 import { DEFAULT_SLOPE_CLASSES, type SlopeClass } from './slope-classes';
 import { SLOPE_CODE_NODATA, slopeCodeAtLeast, SlopePctGrid } from './slope-pct-grid';
@@ -23,7 +25,7 @@ export const SOIL_LOSS_BREAKS_T_PER_HA_YR = [2.2, 4.5, 11, 22];
 export type LayerKind = 'hillshade' | 'slope-classes' | 'ls' | 'soil-loss' | 'concentrated-flow';
 export type LegendEntry = { label: string; colour: string };
 export type RenderValues = Float32Array | Uint8Array | SlopePctGrid | ContributingAreaMask;
-export type BoundsWgs84 = { west: number; south: number; east: number; north: number };
+export type { BoundsWgs84 };
 
 export type RenderArgs = {
   kind: LayerKind;
@@ -44,8 +46,14 @@ export type RenderResult =
 /**
  * How a layer's values become palette indices: `palette` holds the colours packed 0xRRGGBBAA,
  * entry 0 transparent (nodata and "nothing to draw"); `index(v)` picks the entry for a value.
+ * A class map also gives its breaks and the entry of each class, for the loops below.
  */
-type Colourer = { index: (v: number) => number; palette: number[]; legend: LegendEntry[] };
+type Colourer = {
+  index: (v: number) => number;
+  palette: number[];
+  legend: LegendEntry[];
+  classes?: { breaks: number[]; entries: Uint8Array };
+};
 
 function hex(c: string, alpha = 255): number {
   return ((parseInt(c.slice(1), 16) << 8) | alpha) >>> 0;
@@ -54,7 +62,9 @@ function hex(c: string, alpha = 255): number {
 function classColourer(breaks: number[], labels: string[], colours: ReadonlyArray<string | null>): Colourer {
   // Entry 1 + j is class j (a class without a colour is transparent).
   const palette = [0, ...colours.map((c) => (c ? hex(c, 200) : 0))];
+  const entries = Uint8Array.from({ length: breaks.length + 1 }, (_, j) => 1 + Math.min(j, colours.length - 1));
   return {
+    classes: { breaks, entries },
     index: (v) => {
       if (v !== v) return 0;
       let j = 0;
@@ -105,109 +115,57 @@ export function layerLegend(args: Pick<RenderArgs, 'kind' | 'slopeClasses' | 'co
 }
 
 /**
- * The palette index of every grid cell, for the kind of values given, each kind in a loop of its
- * own (one call per cell through a closure of four shapes cost more than the loop itself). A
- * hillshade is its own index grid (entry v is grey v), so it is used as it is.
+ * The colourer, and how each cell's value becomes its index, for the kind of values given: on
+ * the value, the slope code or the mask bit (paint-rows.ts).
  */
-function cellIndices(args: RenderArgs): { colourer: Colourer; cells: Uint8Array } {
+function painterFor(args: RenderArgs): { colourer: Colourer; painter: Painter } {
   const { values } = args;
-  const n = values.length;
   if (values instanceof ContributingAreaMask) {
     if (args.kind !== 'concentrated-flow') throw new Error(`a ContributingAreaMask can only draw 'concentrated-flow', not '${args.kind}'`);
     if (args.concentratedFlowMinAreaM2 !== undefined && args.concentratedFlowMinAreaM2 !== values.minAreaM2) {
       throw new Error(`concentratedFlowMinAreaM2 is ${args.concentratedFlowMinAreaM2} m² but the mask was made at ${values.minAreaM2} m²`);
     }
     const colourer = colourerFor({ ...args, concentratedFlowMinAreaM2: values.minAreaM2 });
-    const on = colourer.index(Infinity);
-    const cells = new Uint8Array(n);
-    const bits = values.bits;
-    for (let i = 0; i < n; i++) if ((bits[i >> 3] >> (i & 7)) & 1) cells[i] = on;
-    return { colourer, cells };
+    return { colourer, painter: { kind: 'bit', bits: values.bits } };
   }
   const colourer = colourerFor(args);
   if (values instanceof SlopePctGrid) {
     if (args.kind !== 'slope-classes') throw new Error(`a SlopePctGrid can only draw 'slope-classes', not '${args.kind}'`);
-    // The same classes as colourer.index on Float32 slope, tested on the codes.
+    // The index of every code: the same classes as colourer.index on Float32 slope, tested on the codes.
     const classes = args.slopeClasses ?? DEFAULT_SLOPE_CLASSES;
     const codeBreaks = classes.slice(1).map((c) => slopeCodeAtLeast(c.minPct));
     const byClass = classes.map((c, j) => colourer.index(j === 0 ? -Infinity : c.minPct));
-    const codes = values.codes;
-    const cells = new Uint8Array(n);
-    for (let i = 0; i < n; i++) {
-      const code = codes[i];
-      if (code === SLOPE_CODE_NODATA) continue;
+    const entryOfCode = new Uint8Array(SLOPE_CODE_NODATA + 1);
+    for (let code = 0; code < SLOPE_CODE_NODATA; code++) {
       let j = 0;
       while (j < codeBreaks.length && code >= codeBreaks[j]) j++;
-      cells[i] = byClass[j];
+      entryOfCode[code] = byClass[j];
     }
-    return { colourer, cells };
+    return { colourer, painter: { kind: 'code', codes: values.codes, entryOfCode } };
   }
-  if (values instanceof Uint8Array && args.kind === 'hillshade') return { colourer, cells: values };
-  const cells = new Uint8Array(n);
-  for (let i = 0; i < n; i++) cells[i] = colourer.index(values[i]);
-  return { colourer, cells };
+  // Shaded relief: entry v is grey v, the value is its own index.
+  if (values instanceof Uint8Array && args.kind === 'hillshade') return { colourer, painter: { kind: 'byte', values } };
+  if (values instanceof Float32Array && colourer.classes) return { colourer, painter: { kind: 'float-classes', values, ...colourer.classes } };
+  // Any other pairing (Float32 contributing area, a Float32 relief): one call per cell.
+  return { colourer, painter: { kind: 'each', values, index: colourer.index } };
 }
 
-/** Renders one layer. { ok: false } when the grid's CRS is unknown. */
+/**
+ * Renders one layer. { ok: false } when the grid's CRS is unknown. The picture is drawn a row at
+ * a time straight into the PNG's packed scanlines: besides them and the compressed bytes only
+ * the rows' runs of source cells (~0.25 byte per pixel, kept while the caller keeps the grid
+ * object, so a run's layers share them) and a row of indices are held.
+ */
 export function renderLayer(args: RenderArgs): RenderResult {
   const { grid, values } = args;
   const { width: w, height: h } = grid;
   if (values.length !== w * h) throw new Error(`values has ${values.length} cells, expected ${w * h}`);
-  const toWgs = converterBetween(grid.epsg, 4326);
-  if (!toWgs.ok) return toWgs;
-  const toMerc = converterBetween(grid.epsg, 3857);
-  if (!toMerc.ok) return toMerc;
-  const { colourer, cells } = cellIndices(args);
-  const x0 = grid.originX, y0 = grid.originY, x1 = x0 + w * grid.cellSizeX, y1 = y0 - h * grid.cellSizeY;
-  // Envelope of the grid's edge in Web Mercator (sampled along the edges, not just corners).
-  let mx0 = Infinity, my0 = Infinity, mx1 = -Infinity, my1 = -Infinity;
-  const steps = 16;
-  for (let k = 0; k <= steps; k++) {
-    const t = k / steps;
-    for (const p of [[x0 + t * (x1 - x0), y0], [x0 + t * (x1 - x0), y1], [x0, y0 + t * (y1 - y0)], [x1, y0 + t * (y1 - y0)]] as Array<[number, number]>) {
-      const [mx, my] = args.noWarp ? p : toMerc.converter.forward(p);
-      mx0 = Math.min(mx0, mx); my0 = Math.min(my0, my); mx1 = Math.max(mx1, mx); my1 = Math.max(my1, my);
-    }
-  }
-  // 0: transparent. Unwarped, the cells' indices are the picture.
-  const indices = args.noWarp ? cells : new Uint8Array(w * h);
-  if (!args.noWarp) {
-    // Lattice of source (col, row) positions for output pixels, every `step` pixels.
-    const step = 32;
-    const lw = Math.ceil(w / step) + 1, lh = Math.ceil(h / step) + 1;
-    const latticeC = new Float64Array(lw * lh), latticeR = new Float64Array(lw * lh);
-    for (let j = 0; j < lh; j++) {
-      for (let k = 0; k < lw; k++) {
-        const mx = mx0 + ((k * step) / w) * (mx1 - mx0);
-        const my = my1 - ((j * step) / h) * (my1 - my0);
-        const [sx, sy] = toMerc.converter.inverse([mx, my]);
-        latticeC[j * lw + k] = (sx - x0) / grid.cellSizeX;
-        latticeR[j * lw + k] = (y0 - sy) / grid.cellSizeY;
-      }
-    }
-    for (let py = 0; py < h; py++) {
-      const fj = (py + 0.5) / step, j = Math.min(lh - 2, Math.floor(fj)), tj = fj - j;
-      for (let px = 0; px < w; px++) {
-        const fk = (px + 0.5) / step, k = Math.min(lw - 2, Math.floor(fk)), tk = fk - k;
-        const a = j * lw + k, b = a + lw;
-        const c = (1 - tj) * ((1 - tk) * latticeC[a] + tk * latticeC[a + 1]) + tj * ((1 - tk) * latticeC[b] + tk * latticeC[b + 1]);
-        const r = (1 - tj) * ((1 - tk) * latticeR[a] + tk * latticeR[a + 1]) + tj * ((1 - tk) * latticeR[b] + tk * latticeR[b + 1]);
-        const ci = Math.floor(c), ri = Math.floor(r);
-        if (ci < 0 || ri < 0 || ci >= w || ri >= h) continue;
-        indices[py * w + px] = cells[ri * w + ci];
-      }
-    }
-  }
-  const sw = args.noWarp ? toWgs.converter.forward([mx0, my0]) : toMerc.converter.inverse([mx0, my0]);
-  const ne = args.noWarp ? toWgs.converter.forward([mx1, my1]) : toMerc.converter.inverse([mx1, my1]);
-  const swWgs = args.noWarp ? sw : toWgs.converter.forward(sw);
-  const neWgs = args.noWarp ? ne : toWgs.converter.forward(ne);
-  return {
-    ok: true,
-    png: encodePalettePng({ width: w, height: h, indices, palette: colourer.palette }),
-    width: w,
-    height: h,
-    bounds: { west: swWgs[0], south: swWgs[1], east: neWgs[0], north: neWgs[1] },
-    legend: colourer.legend,
-  };
+  const framed = pictureFrame(grid, args.noWarp === true);
+  if (!framed.ok) return framed;
+  const { colourer, painter } = painterFor(args);
+  // The rows' source cells first (kept for the run's other layers), then the scanlines.
+  const runs = frameRuns(framed.frame);
+  const lines = new PaletteScanlines(w, h, colourer.palette, { smooth: args.kind === 'hillshade' });
+  drawRows(runs, painter, lines);
+  return { ok: true, png: lines.toPng(), width: w, height: h, bounds: { ...framed.frame.bounds }, legend: colourer.legend };
 }
