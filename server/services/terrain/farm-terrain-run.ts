@@ -72,8 +72,8 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
   fields.forEach((f, idx) => (capByLabel[idx + 1] = f.typedSlopeLengthM ?? NaN));
 
   const layers: FarmTerrainOutput['layers'] = [];
-  const draw = (kind: LayerKind, values: RenderValues) => {
-    const r = renderLayer({ kind, grid: frame, values, slopeClasses });
+  const draw = (kind: LayerKind, values: RenderValues, scratch: Uint8Array) => {
+    const r = renderLayer({ kind, grid: frame, values, slopeClasses, scratch });
     if (!r.ok) throw new Error(`Could not draw the ${LAYER_LABELS[kind]} layer: ${r.reason}`);
     layers.push({ kind, png: r.png, bounds: r.bounds, legend: r.legend });
   };
@@ -81,25 +81,25 @@ export async function runFarmTerrain(input: FarmTerrainInput, onProgress: Progre
   const grids = runTerrainInPlace(dem, {
     fields: fieldRows,
     maxSlopeLengthMByLabel: capByLabel,
-    onRelief: (shade) => draw('hillshade', shade),
+    onRelief: (shade, scratch) => draw('hillshade', shade, scratch),
     onProgress: (f, stage) => onProgress(0.05 + 0.65 * f, stage),
   });
 
   onProgress(0.7, 'drawing map layers');
-  draw('slope-classes', grids.slopePct);
-  draw('ls', grids.ls);
-  draw('concentrated-flow', grids.contributingAreaM2);
+  // The spent directions' buffer holds each picture's scanlines in turn.
+  draw('slope-classes', grids.slopePct, grids.spare);
+  draw('ls', grids.ls, grids.spare);
+  draw('concentrated-flow', grids.contributingAreaM2, grids.spare);
 
   onProgress(0.85, 'working out each field');
   const toWgs = converterBetween(dem.epsg, 4326);
   const figures = fields.flatMap((f) => {
     const rings = ringsByField.get(f.id);
     if (!rings) return [];
-    const s = fieldTerrainStats({ rings, grid: frame, slopePct: grids.slopePct, ls: grids.ls, contributingAreaM2: grids.contributingAreaM2, slopeClasses });
+    const s = fieldTerrainStats({ rings, grid: frame, slopePct: grids.slopePct, ls: grids.ls, contributingAreaM2: grids.contributingAreaM2, slopeClasses, maxFlowPoints: MAX_FLOW_POINTS });
     if (!s.ok) return [];
     const { cells: _cells, points, ...flow } = s.stats.concentratedFlow;
-    const step = Math.max(1, Math.ceil(points.length / MAX_FLOW_POINTS));
-    const pointsWgs84 = toWgs.ok ? points.filter((_, i) => i % step === 0).map((p) => toWgs.converter.forward(p) as [number, number]) : [];
+    const pointsWgs84 = toWgs.ok ? points.map((p) => toWgs.converter.forward(p) as [number, number]) : [];
     const stats: FieldTerrainFigures = { ...s.stats, concentratedFlow: { ...flow, points: pointsWgs84 }, cellSizeM: dem.rowCellSizeXM[0], epsg: dem.epsg };
     return [{ fieldId: f.id, stats }];
   });

@@ -23,6 +23,11 @@ export type ScanlineOptions = {
    * Huffman-coded. Default false: no filter.
    */
   smooth?: boolean;
+  /**
+   * A spent buffer to hold the scanlines instead of a new one (used when it is large enough;
+   * zeroed first), so a picture drawn in the middle of a run adds no full-size buffer.
+   */
+  scratch?: Uint8Array;
 };
 
 /**
@@ -60,7 +65,8 @@ export class PaletteScanlines {
     this.smooth = options.smooth === true && this.depth === 8;
     this.bytesPerRow = Math.ceil((width * this.depth) / 8);
     // Each row: the filter byte, then the indices packed high bits first.
-    this.raw = new Uint8Array((this.bytesPerRow + 1) * height);
+    const bytes = (this.bytesPerRow + 1) * height;
+    this.raw = options.scratch && options.scratch.length >= bytes ? options.scratch.subarray(0, bytes).fill(0) : new Uint8Array(bytes);
   }
 
   /** True when 8-bit rows are stored Sub-filtered (PNG specification 9.2, filter type 1). */

@@ -1,8 +1,8 @@
 // The farm job's terrain run in the DEM's own grid: the same stages as runTerrain (pipeline.ts),
 // ordered so that the elevations can be overwritten and every large buffer serves twice.
-//   1. shaded relief (1 byte) from the DEM, which the caller draws at once (onRelief), then slope
-//      as 2-byte codes (slope-and-relief.ts): drawn before the codes exist, the relief picture's
-//      scratch memory does not add to the run's peak;
+//   1. shaded relief (1 byte) from the DEM, which the caller draws at once (onRelief) with the
+//      slope codes' buffer as the picture's scratch, then slope as 2-byte codes into that buffer
+//      (slope-and-relief.ts);
 //   2. Priority-Flood+ε fill in place, the relief's buffer reused for the closed flags, which
 //      become the D8 directions;
 //   3. contributing area into the filled grid (where water gathers → a 1-bit mask), then again
@@ -31,8 +31,11 @@ export type InPlaceOptions = {
   maxSlopeLengthMByLabel?: Float64Array;
   /** Contributing area at which flow counts as concentrated, m². Default 10 000 m² (1 ha). */
   concentratedFlowMinAreaM2?: number;
-  /** Given the shaded relief (0 = nodata) before its buffer is reused: draw it here. */
-  onRelief?: (shade: Uint8Array) => void;
+  /**
+   * Given the shaded relief (0 = nodata) before its buffer is reused: draw it here. `scratch` is
+   * the slope codes' buffer before they are made (2 bytes per cell), free for the picture's scanlines.
+   */
+  onRelief?: (shade: Uint8Array, scratch: Uint8Array) => void;
 };
 
 export type InPlaceGrids = {
@@ -42,6 +45,8 @@ export type InPlaceGrids = {
   contributingAreaM2: ContributingAreaMask;
   /** LS per cell: the DEM's own grid (dem.elevationM), now holding LS. */
   ls: Float32Array;
+  /** The directions' buffer (1 byte per cell), spent: free for the caller's scratch. */
+  spare: Uint8Array;
 };
 
 // Share of a typical run's time taken by each stage (scripts/bench-terrain-job.ts).
@@ -67,13 +72,13 @@ export function runTerrainInPlace(dem: DemGrid, options: InPlaceOptions = {}): I
   const z = dem.elevationM;
   progress(0, 'start');
 
-  // The relief first and drawn at once, while only it and the DEM are held; then the slope codes.
+  // The relief first, drawn at once with the codes' buffer as the picture's scratch; then the codes.
   const byteGrid = new Uint8Array(w * h); // the relief, then the closed flags, then the directions
+  const codes = new Uint16Array(w * h);
   if (options.onRelief) {
     slopeCodesAndRelief(dem, null, byteGrid);
-    options.onRelief(byteGrid);
+    options.onRelief(byteGrid, new Uint8Array(codes.buffer, codes.byteOffset, codes.byteLength));
   }
-  const codes = new Uint16Array(w * h);
   slopeCodesAndRelief(dem, codes, null);
   step('slope and relief');
 
@@ -103,5 +108,5 @@ export function runTerrainInPlace(dem: DemGrid, options: InPlaceOptions = {}): I
     maxSlopeLengthMByLabel: options.maxSlopeLengthMByLabel,
   });
   step('ls');
-  return { width: w, height: h, slopePct: new SlopePctGrid(codes), contributingAreaM2: flowMask, ls: z };
+  return { width: w, height: h, slopePct: new SlopePctGrid(codes), contributingAreaM2: flowMask, ls: z, spare: dir };
 }

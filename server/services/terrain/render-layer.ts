@@ -37,6 +37,8 @@ export type RenderArgs = {
   concentratedFlowMinAreaM2?: number;
   /** Colour the grid as it is (no resampling); bounds are then the grid corners' envelope. */
   noWarp?: boolean;
+  /** A spent buffer the PNG's scanlines may be written into (palette-png.ts); not read. */
+  scratch?: Uint8Array;
 };
 
 export type RenderResult =
@@ -165,7 +167,7 @@ export function renderLayer(args: RenderArgs): RenderResult {
   const { colourer, painter } = painterFor(args);
   // The rows' source cells first (kept for the run's other layers), then the scanlines.
   const runs = frameRuns(framed.frame);
-  const lines = new PaletteScanlines(w, h, colourer.palette, { smooth: args.kind === 'hillshade' });
+  const lines = new PaletteScanlines(w, h, colourer.palette, { smooth: args.kind === 'hillshade', scratch: args.scratch });
   drawRows(runs, painter, lines);
   return { ok: true, png: lines.toPng(), width: w, height: h, bounds: { ...framed.frame.bounds }, legend: colourer.legend };
 }
