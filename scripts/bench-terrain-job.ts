@@ -57,7 +57,7 @@ type JobRun = {
   wholeMs: number;
   inThreadMs: number;
   cpuMs: number;
-  stages: Array<{ stage: string; ms: number }>;
+  stages: Array<{ stage: string; ms: number; peakRssBytes: number }>;
   fields: number;
   fieldsWithFigures: number;
   layerBytes: number;
@@ -153,6 +153,12 @@ const lines = [
   `| stage | ${results.map((r) => `${r.n}×${r.n}`).join(' | ')} |`,
   `|---|${results.map(() => '---:').join('|')}|`,
   ...stageRows(results[0].jobs).map((s, i) => `| ${s.name} | ${results.map((r) => fmt(stageRows(r.jobs)[i].ms)).join(' | ')} |`),
+  '',
+  'Peak RSS of the process so far at the end of each stage (B/cell, the largest of the runs; the thread reports a stage as it ends):',
+  '',
+  `| stage | ${results.map((r) => `${r.n}×${r.n}`).join(' | ')} |`,
+  `|---|${results.map(() => '---:').join('|')}|`,
+  ...stageRows(results[0].jobs).map((s, i) => `| ${s.name} | ${results.map((r) => fmt(Math.max(...r.jobs.map((j) => j.stages[i].peakRssBytes)) / (r.n * r.n), 1)).join(' | ')} |`),
   '',
   ...(results.length > 1
     ? [`Growth of the in-process job from ${results[0].n}² to ${results.at(-1)!.n}² cells: ×${fmt(median(results.at(-1)!.jobs.map((j) => j.wholeMs)) / median(results[0].jobs.map((j) => j.wholeMs)), 1)} (n·log n would give ×${fmt(nLogNGrowth(results[0].n ** 2, results.at(-1)!.n ** 2), 1)}).`]

@@ -31,21 +31,28 @@ const bytes = readFileSync(file);
 const demBytes = (bytes.byteOffset === 0 && bytes.byteLength === bytes.buffer.byteLength ? bytes.buffer : bytes.buffer.slice(bytes.byteOffset, bytes.byteOffset + bytes.byteLength)) as ArrayBuffer;
 // Progress names the stage just finished (pipeline-in-place.ts); 'decoding', 'drawing map layers' and 'working out each field' name the one starting.
 const at = new Map<string, number>();
-const out = await runFarmTerrainInThread({ demBytes, fields, slopeClasses: [...DEFAULT_SLOPE_CLASSES] }, (_f, stage) => at.set(stage, performance.now() - t0));
+// The process's peak RSS so far, as each stage ends (progress messages arrive as the thread posts them).
+const peakRssAt = new Map<string, number>();
+const out = await runFarmTerrainInThread({ demBytes, fields, slopeClasses: [...DEFAULT_SLOPE_CLASSES] }, (_f, stage) => {
+  at.set(stage, performance.now() - t0);
+  peakRssAt.set(stage, process.resourceUsage().maxRSS * 1024);
+});
 const wholeMs = performance.now() - t0;
 const cpu = process.cpuUsage(cpu0);
 const between = (from: string, to: string) => (at.get(to) ?? wholeMs) - (at.get(from) ?? 0);
+const maxRssBytes = process.resourceUsage().maxRSS * 1024;
+const stage = (name: string, from: string, to: string) => ({ stage: name, ms: between(from, to), peakRssBytes: to ? (peakRssAt.get(to) ?? maxRssBytes) : maxRssBytes });
 const stages = [
-  { stage: 'start thread, read file', ms: between('', 'decoding') },
-  { stage: 'decode', ms: between('decoding', 'read') },
-  { stage: 'field outlines to cells', ms: between('read', 'start') },
-  { stage: 'relief and its picture, slope', ms: between('start', 'slope and relief') },
-  { stage: 'fill', ms: between('slope and relief', 'fill') },
-  { stage: 'flow directions (D8)', ms: between('fill', 'flow-direction') },
-  { stage: 'contributing area, twice', ms: between('flow-direction', 'flow-accumulation') },
-  { stage: 'LS', ms: between('flow-accumulation', 'ls') },
-  { stage: 'three other map pictures', ms: between('drawing map layers', 'working out each field') },
-  { stage: "each field's figures, hand-back", ms: between('working out each field', '') },
+  stage('start thread, read file', '', 'decoding'),
+  stage('decode', 'decoding', 'read'),
+  stage('field outlines to cells', 'read', 'start'),
+  stage('relief and its picture, slope', 'start', 'slope and relief'),
+  stage('fill', 'slope and relief', 'fill'),
+  stage('flow directions (D8)', 'fill', 'flow-direction'),
+  stage('contributing area, twice', 'flow-direction', 'flow-accumulation'),
+  stage('LS', 'flow-accumulation', 'ls'),
+  stage('three other map pictures', 'drawing map layers', 'working out each field'),
+  stage("each field's figures, hand-back", 'working out each field', ''),
 ];
 console.log(JSON.stringify({
   wholeMs,
@@ -62,6 +69,6 @@ console.log(JSON.stringify({
   // RSS of the process before the job (Node and the modules loaded), and with the thread started.
   baselineRssBytes,
   threadRssBytes,
-  maxRssBytes: process.resourceUsage().maxRSS * 1024,
+  maxRssBytes,
 }));
 process.exit(0);

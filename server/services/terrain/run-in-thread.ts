@@ -15,6 +15,13 @@ import type { ProgressFn } from './types';
 
 /** An idle thread is ended after this long (ms). */
 const IDLE_MS = 30_000;
+
+/**
+ * The thread's young generation, MB. Its work is in large typed arrays (outside the JS heap) and a
+ * few small objects per field; V8's default young generation (up to 16 MB semispaces) grew by
+ * ~20 MB of RSS at the end of a 16 M-cell run (scripts/bench-terrain-job.ts, per-stage RSS).
+ */
+const YOUNG_GENERATION_MB = 2;
 /** Running from TypeScript sources (tsx, vitest) rather than from a bundle. */
 const FROM_SOURCES = import.meta.url.endsWith('.ts');
 
@@ -25,7 +32,7 @@ let turn: Promise<unknown> = Promise.resolve();
 
 async function startThread(): Promise<Thread> {
   const file = FROM_SOURCES ? await terrainThreadFile() : new URL('./terrain-thread.mjs', import.meta.url);
-  const worker = new Worker(file, { execArgv: [] });
+  const worker = new Worker(file, { execArgv: [], resourceLimits: { maxYoungGenerationSizeMb: YOUNG_GENERATION_MB } });
   worker.unref(); // an idle thread never keeps the process alive
   const ready = new Promise<void>((resolve, reject) => {
     const onMessage = (m: ThreadMessage) => m.type === 'ready' && settle(resolve);
