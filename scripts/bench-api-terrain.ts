@@ -117,7 +117,7 @@ async function main(): Promise<void> {
       '# API during a terrain run',
       '',
       `Run with \`npm run bench:api-terrain\` (scripts/bench-api-terrain.ts) on ${cpu.length} × ${cpu[0]?.model.trim() ?? 'unknown CPU'}, Node ${process.version};`,
-      `load average ${idleLoad.toFixed(1)} while idle was sampled, ${loads.length ? `${Math.min(...loads).toFixed(1)}–${Math.max(...loads).toFixed(1)}` : 'not sampled'} during the run (other engineers' work shared the two cores).`,
+      `load average ${idleLoad.toFixed(1)} while idle was sampled, ${loads.length ? `${Math.min(...loads).toFixed(1)}–${Math.max(...loads).toFixed(1)}` : 'not sampled'} during the run (the benchmark's own client and the server share the two cores).`,
       'The real server started as `npm start` does (its own PostgreSQL cluster, throwaway DATA_DIR, demo seed, the job worker in',
       'the same process, the terrain computation in its worker thread). Sampled route: `GET /api/farms/:id/fields`, the demo farm\'s',
       `field list as its farmer (${fieldCount} fields, GeoJSON with areas and overlaps), from ${CONNECTIONS} connections in the benchmark's process,`,
