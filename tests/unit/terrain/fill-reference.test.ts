@@ -362,15 +362,17 @@ describe('monotone cell queue (radix heap)', () => {
     const q = new MonotoneCellQueue();
     const keyOfCell = new Map<number, number>();
     let last = keyOf(-50), pushed = 0, popped = 0, outOfOrder = 0;
+    const popOne = () => {
+      const cell = q.pop();
+      const key = keyOfCell.get(cell)!;
+      if (key < last) outOfOrder++;
+      last = key;
+      keyOfCell.delete(cell);
+      popped++;
+    };
     for (let step = 0; step < 200_000; step++) {
-      if (q.size > 0 && rnd() < 0.5) {
-        const cell = q.pop();
-        const key = keyOfCell.get(cell)!;
-        if (key < last) outOfOrder++;
-        last = key;
-        keyOfCell.delete(cell);
-        popped++;
-      } else {
+      if (q.size > 0 && rnd() < 0.5) popOne();
+      else {
         // near the last key most of the time (as in a flood), now and then far above it; ties often
         const v = rnd() < 0.9 ? Math.round(rnd() * 40) / 100 : rnd() * 200;
         f[0] = -50 + v;
@@ -379,14 +381,7 @@ describe('monotone cell queue (radix heap)', () => {
         keyOfCell.set(pushed++, key);
       }
     }
-    while (q.size > 0) {
-      const cell = q.pop();
-      const key = keyOfCell.get(cell)!;
-      if (key < last) outOfOrder++;
-      last = key;
-      keyOfCell.delete(cell);
-      popped++;
-    }
+    while (q.size > 0) popOne();
     expect(outOfOrder).toBe(0);
     expect(popped).toBe(pushed);
     expect(keyOfCell.size).toBe(0); // each cell came out once
