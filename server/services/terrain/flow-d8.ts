@@ -148,11 +148,11 @@ export function flowBreaksByRow(dir: Uint8Array, width: number, height: number, 
   if (height > 0) labelRow(0, here);
   for (let r = 0; r < height; r++) {
     if (r + 1 < height) labelRow(r + 1, below);
-    const rows = [above, here, below];
     for (let c = 0, i = r * width; c < width; c++, i++) {
       const d = dir[i] & 15;
       if (d === 0) continue;
-      if (rows[1 + D8_ROW[d]][c + D8_COL[d]] !== here[c]) bits[i >> 3] |= 1 << (i & 7);
+      const receiverRow = D8_ROW[d] < 0 ? above : D8_ROW[d] > 0 ? below : here;
+      if (receiverRow[c + D8_COL[d]] !== here[c]) bits[i >> 3] |= 1 << (i & 7);
     }
     const spare = above;
     above = here;
